@@ -1,0 +1,53 @@
+// The one place that says which role may do what (product.md, "Who uses it").
+// Every route guards itself with requireRole(action); the client only hides controls.
+
+export const ROLES = ['owner', 'engineer', 'drafter', 'manager'] as const;
+export type Role = (typeof ROLES)[number];
+
+export const ACTIONS = [
+  'project:read',
+  'project:write',
+  'project:delete',
+  'scheme:write',
+  'plan:write',
+  'marks:edit',
+  'export:read',
+  'scheme:status',
+  'comment:write',
+  'prices:edit',
+  'team:manage',
+  'outbox:read',
+  'audit:read',
+] as const;
+export type Action = (typeof ACTIONS)[number];
+
+const EVERY_ACTION: readonly Action[] = ACTIONS;
+
+const GRANTS: Record<Role, ReadonlySet<Action>> = {
+  // Owner: everything.
+  owner: new Set(EVERY_ACTION),
+  // Engineer: everything except team, roles and firm-wide prices.
+  engineer: new Set(
+    EVERY_ACTION.filter((a) => a !== 'team:manage' && a !== 'prices:edit'),
+  ),
+  // Drafter: reads, exports, renumbers marks; no geometry, loads or sizes.
+  drafter: new Set<Action>(['project:read', 'export:read', 'marks:edit']),
+  // Manager: reads everything, sets scheme status, comments, edits unit prices.
+  manager: new Set<Action>([
+    'project:read',
+    'export:read',
+    'scheme:status',
+    'comment:write',
+    'prices:edit',
+    'outbox:read',
+    'audit:read',
+  ]),
+};
+
+export function isRole(value: unknown): value is Role {
+  return typeof value === 'string' && (ROLES as readonly string[]).includes(value);
+}
+
+export function can(role: Role, action: Action): boolean {
+  return GRANTS[role]?.has(action) ?? false;
+}

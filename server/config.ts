@@ -1,0 +1,131 @@
+import { z } from 'zod';
+
+// Environment is parsed once at start-up; everything else receives a typed Config.
+
+const emptyToUndefined = (value: unknown) => (value === '' ? undefined : value);
+
+const booleanFlag = (name: string) =>
+  z.preprocess(
+    emptyToUndefined,
+    z
+      .enum(['true', 'false', '1', '0', 'yes', 'no'], {
+        error: `${name} must be one of true, false, 1, 0, yes, no`,
+      })
+      .transform((value) => value === 'true' || value === '1' || value === 'yes')
+      .optional(),
+  );
+
+const databaseUrl = z
+  .string()
+  .trim()
+  .refine(
+    (value) =>
+      /^sqlite:.+/.test(value) || /^postgres(ql)?:\/\/.+/.test(value),
+    'DATABASE_URL must start with sqlite: (e.g. sqlite:./data/baywright.sqlite or sqlite::memory:) or postgres://',
+  );
+
+const envSchema = z.object({
+  PORT: z.preprocess(
+    emptyToUndefined,
+    z.coerce
+      .number({ error: 'PORT must be a whole number between 1 and 65535' })
+      .int('PORT must be a whole number between 1 and 65535')
+      .min(1, 'PORT must be a whole number between 1 and 65535')
+      .max(65535, 'PORT must be a whole number between 1 and 65535')
+      .default(3000),
+  ),
+  DATABASE_URL: z.preprocess(emptyToUndefined, databaseUrl.default('sqlite:./data/baywright.sqlite')),
+  NODE_ENV: z.preprocess(
+    emptyToUndefined,
+    z
+      .enum(['development', 'production', 'test'], {
+        error: 'NODE_ENV must be development, production or test',
+      })
+      .default('development'),
+  ),
+  COOKIE_SECURE: booleanFlag('COOKIE_SECURE'),
+  RATE_LIMIT_RELAXED: booleanFlag('RATE_LIMIT_RELAXED'),
+  SEED_DEMO: booleanFlag('SEED_DEMO'),
+  UPLOAD_DIR: z.preprocess(emptyToUndefined, z.string().default('./data/uploads')),
+  SMTP_HOST: z.preprocess(emptyToUndefined, z.string().optional()),
+  SMTP_PORT: z.preprocess(
+    emptyToUndefined,
+    z.coerce
+      .number({ error: 'SMTP_PORT must be a whole number' })
+      .int('SMTP_PORT must be a whole number')
+      .min(1)
+      .max(65535)
+      .optional(),
+  ),
+  SMTP_USER: z.preprocess(emptyToUndefined, z.string().optional()),
+  SMTP_PASSWORD: z.preprocess(emptyToUndefined, z.string().optional()),
+  SMTP_FROM: z.preprocess(
+    emptyToUndefined,
+    z.email({ error: 'SMTP_FROM must be an email address' }).optional(),
+  ),
+});
+
+export type NodeEnv = 'development' | 'production' | 'test';
+
+export interface SmtpConfig {
+  host: string;
+  port: number;
+  user?: string;
+  password?: string;
+  from: string;
+}
+
+export interface Config {
+  port: number;
+  databaseUrl: string;
+  nodeEnv: NodeEnv;
+  cookieSecure: boolean;
+  rateLimitRelaxed: boolean;
+  seedDemo: boolean;
+  uploadDir: string;
+  /** null when SMTP_HOST is unset: mail goes to the outbox only. */
+  smtp: SmtpConfig | null;
+}
+
+export class ConfigError extends Error {
+  constructor(public readonly problems: string[]) {
+    super(`Invalid environment:\n${problems.map((p) => `  - ${p}`).join('\n')}`);
+    this.name = 'ConfigError';
+  }
+}
+
+export function loadConfig(env: Record<string, string | undefined> = process.env): Config {
+  const parsed = envSchema.safeParse(env);
+  if (!parsed.success) {
+    const problems = parsed.error.issues.map((issue) => {
+      const name = String(issue.path[0] ?? 'environment');
+      const raw = env[name];
+      const shown = raw === undefined ? '' : ` (got ${JSON.stringify(raw)})`;
+      const message = issue.message.startsWith(name) ? issue.message : `${name}: ${issue.message}`;
+      return `${message}${shown}`;
+    });
+    throw new ConfigError(problems);
+  }
+  const e = parsed.data;
+  if (e.SMTP_HOST && !e.SMTP_FROM) {
+    throw new ConfigError(['SMTP_FROM: required when SMTP_HOST is set']);
+  }
+  return {
+    port: e.PORT,
+    databaseUrl: e.DATABASE_URL,
+    nodeEnv: e.NODE_ENV,
+    cookieSecure: e.COOKIE_SECURE ?? e.NODE_ENV === 'production',
+    rateLimitRelaxed: e.RATE_LIMIT_RELAXED ?? false,
+    seedDemo: e.SEED_DEMO ?? true,
+    uploadDir: e.UPLOAD_DIR,
+    smtp: e.SMTP_HOST
+      ? {
+          host: e.SMTP_HOST,
+          port: e.SMTP_PORT ?? 587,
+          user: e.SMTP_USER,
+          password: e.SMTP_PASSWORD,
+          from: e.SMTP_FROM as string,
+        }
+      : null,
+  };
+}

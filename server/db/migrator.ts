@@ -1,0 +1,28 @@
+import type { QueryInterface, Sequelize } from 'sequelize';
+import { SequelizeStorage, Umzug, type MigrationFn } from 'umzug';
+import * as m0001 from './migrations/0001-accounts';
+import * as m0002 from './migrations/0002-projects';
+
+export type Migration = MigrationFn<QueryInterface>;
+
+// Ordered list, explicit so it works the same under tsx, vitest and a bundler.
+// Add new migrations at the end; never edit one that has shipped.
+const MIGRATIONS: { name: string; up: Migration; down: Migration }[] = [
+  { name: '0001-accounts', ...m0001 },
+  { name: '0002-projects', ...m0002 },
+];
+
+export function createMigrator(sequelize: Sequelize) {
+  return new Umzug({
+    migrations: MIGRATIONS,
+    context: sequelize.getQueryInterface(),
+    storage: new SequelizeStorage({ sequelize, tableName: 'schema_migrations' }),
+    logger: undefined,
+  });
+}
+
+/** Applies every pending migration; returns the names applied. */
+export async function migrateToLatest(sequelize: Sequelize): Promise<string[]> {
+  const applied = await createMigrator(sequelize).up();
+  return applied.map((m) => m.name);
+}

@@ -1,0 +1,27 @@
+import express, { Router } from 'express';
+import type { AppContext } from '../app-context';
+import { loadSession } from '../auth/auth.middleware';
+import { requireSameOrigin } from '../middleware/csrf.middleware';
+import { apiNotFound } from '../middleware/error.middleware';
+import { firmsRoutes } from './firms.routes';
+import { healthRoutes } from './health.routes';
+import { projectsRoutes } from './projects.routes';
+import { sessionRoutes } from './session.routes';
+
+export const JSON_BODY_LIMIT = '2mb';
+
+/** Everything under /api. Add a feature's router here (and its rows to the route table). */
+export function apiRoutes(ctx: AppContext): Router {
+  const api = Router();
+  api.use(requireSameOrigin);
+  api.use(express.json({ limit: JSON_BODY_LIMIT }));
+  api.use(loadSession(ctx));
+
+  api.use('/health', healthRoutes());
+  api.use('/session', sessionRoutes(ctx));
+  api.use('/firms', firmsRoutes(ctx));
+  api.use('/projects', projectsRoutes(ctx));
+
+  api.use(apiNotFound);
+  return api;
+}
