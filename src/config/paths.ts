@@ -1,0 +1,45 @@
+// Every route of the client and the link builder for it. Components link through here,
+// never through hand-written strings.
+
+export const paths = {
+  home: { path: '/', href: () => '/' },
+  signIn: {
+    path: '/signin',
+    href: (next?: string | null) =>
+      next && next !== '/' ? `/signin?next=${encodeURIComponent(next)}` : '/signin',
+  },
+  signUp: { path: '/signup', href: () => '/signup' },
+  projects: { path: '/projects', href: () => '/projects' },
+  newProject: { path: '/projects/new', href: () => '/projects/new' },
+  project: {
+    path: '/projects/:projectId',
+    href: (projectId: string | number) => `/projects/${encodeURIComponent(String(projectId))}`,
+  },
+  projectPlan: {
+    path: '/projects/:projectId/plan',
+    href: (projectId: string | number) => `${paths.project.href(projectId)}/plan`,
+  },
+  projectSchedule: {
+    path: '/projects/:projectId/schedule',
+    href: (projectId: string | number) => `${paths.project.href(projectId)}/schedule`,
+  },
+  projectTonnage: {
+    path: '/projects/:projectId/tonnage',
+    href: (projectId: string | number) => `${paths.project.href(projectId)}/tonnage`,
+  },
+  projectDetails: {
+    path: '/projects/:projectId/details',
+    href: (projectId: string | number) => `${paths.project.href(projectId)}/details`,
+  },
+  settings: { path: '/settings', href: () => '/settings' },
+  team: { path: '/settings/team', href: () => '/settings/team' },
+} as const;
+
+/** A `next` value is followed only when it is a path inside this app. */
+export function safeNextPath(next: string | null | undefined): string {
+  if (!next || !next.startsWith('/') || next.startsWith('//') || next.startsWith('/\\')) {
+    return paths.projects.href();
+  }
+  if (next === paths.signIn.path || next === paths.signUp.path) return paths.projects.href();
+  return next;
+}

@@ -1,0 +1,64 @@
+import { FormAlert } from '../components/ui/form-alert.ui';
+import { PageHeader } from '../components/ui/page-header.ui';
+import { useCurrentSession } from '../features/auth/hooks/use-current-session.hook';
+import { canManageTeam, ROLE_LABELS, ROLE_SUMMARIES, ROLES } from '../lib/permissions';
+
+export default function TeamRoute() {
+  const session = useCurrentSession();
+  if (!canManageTeam(session.role)) {
+    return (
+      <div className="flex flex-col gap-6">
+        <title>Team · Baywright</title>
+        <PageHeader title="Team" />
+        <FormAlert tone="notice">Only the firm’s owner manages the team.</FormAlert>
+      </div>
+    );
+  }
+  return (
+    <div className="flex flex-col gap-6">
+      <title>Team · Baywright</title>
+      <PageHeader
+        eyebrow={session.firm.name}
+        title="Team"
+        description={
+          <>
+            You are this firm’s <strong className="font-medium text-ink">{ROLE_LABELS[session.role].toLowerCase()}</strong>.
+            The list of people and invitations will be shown here.
+          </>
+        }
+      />
+      <section aria-labelledby="roles-heading" className="flex flex-col gap-3">
+        <h2 id="roles-heading" className="text-lg font-semibold">
+          Roles in {session.firm.name}
+        </h2>
+        <div className="overflow-x-auto border border-ink/80 bg-paper-raised">
+          <table className="w-full text-left text-sm">
+            <thead>
+              <tr className="border-b border-ink/80 bg-paper-sunk/60">
+                <th scope="col" className="label-caps w-32 px-4 py-2.5 font-normal">Role</th>
+                <th scope="col" className="label-caps px-4 py-2.5 font-normal">Does</th>
+                <th scope="col" className="label-caps px-4 py-2.5 font-normal">May not</th>
+              </tr>
+            </thead>
+            <tbody>
+              {ROLES.map((role) => (
+                <tr
+                  key={role}
+                  aria-current={role === session.role ? 'true' : undefined}
+                  className={`border-b border-line last:border-b-0 ${role === session.role ? 'bg-accent-wash/60' : ''}`}
+                >
+                  <th scope="row" className="px-4 py-3 font-medium">
+                    {ROLE_LABELS[role]}
+                    {role === session.role ? <span className="label-caps ml-2 text-accent-strong">you</span> : null}
+                  </th>
+                  <td className="px-4 py-3 text-ink-soft">{ROLE_SUMMARIES[role].does}</td>
+                  <td className="px-4 py-3 text-ink-soft">{ROLE_SUMMARIES[role].mayNot}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
+      </section>
+    </div>
+  );
+}

@@ -1,0 +1,10 @@
+import '@testing-library/jest-dom/vitest';
+import 'vitest-canvas-mock';
+import { cleanup } from '@testing-library/react';
+import { afterEach, vi } from 'vitest';
+
+afterEach(() => {
+  cleanup();
+  vi.unstubAllGlobals();
+  vi.restoreAllMocks();
+});
