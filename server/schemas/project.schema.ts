@@ -21,7 +21,14 @@ export const projectCreateBody = z.object({
   address: optionalText('Address', 300),
   description: optionalText('Description', 4000),
 });
-export type ProjectCreateInput = z.output<typeof projectCreateBody>;
+/** Optional text fields: undefined = not given, null = empty. */
+export interface ProjectCreateInput {
+  name: string;
+  number?: string | null;
+  client?: string | null;
+  address?: string | null;
+  description?: string | null;
+}
 
 export const projectPatchBody = z
   .object({
@@ -34,4 +41,4 @@ export const projectPatchBody = z
   .refine((v) => Object.values(v).some((x) => x !== undefined), {
     error: 'Give at least one field to change',
   });
-export type ProjectPatchInput = z.output<typeof projectPatchBody>;
+export type ProjectPatchInput = Partial<ProjectCreateInput>;
