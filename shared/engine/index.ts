@@ -1,0 +1,20 @@
+// Public entry of the Baywright calculation engine (pure TypeScript). A plain list of exports.
+export type { LoadCase, LoadCombination, LoadFactors } from './loads/combinations';
+export { LOAD_CASES, loadCombinations } from './loads/combinations';
+export type { MemberLoad } from './analysis/member-load.types';
+export type {
+  AlternativeShape, Bracing, CaseReactions, CheckName, DiagramSeries, MemberCheck, MemberDesignInput,
+  MemberDesignResult, MemberDiagrams, MemberSegment,
+} from './sizing/member-design.types';
+export { designMember, memberAlternatives, candidateShapes } from './sizing/member-design';
+export { memberDiagrams } from './sizing/member-diagrams';
+export { MemberInputError, memberInputProblems, formatProblem, formatProblemPath } from './sizing/member-input.validation';
+export type { InputProblem } from './sizing/member-input.validation';
+export { STANDARDS, CAUTION } from './sizing/member-result.builder';
+export {
+  maxMomentKipFt, maxShearKip, reactionsKip, momentKipFt, shearKip, deflectionEIKipFt3, toSpanLoading, stations,
+} from './analysis/simple-span.analysis';
+export type { SpanLoading, Station } from './analysis/simple-span.analysis';
+export { computeWShapeConstants, shapeConstantsFor, shapeConstantsByWeight, nominalFlexure } from './design/aisc360/w-shape-constants';
+export type { WShapeConstants, NominalFlexure } from './design/aisc360/w-shape-constants';
+export { E_KSI } from './units/units.constants';

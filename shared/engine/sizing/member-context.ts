@@ -1,0 +1,229 @@
+import {
+  criticalPointsFt, deflectionEIKipFt3, intensityKlf, momentKipFt, reactionsKip, shearKip, toSpanLoading,
+  uniformDeflectionEI, uniformMomentKipFt, type SpanLoading,
+} from '../analysis/simple-span.analysis';
+import { LOAD_CASES, loadCombinations, type LoadCase, type LoadCombination } from '../loads/combinations';
+import type { MemberDesignInput } from './member-design.types';
+
+/** Equal intervals for deflection stations; the maximum is refined by a parabola through the top three. */
+export const DEFLECTION_INTERVALS = 100;
+
+export interface FlexureSegment {
+  aFt: number;
+  bFt: number;
+  lbFt: number;
+  /** Cb fixed at 1.0 (continuous bracing or Lb override), else null: Eq. F1-1 per combination. */
+  cbFixed: number | null;
+}
+
+/** One combination, evaluated once per member at the critical points and segment points. */
+export interface CombinationData {
+  combo: LoadCombination;
+  fD: number;
+  vRight: Float64Array;
+  vLeft: Float64Array;
+  m: Float64Array;
+  qRight: Float64Array;
+  qLeft: Float64Array;
+  /** Moments at a, a+l/4, a+l/2, a+3l/4, b for every segment (5 per segment), without self weight. */
+  segM: Float64Array;
+  rStartKip: number;
+  rEndKip: number;
+}
+
+/**
+ * Everything about a member that does not depend on the shape, computed once per member:
+ * per-case analysis at the critical points, combined linearly per combination. The shape only
+ * adds its self weight, a full uniform D load whose contribution is closed form.
+ */
+export interface MemberContext {
+  input: MemberDesignInput;
+  spanFt: number;
+  method: 'LRFD' | 'ASD';
+  fyKsi: number;
+  includeSelfWeight: boolean;
+  casesPresent: LoadCase[];
+  caseLoading: Record<LoadCase, SpanLoading>;
+  caseReactions: Record<LoadCase, { startKip: number; endKip: number }>;
+  combos: CombinationData[];
+  xs: Float64Array;
+  /** Unit (1 klf) uniform-load shear and moment at the critical points. */
+  v1: Float64Array;
+  m1: Float64Array;
+  segments: FlexureSegment[];
+  m1Seg: Float64Array;
+  /** Deflection stations and EI·y (kip·ft³) there. */
+  deflX: Float64Array;
+  deflUnit: Float64Array;
+  deflTotalBase: Float64Array;
+  /** Largest EI·y under any one transient case alone (L, Lr or S) and which. */
+  liveMaxEI: number;
+  liveMaxAtFt: number;
+  liveCase: LoadCase | null;
+  /** Lower bounds used to skip shapes cheaply (no self weight). */
+  mMaxNoSwKipFt: number;
+  vMaxNoSwKip: number;
+  totalMaxNoSwEI: number;
+}
+
+function segmentsFor(input: MemberDesignInput): FlexureSegment[] {
+  const L = input.span_ft;
+  const override = input.Lb_override_ft;
+  if (input.bracing === 'continuous') {
+    return [{ aFt: 0, bFt: L, lbFt: override ?? 0, cbFixed: 1 }];
+  }
+  const pts = input.bracing === 'none' ? [] : input.bracing.points_ft.filter((x) => x > 1e-9 && x < L - 1e-9);
+  const xs = [0, ...[...new Set(pts)].sort((a, b) => a - b), L];
+  const segs: FlexureSegment[] = [];
+  for (let i = 0; i + 1 < xs.length; i++) {
+    if (xs[i + 1] - xs[i] <= 1e-9) continue;
+    segs.push(override != null
+      ? { aFt: xs[i], bFt: xs[i + 1], lbFt: override, cbFixed: 1 }
+      : { aFt: xs[i], bFt: xs[i + 1], lbFt: xs[i + 1] - xs[i], cbFixed: null });
+  }
+  return segs;
+}
+
+/** Max of a sampled curve, refined by the parabola through the top three samples. */
+export function refinedMax(y: ArrayLike<number>, x: ArrayLike<number>): { value: number; at: number } {
+  let i = 0;
+  for (let k = 1; k < y.length; k++) if (y[k] > y[i]) i = k;
+  if (i === 0 || i === y.length - 1) return { value: y[i], at: x[i] };
+  const y0 = y[i - 1], y1 = y[i], y2 = y[i + 1];
+  const den = y0 - 2 * y1 + y2;
+  if (!(den < 0)) return { value: y1, at: x[i] };
+  const h = x[i + 1] - x[i];
+  const t = (0.5 * (y0 - y2)) / den;
+  return { value: y1 - ((y0 - y2) * (y0 - y2)) / (8 * den), at: x[i] + t * h };
+}
+
+export function buildMemberContext(input: MemberDesignInput): MemberContext {
+  const L = input.span_ft;
+  const byCase = { D: [], L: [], Lr: [], S: [] } as Record<LoadCase, MemberDesignInput['loads']>;
+  for (const l of input.loads) byCase[l.case].push(l);
+  const caseLoading = {} as Record<LoadCase, SpanLoading>;
+  const caseReactions = {} as Record<LoadCase, { startKip: number; endKip: number }>;
+  const present = new Set<LoadCase>();
+  for (const c of LOAD_CASES) {
+    caseLoading[c] = toSpanLoading(L, byCase[c]);
+    caseReactions[c] = reactionsKip(caseLoading[c]);
+    const hasLoad = byCase[c].some((l) => (l.kind === 'point' ? l.P_kip : l.kind === 'linear' ? l.w1_klf + l.w2_klf : l.w_klf) > 0);
+    if (hasLoad) present.add(c);
+  }
+  if (input.includeSelfWeight) present.add('D');
+  const casesPresent = LOAD_CASES.filter((c) => present.has(c));
+  const comboList = loadCombinations(input.method, casesPresent, { liveLoadFactorHalf: input.liveLoadFactorHalf });
+
+  // Critical points of all cases together: between them every case's q is linear.
+  const all = toSpanLoading(L, input.loads);
+  const xsArr = criticalPointsFt(all);
+  const n = xsArr.length;
+  const xs = Float64Array.from(xsArr);
+  const segments = segmentsFor(input);
+  const segX: number[] = [];
+  for (const s of segments) {
+    const l = s.bFt - s.aFt;
+    segX.push(s.aFt, s.aFt + l / 4, s.aFt + l / 2, s.aFt + (3 * l) / 4, s.bFt);
+  }
+
+  // Per-case values at the critical points and segment points (shape independent).
+  type CaseVals = { vR: number[]; vL: number[]; m: number[]; qR: number[]; qL: number[]; segM: number[] };
+  const caseVals = {} as Record<LoadCase, CaseVals>;
+  for (const c of casesPresent) {
+    const s = caseLoading[c];
+    const r = caseReactions[c].startKip;
+    caseVals[c] = {
+      vR: xsArr.map((x) => shearKip(s, x, 1, r)),
+      vL: xsArr.map((x, k) => (k === 0 ? r : shearKip(s, x, -1, r))),
+      m: xsArr.map((x) => momentKipFt(s, x, r)),
+      qR: xsArr.map((x) => intensityKlf(s, x, 1)),
+      qL: xsArr.map((x) => intensityKlf(s, x, -1)),
+      segM: segX.map((x) => momentKipFt(s, x, r)),
+    };
+  }
+  const combos: CombinationData[] = comboList.map((combo) => {
+    const d: CombinationData = {
+      combo, fD: combo.factors.D,
+      vRight: new Float64Array(n), vLeft: new Float64Array(n), m: new Float64Array(n),
+      qRight: new Float64Array(n), qLeft: new Float64Array(n), segM: new Float64Array(segX.length),
+      rStartKip: 0, rEndKip: 0,
+    };
+    for (const c of casesPresent) {
+      const f = combo.factors[c];
+      if (f === 0) continue;
+      const v = caseVals[c];
+      for (let k = 0; k < n; k++) {
+        d.vRight[k] += f * v.vR[k]; d.vLeft[k] += f * v.vL[k]; d.m[k] += f * v.m[k];
+        d.qRight[k] += f * v.qR[k]; d.qLeft[k] += f * v.qL[k];
+      }
+      for (let j = 0; j < segX.length; j++) d.segM[j] += f * v.segM[j];
+      d.rStartKip += f * caseReactions[c].startKip;
+      d.rEndKip += f * caseReactions[c].endKip;
+    }
+    return d;
+  });
+
+  const v1 = Float64Array.from(xsArr, (x) => L / 2 - x);
+  const m1 = Float64Array.from(xsArr, (x) => uniformMomentKipFt(1, L, x));
+  const m1Seg = Float64Array.from(segX, (x) => uniformMomentKipFt(1, L, x));
+
+  // Deflection stations (unfactored): total = all cases together; live = each transient case alone.
+  const N = DEFLECTION_INTERVALS;
+  const deflX = Float64Array.from({ length: N + 1 }, (_, i) => (L * i) / N);
+  const deflUnit = deflX.map((x) => uniformDeflectionEI(1, L, x));
+  const deflTotalBase = new Float64Array(N + 1);
+  let liveMaxEI = 0;
+  let liveMaxAtFt = L / 2;
+  let liveCase: LoadCase | null = null;
+  for (const c of casesPresent) {
+    const s = caseLoading[c];
+    if (s.pieces.length === 0 && s.points.length === 0) continue;
+    const y = deflX.map((x) => deflectionEIKipFt3(s, x));
+    for (let i = 0; i <= N; i++) deflTotalBase[i] += y[i];
+    if (c !== 'D') {
+      const mx = refinedMax(y, deflX);
+      if (liveCase === null || mx.value > liveMaxEI) { liveMaxEI = mx.value; liveMaxAtFt = mx.at; liveCase = c; }
+    }
+  }
+
+  const ctx: MemberContext = {
+    input, spanFt: L, method: input.method, fyKsi: input.Fy_ksi, includeSelfWeight: input.includeSelfWeight,
+    casesPresent, caseLoading, caseReactions, combos, xs, v1, m1, segments, m1Seg,
+    deflX, deflUnit, deflTotalBase, liveMaxEI, liveMaxAtFt, liveCase,
+    mMaxNoSwKipFt: 0, vMaxNoSwKip: 0, totalMaxNoSwEI: refinedMax(deflTotalBase, deflX).value,
+  };
+  for (const c of combos) {
+    ctx.mMaxNoSwKipFt = Math.max(ctx.mMaxNoSwKipFt, maxMomentOfCombination(ctx, c, 0).mKipFt);
+    ctx.vMaxNoSwKip = Math.max(ctx.vMaxNoSwKip, c.rStartKip, c.rEndKip);
+  }
+  return ctx;
+}
+
+/**
+ * Maximum moment of a combination plus a factored self weight wsKlf (full uniform): M is concave
+ * (downward loads), so the maximum is at the zero of V; between critical points q is linear, V
+ * quadratic and M cubic, so it is exact.
+ */
+export function maxMomentOfCombination(ctx: MemberContext, c: CombinationData, wsKlf: number): { mKipFt: number; xFt: number } {
+  const { xs, v1, m1 } = ctx;
+  const n = xs.length;
+  for (let k = 0; k < n; k++) {
+    const vR = c.vRight[k] + wsKlf * v1[k];
+    if (vR > 0) continue;
+    if (k === 0) return { mKipFt: c.m[0] + wsKlf * m1[0], xFt: xs[0] };
+    const vL = c.vLeft[k] + wsKlf * v1[k];
+    if (vL >= 0) return { mKipFt: c.m[k] + wsKlf * m1[k], xFt: xs[k] };
+    const x0 = xs[k - 1];
+    const h = xs[k] - x0;
+    const v0 = c.vRight[k - 1] + wsKlf * v1[k - 1];
+    const q0 = c.qRight[k - 1] + wsKlf;
+    const q1 = c.qLeft[k] + wsKlf;
+    const disc = Math.max(0, q0 * q0 + (2 * (q1 - q0) * v0) / h);
+    const den = q0 + Math.sqrt(disc);
+    let t = den > 0 ? (2 * v0) / den : h;
+    t = t < 0 ? 0 : t > h ? h : t;
+    const m0 = c.m[k - 1] + wsKlf * m1[k - 1];
+    return { mKipFt: m0 + v0 * t - (q0 * t * t) / 2 - ((q1 - q0) * t * t * t) / (6 * h), xFt: x0 + t };
+  }
+  return { mKipFt: 0, xFt: 0 };
+}
