@@ -1,0 +1,288 @@
+/**
+ * Framing topology: what each member end lands on, found from geometry (design-basis §2:
+ * "Every member end lands on a support: a column, another member, or a bearing wall").
+ * Bearing walls are not modelled in plan version 1.
+ *
+ * Order: a topological sort of "is supported by" with carried members first, so a member is
+ * designed after every member that frames into it (its reactions then include theirs).
+ */
+import type { Plan, PlanMember } from '../../schemas/plan.schema';
+import { planProblem, type PlanProblem } from '../../schemas/plan-problem.schema';
+import { distanceFt, projectPointOnSegment, type Point } from './polygon.geometry';
+import { SegmentGridIndex } from './spatial-index.geometry';
+
+/** Two points closer than this (plan feet) coincide; a member end this close to a support bears on it. */
+export const SUPPORT_TOLERANCE_FT = 0.01;
+
+/** Bucket size of the spatial index, ft: about a bay, so each query sees a handful of members. */
+const INDEX_CELL_FT = 10;
+
+export type MemberEnd = 'start' | 'end';
+
+export type EndSupport =
+  | { kind: 'column'; id: string }
+  /** position_ft is measured along the supporting member from its start. */
+  | { kind: 'member'; id: string; position_ft: number }
+  | { kind: 'none' };
+
+export interface FramingMember {
+  id: string;
+  member: PlanMember;
+  level: string;
+  start: Point;
+  end: Point;
+  span_ft: number;
+  /** Unit vector start → end. */
+  direction: Point;
+  supports: Record<MemberEnd, EndSupport>;
+  /** Members whose ends bear on this member, with the position along this member. */
+  carries: { memberId: string; end: MemberEnd; position_ft: number }[];
+}
+
+export interface FramingTopology {
+  members: Map<string, FramingMember>;
+  /** Carried members first; members in a support cycle are left out (and reported). */
+  order: string[];
+  /** Members left out of the framing entirely (zero length, duplicate, overlapping, unknown level). */
+  excluded: Set<string>;
+  problems: PlanProblem[];
+  /** Spatial indexes per level, for "what is at this point" queries. */
+  memberIndex: Map<string, SegmentGridIndex<FramingMember>>;
+  columnIndex: Map<string, SegmentGridIndex<PlacedColumn>>;
+}
+
+export interface PlacedColumn {
+  id: string;
+  at: Point;
+}
+
+const fmt = (p: Point) => `(${+p[0].toFixed(3)}, ${+p[1].toFixed(3)})`;
+
+export function memberSpanFt(m: Pick<PlanMember, 'start' | 'end'>): number {
+  return distanceFt(m.start, m.end);
+}
+
+/** Collinear with an overlap longer than the tolerance (a duplicate is the full-overlap case). */
+export function membersOverlapFt(a: FramingMember, b: FramingMember): number {
+  const offA = projectPointOnLine(b.start, a).offset;
+  const offB = projectPointOnLine(b.end, a).offset;
+  if (Math.abs(offA) > SUPPORT_TOLERANCE_FT || Math.abs(offB) > SUPPORT_TOLERANCE_FT) return 0;
+  const s1 = projectPointOnLine(b.start, a).along;
+  const s2 = projectPointOnLine(b.end, a).along;
+  const lo = Math.max(0, Math.min(s1, s2));
+  const hi = Math.min(a.span_ft, Math.max(s1, s2));
+  return hi - lo;
+}
+
+function projectPointOnLine(p: Point, m: FramingMember): { along: number; offset: number } {
+  const dx = p[0] - m.start[0];
+  const dy = p[1] - m.start[1];
+  return { along: dx * m.direction[0] + dy * m.direction[1], offset: -dx * m.direction[1] + dy * m.direction[0] };
+}
+
+/**
+ * What a member end at point p bears on: a column at the member's level first, else a member
+ * whose interior it lies on, else a member whose end it touches (girders before beams, then by id).
+ */
+export function findEndSupport(
+  p: Point,
+  self: FramingMember,
+  columnsAtLevel: readonly { id: string; at: Point }[],
+  membersNear: readonly FramingMember[],
+): EndSupport {
+  const columns = columnsAtLevel.filter((c) => distanceFt(c.at, p) <= SUPPORT_TOLERANCE_FT).sort((a, b) => (a.id < b.id ? -1 : 1));
+  if (columns.length > 0) return { kind: 'column', id: columns[0].id };
+  const hits: { m: FramingMember; interior: boolean; position_ft: number }[] = [];
+  for (const m of membersNear) {
+    if (m.id === self.id) continue;
+    const { distanceFt: d, t } = projectPointOnSegment(p, m.start, m.end);
+    if (d > SUPPORT_TOLERANCE_FT) continue;
+    const position_ft = t * m.span_ft;
+    const interior = position_ft > SUPPORT_TOLERANCE_FT && position_ft < m.span_ft - SUPPORT_TOLERANCE_FT;
+    hits.push({ m, interior, position_ft });
+  }
+  if (hits.length === 0) return { kind: 'none' };
+  hits.sort((a, b) => {
+    if (a.interior !== b.interior) return a.interior ? -1 : 1;
+    if (a.m.member.kind !== b.m.member.kind) return a.m.member.kind === 'girder' ? -1 : 1;
+    return a.m.id < b.m.id ? -1 : a.m.id > b.m.id ? 1 : 0;
+  });
+  const best = hits[0];
+  return { kind: 'member', id: best.m.id, position_ft: best.position_ft };
+}
+
+/** The member a point lies on (within the tolerance): interior first, girders before beams, then by id. */
+export function memberAtPoint(p: Point, candidates: readonly FramingMember[]): { member: FramingMember; position_ft: number } | null {
+  let best: { member: FramingMember; position_ft: number; interior: boolean } | null = null;
+  for (const m of candidates) {
+    const { distanceFt: d, t } = projectPointOnSegment(p, m.start, m.end);
+    if (d > SUPPORT_TOLERANCE_FT) continue;
+    const position_ft = t * m.span_ft;
+    const interior = position_ft > SUPPORT_TOLERANCE_FT && position_ft < m.span_ft - SUPPORT_TOLERANCE_FT;
+    const better =
+      !best ||
+      (interior !== best.interior ? interior : m.member.kind !== best.member.member.kind ? m.member.kind === 'girder' : m.id < best.member.id);
+    if (better) best = { member: m, position_ft, interior };
+  }
+  return best && { member: best.member, position_ft: best.position_ft };
+}
+
+/** Build the framing topology of a plan and list its problems, each naming the element. */
+export function buildFramingTopology(plan: Plan): FramingTopology {
+  const problems: PlanProblem[] = [];
+  const excluded = new Set<string>();
+  const levelIds = new Set(plan.levels.map((l) => l.id));
+  const members = new Map<string, FramingMember>();
+  const indexByLevel = new Map<string, SegmentGridIndex<FramingMember>>();
+
+  plan.members.forEach((m, i) => {
+    if (!levelIds.has(m.level)) {
+      excluded.add(m.id);
+      return; // reported by the repair step
+    }
+    const span_ft = memberSpanFt(m);
+    if (span_ft <= SUPPORT_TOLERANCE_FT) {
+      problems.push(planProblem('error', 'member-zero-length', `Member ${m.id}: zero length (start and end both at ${fmt(m.start)})`, { elementId: m.id, path: `members[${i}]` }));
+      excluded.add(m.id);
+      return;
+    }
+    const fm: FramingMember = {
+      id: m.id,
+      member: m,
+      level: m.level,
+      start: m.start,
+      end: m.end,
+      span_ft,
+      direction: [(m.end[0] - m.start[0]) / span_ft, (m.end[1] - m.start[1]) / span_ft],
+      supports: { start: { kind: 'none' }, end: { kind: 'none' } },
+      carries: [],
+    };
+    let index = indexByLevel.get(m.level);
+    if (!index) indexByLevel.set(m.level, (index = new SegmentGridIndex<FramingMember>(INDEX_CELL_FT)));
+    // Duplicates and overlaps: the later member (file order) is left out.
+    for (const other of index.inBox(
+      [Math.min(m.start[0], m.end[0]) - SUPPORT_TOLERANCE_FT, Math.min(m.start[1], m.end[1]) - SUPPORT_TOLERANCE_FT],
+      [Math.max(m.start[0], m.end[0]) + SUPPORT_TOLERANCE_FT, Math.max(m.start[1], m.end[1]) + SUPPORT_TOLERANCE_FT],
+    )) {
+      const overlap = membersOverlapFt(other, fm);
+      if (overlap <= SUPPORT_TOLERANCE_FT) continue;
+      const duplicate =
+        (distanceFt(other.start, fm.start) <= SUPPORT_TOLERANCE_FT && distanceFt(other.end, fm.end) <= SUPPORT_TOLERANCE_FT) ||
+        (distanceFt(other.start, fm.end) <= SUPPORT_TOLERANCE_FT && distanceFt(other.end, fm.start) <= SUPPORT_TOLERANCE_FT);
+      problems.push(
+        duplicate
+          ? planProblem('error', 'member-duplicate', `Member ${m.id}: duplicates member ${other.id} (same ends); ${m.id} is left out`, { elementId: m.id, path: `members[${i}]` })
+          : planProblem('error', 'member-overlap', `Member ${m.id}: overlaps member ${other.id} over ${overlap.toFixed(2)} ft; ${m.id} is left out`, { elementId: m.id, path: `members[${i}]` }),
+      );
+      excluded.add(m.id);
+      return;
+    }
+    index.insert(fm, m.start, m.end, SUPPORT_TOLERANCE_FT);
+    members.set(m.id, fm);
+  });
+
+  const columnsByLevel = new Map<string, { id: string; at: Point }[]>();
+  for (const c of plan.columns) {
+    for (const level of c.levels) {
+      let list = columnsByLevel.get(level);
+      if (!list) columnsByLevel.set(level, (list = []));
+      list.push({ id: c.id, at: [c.x_ft, c.y_ft] });
+    }
+  }
+  const columnIndexByLevel = new Map<string, SegmentGridIndex<{ id: string; at: Point }>>();
+  for (const [level, list] of columnsByLevel) {
+    const idx = new SegmentGridIndex<{ id: string; at: Point }>(INDEX_CELL_FT);
+    for (const c of list) idx.insert(c, c.at, c.at, SUPPORT_TOLERANCE_FT);
+    columnIndexByLevel.set(level, idx);
+  }
+
+  const memberIndexInFile = new Map(plan.members.map((m, i) => [m.id, i]));
+  for (const fm of members.values()) {
+    const index = indexByLevel.get(fm.level)!;
+    const columnIndex = columnIndexByLevel.get(fm.level);
+    for (const end of ['start', 'end'] as const) {
+      const p = fm[end];
+      const support = findEndSupport(p, fm, columnIndex?.near(p) ?? [], index.near(p));
+      fm.supports[end] = support;
+      if (support.kind === 'member') {
+        members.get(support.id)!.carries.push({ memberId: fm.id, end, position_ft: support.position_ft });
+      } else if (support.kind === 'none') {
+        problems.push(
+          planProblem('error', 'member-end-unsupported', `Member ${fm.id}: ${end} ${fmt(p)} lands on no column, member or wall at level ${fm.level}`, {
+            elementId: fm.id,
+            path: `members[${memberIndexInFile.get(fm.id)}].${end}`,
+          }),
+        );
+      }
+    }
+  }
+  for (const fm of members.values()) fm.carries.sort((a, b) => a.position_ft - b.position_ft || (a.memberId < b.memberId ? -1 : 1));
+
+  const { order, cyclic } = orderBySupport(members);
+  const inCycle = new Set<string>();
+  for (const cycle of describeSupportCycles(members, cyclic)) {
+    cycle.forEach((id) => inCycle.add(id));
+    problems.push(planProblem('error', 'support-cycle', `Member ${cycle[0]}: support cycle ${cycle.join(' → ')} → ${cycle[0]} (members carry each other)`, { elementId: cycle[0] }));
+  }
+  for (const id of [...cyclic].sort()) {
+    if (inCycle.has(id)) continue;
+    problems.push(planProblem('error', 'support-cycle-dependent', `Member ${id}: not designed, it carries members caught in a support cycle`, { elementId: id }));
+  }
+  return { members, order, excluded, problems, memberIndex: indexByLevel, columnIndex: columnIndexByLevel };
+}
+
+/** Kahn's algorithm on "carries": a member comes after every member that bears on it. Ties by id. */
+export function orderBySupport(members: Map<string, FramingMember>): { order: string[]; cyclic: Set<string> } {
+  const pending = new Map<string, number>();
+  for (const fm of members.values()) pending.set(fm.id, fm.carries.length);
+  const ready = [...members.values()].filter((fm) => fm.carries.length === 0).map((fm) => fm.id).sort();
+  const order: string[] = [];
+  for (let i = 0; i < ready.length; i++) {
+    const id = ready[i];
+    order.push(id);
+    const fm = members.get(id)!;
+    const supporters = new Set<string>();
+    for (const end of ['start', 'end'] as const) {
+      const s = fm.supports[end];
+      if (s.kind === 'member') {
+        const left = pending.get(s.id)! - 1;
+        pending.set(s.id, left);
+        if (left === 0) supporters.add(s.id);
+      }
+    }
+    ready.push(...[...supporters].sort());
+  }
+  const placed = new Set(order);
+  const cyclic = new Set([...members.keys()].filter((id) => !placed.has(id)));
+  return { order, cyclic };
+}
+
+/** The distinct cycles among the unplaced members, each as its member ids in support order. */
+function describeSupportCycles(members: Map<string, FramingMember>, cyclic: Set<string>): string[][] {
+  const cycles: string[][] = [];
+  const reported = new Set<string>();
+  for (const startId of [...cyclic].sort()) {
+    if (reported.has(startId)) continue;
+    // Follow "is supported by" within the cyclic set until a member repeats.
+    const path: string[] = [];
+    const seenAt = new Map<string, number>();
+    let id: string | undefined = startId;
+    while (id !== undefined && !seenAt.has(id) && !reported.has(id)) {
+      seenAt.set(id, path.length);
+      path.push(id);
+      const fm: FramingMember = members.get(id)!;
+      id = (['start', 'end'] as const)
+        .map((e) => fm.supports[e])
+        .filter((s): s is { kind: 'member'; id: string; position_ft: number } => s.kind === 'member' && cyclic.has(s.id))
+        .map((s) => s.id)
+        .sort()[0];
+    }
+    if (id !== undefined && seenAt.has(id)) {
+      const cycle = path.slice(seenAt.get(id)!);
+      cycles.push(cycle);
+      cycle.forEach((c) => reported.add(c));
+    }
+    path.forEach((p) => reported.add(p));
+  }
+  return cycles;
+}

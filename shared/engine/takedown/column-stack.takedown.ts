@@ -1,0 +1,127 @@
+/**
+ * Column loads, cumulative from the top down (design-basis §2, calc-interface `columns`):
+ * live load reduced on the column's cumulative tributary area with KLL = 4 (ASCE 7-16
+ * Table 4.7-1, interior and exterior columns without cantilever slabs) and the 0.40 limit
+ * once two or more floors contribute reducible live load (§4.7.2). Where a member with a
+ * cantilever slab delivers to the column, KLL = 2 is used (corner column with cantilever
+ * slab; conservative, as edge/corner position is not worked out).
+ * Column self weight is not included (columns are not sized here).
+ */
+import type { Plan } from '../../schemas/plan.schema';
+import { kllTable4_7_1, liveLoadReductionFactor } from '../loads/live-load-reduction.loads';
+
+export interface ColumnReceipt {
+  columnId: string;
+  level: string;
+  D_kip: number;
+  L_kip: number;
+  Lreducible_kip: number;
+  Lr_kip: number;
+  S_kip: number;
+  area_ft2: number;
+  reducibleArea_ft2: number;
+  cantileverSlab: boolean;
+  source: string;
+}
+
+export interface ColumnLevelTakedown {
+  level: string;
+  D_kip: number;
+  /** Reduced live load. */
+  L_kip: number;
+  Lunreduced_kip: number;
+  Lr_kip: number;
+  S_kip: number;
+  tributaryArea_ft2: number;
+  reducibleArea_ft2: number;
+  KLL: number;
+  /** Floors contributing reducible live load, this level and above. */
+  floors: number;
+  liveReductionFactor: number;
+  Pr_kip: number;
+  combination: string;
+}
+
+export interface ColumnTakedown {
+  id: string;
+  levels: ColumnLevelTakedown[];
+}
+
+/**
+ * Required axial strength from the gravity combinations: LRFD ASCE 7-16 §2.3.1 combinations 1–3,
+ * ASD §2.4.1 combinations 1–4. The 0.5 L factor option of §2.3.1 is not taken (L factor 1.0; conservative).
+ */
+export function columnRequiredAxialKip(method: 'LRFD' | 'ASD', D: number, L: number, Lr: number, S: number): { Pr_kip: number; combination: string } {
+  const roof = Math.max(Lr, S);
+  const roofName = Lr >= S ? 'Lr' : 'S';
+  const half = roof > 0 ? `+0.5${roofName}` : '';
+  const full = roof > 0 ? `+0.75${roofName}` : '';
+  const combos: [string, number][] =
+    method === 'LRFD'
+      ? [
+          ['1.4D', 1.4 * D],
+          [`1.2D+1.6L${half}`, 1.2 * D + 1.6 * L + 0.5 * roof],
+          [`1.2D+1.6${roofName}+L`, 1.2 * D + 1.6 * roof + L],
+        ]
+      : [
+          ['D', D],
+          ['D+L', D + L],
+          [`D+${roofName}`, D + roof],
+          [`D+0.75L${full}`, D + 0.75 * L + 0.75 * roof],
+        ];
+  let best = combos[0];
+  for (const c of combos) if (c[1] > best[1] + 1e-12) best = c;
+  return { Pr_kip: best[1], combination: best[0] };
+}
+
+export function stackColumns(plan: Plan, receipts: readonly ColumnReceipt[], liveLoadReduction: boolean): ColumnTakedown[] {
+  const elevation = new Map(plan.levels.map((l) => [l.id, l.elevation_ft]));
+  const byColumnLevel = new Map<string, ColumnReceipt[]>();
+  for (const r of receipts) {
+    const key = `${r.columnId}\u0000${r.level}`;
+    let list = byColumnLevel.get(key);
+    if (!list) byColumnLevel.set(key, (list = []));
+    list.push(r);
+  }
+  return plan.columns.map((column) => {
+    const levels = column.levels.filter((l) => elevation.has(l)).sort((a, b) => elevation.get(b)! - elevation.get(a)!);
+    let D = 0, Lred = 0, Lall = 0, Lr = 0, S = 0, area = 0, redArea = 0, floors = 0;
+    let cantilever = false;
+    const out: ColumnLevelTakedown[] = levels.map((level) => {
+      const here = byColumnLevel.get(`${column.id}\u0000${level}`) ?? [];
+      let levelRedArea = 0;
+      for (const r of here) {
+        D += r.D_kip;
+        Lall += r.L_kip;
+        Lred += r.Lreducible_kip;
+        Lr += r.Lr_kip;
+        S += r.S_kip;
+        area += r.area_ft2;
+        levelRedArea += r.reducibleArea_ft2;
+        cantilever ||= r.cantileverSlab;
+      }
+      redArea += levelRedArea;
+      if (levelRedArea > 1e-9) floors += 1;
+      const KLL = cantilever ? kllTable4_7_1('corner-column-with-cantilever-slab') : kllTable4_7_1('interior-column');
+      const factor = liveLoadReduction ? liveLoadReductionFactor(KLL, redArea, floors) : 1;
+      const L = Lred * factor + (Lall - Lred);
+      const pr = columnRequiredAxialKip(plan.designBasis.method, D, L, Lr, S);
+      return {
+        level,
+        D_kip: D,
+        L_kip: L,
+        Lunreduced_kip: Lall,
+        Lr_kip: Lr,
+        S_kip: S,
+        tributaryArea_ft2: area,
+        reducibleArea_ft2: redArea,
+        KLL,
+        floors,
+        liveReductionFactor: factor,
+        Pr_kip: pr.Pr_kip,
+        combination: pr.combination,
+      };
+    });
+    return { id: column.id, levels: out };
+  });
+}
