@@ -1,0 +1,7 @@
+import type { CommandOutcome } from './cli-io';
+import { runMemberCommand } from './member.command';
+
+/** Subcommand → handler. Add a subcommand by adding one entry. */
+export const CALC_COMMANDS: Record<string, (args: string[]) => CommandOutcome | Promise<CommandOutcome>> = {
+  member: runMemberCommand,
+};

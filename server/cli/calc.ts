@@ -1,0 +1,31 @@
+/**
+ * `npm run -s calc -- <subcommand> <file.json | ->`: prints one JSON document on stdout and
+ * nothing else there (messages go to stderr). Exit 0 pass, 1 design does not pass, 2 bad input.
+ */
+import { CALC_COMMANDS } from './calc-commands';
+import { CliInputError, EXIT_BAD_INPUT, errorOutcome, type CommandOutcome } from './cli-io';
+
+async function main(argv: string[]): Promise<CommandOutcome> {
+  const [sub, ...rest] = argv;
+  const handler = sub === undefined ? undefined : Object.hasOwn(CALC_COMMANDS, sub) ? CALC_COMMANDS[sub] : undefined;
+  if (!handler) {
+    const known = Object.keys(CALC_COMMANDS).join(', ');
+    return errorOutcome(`unknown subcommand "${sub ?? ''}"`, [`subcommand: must be one of ${known}`]);
+  }
+  try {
+    return await handler(rest);
+  } catch (e) {
+    if (e instanceof CliInputError) return errorOutcome(e.message, e.problems);
+    process.stderr.write(`calc: ${(e as Error).stack ?? String(e)}\n`);
+    return errorOutcome('internal error', [`input: the engine could not process it (${(e as Error).message})`]);
+  }
+}
+
+main(process.argv.slice(2)).then((outcome) => {
+  process.stdout.write(`${JSON.stringify(outcome.json, null, 2)}\n`);
+  process.exitCode = outcome.exitCode;
+}, (e: unknown) => {
+  process.stderr.write(`calc: ${String(e)}\n`);
+  process.stdout.write(`${JSON.stringify({ error: { message: 'internal error', problems: [] } })}\n`);
+  process.exitCode = EXIT_BAD_INPUT;
+});
