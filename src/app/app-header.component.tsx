@@ -1,4 +1,4 @@
-import { NavLink, useNavigate } from 'react-router-dom';
+import { NavLink } from 'react-router-dom';
 import { paths } from '../config/paths';
 import type { Session } from '../features/auth/api/session.schema';
 import { useSignOut } from '../features/auth/api/sign-out.api';
@@ -26,7 +26,6 @@ export function BrandMark({ className = '' }: { className?: string }) {
 }
 
 export function AppHeader({ session }: { session: Session }) {
-  const navigate = useNavigate();
   const signOut = useSignOut();
 
   return (
@@ -37,7 +36,7 @@ export function AppHeader({ session }: { session: Session }) {
           <span className="text-[1.05rem] font-semibold tracking-tight">Baywright</span>
         </NavLink>
         <span aria-hidden className="h-6 w-px bg-line" />
-        <span className="label-caps hidden max-w-48 truncate md:inline" title={session.firm.name}>
+        <span className="label-caps hidden max-w-64 truncate lg:inline" title={session.firm.name}>
           {session.firm.name}
         </span>
         <nav aria-label="Main" className="flex h-full items-stretch gap-1">
@@ -63,9 +62,14 @@ export function AppHeader({ session }: { session: Session }) {
             <div className="text-sm font-medium text-ink">{session.user.name}</div>
             <div className="label-caps text-[0.625rem]">{ROLE_LABELS[session.role]}</div>
           </div>
+          {signOut.isError ? (
+            <span role="alert" className="text-xs text-danger">
+              Sign-out failed. Try again.
+            </span>
+          ) : null}
           <button
             type="button"
-            onClick={() => signOut.mutate(undefined, { onSuccess: () => navigate(paths.signIn.href(), { replace: true }) })}
+            onClick={() => signOut.mutate()}
             disabled={signOut.isPending}
             className="h-8 rounded-[3px] border border-ink/70 px-3 text-sm text-ink hover:bg-paper-sunk disabled:opacity-60"
           >

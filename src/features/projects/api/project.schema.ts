@@ -25,7 +25,7 @@ export const projectInputSchema = z.object({
   number: z.string().trim().max(50, 'Keep the project number under 50 characters.'),
   client: z.string().trim().max(200, 'Keep the client under 200 characters.'),
   address: z.string().trim().max(300, 'Keep the address under 300 characters.'),
-  description: z.string().trim().max(2000, 'Keep the description under 2000 characters.'),
+  description: z.string().trim().max(4000, 'Keep the description under 4000 characters.'),
 });
 
 export type ProjectInput = z.infer<typeof projectInputSchema>;

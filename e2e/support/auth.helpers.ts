@@ -1,0 +1,16 @@
+import { expect, type Page } from '@playwright/test';
+
+export const DEMO_PASSWORD = 'baywright-demo';
+export const SCREENSHOT_DIR = 'artifacts/screenshots';
+
+export async function signInAs(page: Page, email: string, password = DEMO_PASSWORD): Promise<void> {
+  await page.goto('/signin');
+  await page.getByLabel('Email').fill(email);
+  await page.getByLabel('Password').fill(password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await expect(page).toHaveURL(/\/projects$/);
+}
+
+export function mainNav(page: Page) {
+  return page.getByRole('navigation', { name: 'Main' });
+}
