@@ -1,0 +1,99 @@
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { QueryTypes } from 'sequelize';
+import { afterAll, describe, expect, it } from 'vitest';
+import { connectDatabase } from '../../server/db/connection';
+import { createMigrator, migrateToLatest } from '../../server/db/migrator';
+import { DEMO_USERS, seedDemo } from '../../server/db/seed-demo';
+import { createTestApp } from './helpers/test-app';
+
+const tmp = mkdtempSync(join(tmpdir(), 'baywright-db-'));
+afterAll(() => rmSync(tmp, { recursive: true, force: true }));
+
+describe('database: migrations and demo seed', () => {
+  it('when migrations run twice, then the second run applies nothing and every one is recorded', async () => {
+    const db = await connectDatabase('sqlite::memory:');
+    try {
+      expect(await migrateToLatest(db.sequelize)).toEqual(['0001-accounts', '0002-projects']);
+      expect(await migrateToLatest(db.sequelize)).toEqual([]);
+      const executed = await createMigrator(db.sequelize).executed();
+      expect(executed.map((m) => m.name)).toEqual(['0001-accounts', '0002-projects']);
+    } finally {
+      await db.sequelize.close();
+    }
+  });
+
+  it('when migrations are rolled all the way down and up again, then the schema comes back', async () => {
+    const db = await connectDatabase('sqlite::memory:');
+    try {
+      await migrateToLatest(db.sequelize);
+      await createMigrator(db.sequelize).down({ to: 0 });
+      const tables = await db.sequelize.getQueryInterface().showAllTables();
+      expect(tables.filter((n) => n !== 'schema_migrations')).toEqual([]);
+      await migrateToLatest(db.sequelize);
+      expect(await seedDemo(db)).toMatchObject({ firmId: expect.any(String) });
+    } finally {
+      await db.sequelize.close();
+    }
+  });
+
+  it('when the demo seed runs twice, then nothing is duplicated', async () => {
+    const db = await connectDatabase('sqlite::memory:');
+    try {
+      await migrateToLatest(db.sequelize);
+      const first = await seedDemo(db);
+      const second = await seedDemo(db);
+      expect(second).toEqual(first);
+      const { Firm, User, Membership, Project } = db.models;
+      expect(await Firm.count()).toBe(1);
+      expect(await User.count()).toBe(DEMO_USERS.length);
+      expect(await Membership.count()).toBe(4);
+      expect(await Project.count()).toBe(1);
+      const roles = (await Membership.findAll()).map((m) => m.getDataValue('role')).sort();
+      expect(roles).toEqual(['drafter', 'engineer', 'manager', 'owner']);
+    } finally {
+      await db.sequelize.close();
+    }
+  });
+
+  it('when the database is a file in a missing folder, then the folder is created, WAL and foreign keys are on', async () => {
+    const file = join(tmp, 'nested', 'bw.sqlite');
+    const db = await connectDatabase(`sqlite:${file}`);
+    try {
+      await migrateToLatest(db.sequelize);
+      const journal = await db.sequelize.query<{ journal_mode: string }>('PRAGMA journal_mode', {
+        type: QueryTypes.SELECT,
+      });
+      expect(journal).toEqual([{ journal_mode: 'wal' }]);
+      const fk = await db.sequelize.query<{ foreign_keys: number }>('PRAGMA foreign_keys', {
+        type: QueryTypes.SELECT,
+      });
+      expect(fk).toEqual([{ foreign_keys: 1 }]);
+      // A project for a firm that does not exist is refused by the foreign key.
+      await expect(
+        db.models.Project.create({ firmId: '00000000-0000-4000-8000-000000000000', name: 'Orphan' }),
+      ).rejects.toThrow(/FOREIGN KEY/);
+    } finally {
+      await db.sequelize.close();
+    }
+  });
+});
+
+describe('unexpected failures', () => {
+  it('when the database fails under a route, then 500 with the generic body and the error is logged', async () => {
+    const t = await createTestApp();
+    try {
+      await t.ctx.db.sequelize.getQueryInterface().dropTable('projects');
+      const res = await t.agents.owner.get('/api/projects');
+      expect(res.status).toBe(500);
+      expect(res.body).toEqual({
+        error: { code: 'internal', message: 'Something went wrong on our side. Please try again.' },
+      });
+      expect(t.serverErrors).toHaveLength(1);
+      expect(String(t.serverErrors[0])).toMatch(/no such table/);
+    } finally {
+      await t.close();
+    }
+  });
+});

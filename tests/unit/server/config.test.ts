@@ -1,0 +1,78 @@
+import { describe, expect, it } from 'vitest';
+import { ConfigError, loadConfig } from '../../../server/config';
+
+describe('loadConfig', () => {
+  it('when the environment is empty, then the documented defaults apply', () => {
+    expect(loadConfig({})).toEqual({
+      port: 3000,
+      databaseUrl: 'sqlite:./data/baywright.sqlite',
+      nodeEnv: 'development',
+      cookieSecure: false,
+      rateLimitRelaxed: false,
+      seedDemo: true,
+      uploadDir: './data/uploads',
+      smtp: null,
+    });
+  });
+
+  it('when NODE_ENV is production and COOKIE_SECURE unset, then cookies are Secure', () => {
+    expect(loadConfig({ NODE_ENV: 'production' }).cookieSecure).toBe(true);
+    expect(loadConfig({ NODE_ENV: 'production', COOKIE_SECURE: 'false' }).cookieSecure).toBe(false);
+  });
+
+  it('when the e2e variables are given, then they are parsed', () => {
+    const c = loadConfig({
+      NODE_ENV: 'production',
+      PORT: '3111',
+      DATABASE_URL: 'sqlite:./data/e2e-3111.sqlite',
+      COOKIE_SECURE: 'false',
+      RATE_LIMIT_RELAXED: 'true',
+      SEED_DEMO: '0',
+    });
+    expect(c).toMatchObject({
+      port: 3111,
+      databaseUrl: 'sqlite:./data/e2e-3111.sqlite',
+      cookieSecure: false,
+      rateLimitRelaxed: true,
+      seedDemo: false,
+    });
+  });
+
+  it.each(['sqlite::memory:', 'postgres://bw:pw@db.internal:5432/baywright', 'postgresql://localhost/bw'])(
+    'when DATABASE_URL is %s, then it is accepted',
+    (url) => {
+      expect(loadConfig({ DATABASE_URL: url }).databaseUrl).toBe(url);
+    },
+  );
+
+  it.each([
+    [{ PORT: 'abc' }, /PORT must be a whole number.*"abc"/],
+    [{ PORT: '70000' }, /PORT/],
+    [{ DATABASE_URL: 'mysql://x' }, /DATABASE_URL must start with sqlite:/],
+    [{ NODE_ENV: 'staging' }, /NODE_ENV must be development, production or test/],
+    [{ COOKIE_SECURE: 'maybe' }, /COOKIE_SECURE must be one of/],
+    [{ SMTP_HOST: 'mail.example', SMTP_FROM: 'not-an-email' }, /SMTP_FROM must be an email/],
+    [{ SMTP_HOST: 'mail.example' }, /SMTP_FROM: required when SMTP_HOST is set/],
+  ])('when the environment is %o, then a ConfigError names the variable', (env, pattern) => {
+    let caught: unknown;
+    try {
+      loadConfig(env as Record<string, string>);
+    } catch (err) {
+      caught = err;
+    }
+    expect(caught).toBeInstanceOf(ConfigError);
+    expect((caught as Error).message).toMatch(pattern);
+  });
+
+  it('when SMTP is fully configured, then smtp carries it with port 587 by default', () => {
+    expect(
+      loadConfig({ SMTP_HOST: 'mail.example', SMTP_FROM: 'noreply@baywright.example' }).smtp,
+    ).toEqual({
+      host: 'mail.example',
+      port: 587,
+      user: undefined,
+      password: undefined,
+      from: 'noreply@baywright.example',
+    });
+  });
+});
