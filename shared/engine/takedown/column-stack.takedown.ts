@@ -9,6 +9,7 @@
  */
 import type { Plan } from '../../schemas/plan.schema';
 import { kllTable4_7_1, liveLoadReductionFactor } from '../loads/live-load-reduction.loads';
+import { LOAD_CASES, loadCombinations, type LoadCase } from '../loads/combinations';
 
 export interface ColumnReceipt {
   columnId: string;
@@ -47,31 +48,16 @@ export interface ColumnTakedown {
   levels: ColumnLevelTakedown[];
 }
 
-/**
- * Required axial strength from the gravity combinations: LRFD ASCE 7-16 §2.3.1 combinations 1–3,
- * ASD §2.4.1 combinations 1–4. The 0.5 L factor option of §2.3.1 is not taken (L factor 1.0; conservative).
- */
+/** Required axial strength: the largest gravity combination of ASCE 7-16 §2.3.1 (LRFD) or §2.4.1 (ASD), L factor 1.0. */
 export function columnRequiredAxialKip(method: 'LRFD' | 'ASD', D: number, L: number, Lr: number, S: number): { Pr_kip: number; combination: string } {
-  const roof = Math.max(Lr, S);
-  const roofName = Lr >= S ? 'Lr' : 'S';
-  const half = roof > 0 ? `+0.5${roofName}` : '';
-  const full = roof > 0 ? `+0.75${roofName}` : '';
-  const combos: [string, number][] =
-    method === 'LRFD'
-      ? [
-          ['1.4D', 1.4 * D],
-          [`1.2D+1.6L${half}`, 1.2 * D + 1.6 * L + 0.5 * roof],
-          [`1.2D+1.6${roofName}+L`, 1.2 * D + 1.6 * roof + L],
-        ]
-      : [
-          ['D', D],
-          ['D+L', D + L],
-          [`D+${roofName}`, D + roof],
-          [`D+0.75L${full}`, D + 0.75 * L + 0.75 * roof],
-        ];
-  let best = combos[0];
-  for (const c of combos) if (c[1] > best[1] + 1e-12) best = c;
-  return { Pr_kip: best[1], combination: best[0] };
+  const values: Record<LoadCase, number> = { D, L, Lr, S };
+  const present = LOAD_CASES.filter((c) => values[c] !== 0);
+  let best = { Pr_kip: 0, combination: method === 'LRFD' ? '1.4D' : 'D' };
+  for (const combo of loadCombinations(method, present.length ? present : ['D'])) {
+    const p = LOAD_CASES.reduce((sum, c) => sum + combo.factors[c] * values[c], 0);
+    if (p > best.Pr_kip + 1e-12) best = { Pr_kip: p, combination: combo.name };
+  }
+  return best;
 }
 
 export function stackColumns(plan: Plan, receipts: readonly ColumnReceipt[], liveLoadReduction: boolean): ColumnTakedown[] {
