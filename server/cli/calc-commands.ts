@@ -1,7 +1,9 @@
 import type { CommandOutcome } from './cli-io';
 import { runMemberCommand } from './member.command';
+import { runPlanCommand } from './plan.command';
 
 /** Subcommand → handler. Add a subcommand by adding one entry. */
 export const CALC_COMMANDS: Record<string, (args: string[]) => CommandOutcome | Promise<CommandOutcome>> = {
   member: runMemberCommand,
+  plan: runPlanCommand,
 };

@@ -18,3 +18,12 @@ export type { SpanLoading, Station } from './analysis/simple-span.analysis';
 export { computeWShapeConstants, shapeConstantsFor, shapeConstantsByWeight, nominalFlexure } from './design/aisc360/w-shape-constants';
 export type { WShapeConstants, NominalFlexure } from './design/aisc360/w-shape-constants';
 export { E_KSI } from './units/units.constants';
+// Plans: framing topology, gravity takedown, whole-scheme design (plan helper).
+export { SUPPORT_TOLERANCE_FT, buildFramingTopology, orderBySupport } from './geometry/framing-topology.geometry';
+export type { FramingTopology, FramingMember, EndSupport } from './geometry/framing-topology.geometry';
+export { computeDeckTributary } from './loads/deck-tributary.loads';
+export { eq4_7_1Factor, liveLoadReductionFactor, kllTable4_7_1 } from './loads/live-load-reduction.loads';
+export { runTakedown } from './takedown/gravity-takedown.takedown';
+export type { TakedownResult, MemberTakedown, EndReaction } from './takedown/gravity-takedown.takedown';
+export { designScheme, SCHEME_CAUTION } from './scheme/design-scheme.scheme';
+export type { SchemeResult, SchemeMember, SchemeOptions } from './scheme/design-scheme.scheme';
