@@ -38,6 +38,7 @@ export function createApp(options: CreateAppOptions): Express {
   const app = express();
   app.disable('x-powered-by');
   app.set('query parser', 'simple');
+  app.set('trust proxy', config.trustProxy);
   Object.defineProperty(app, CONTEXT, { value: ctx });
 
   app.use(securityHeaders());

@@ -46,6 +46,7 @@ const envSchema = z.object({
   COOKIE_SECURE: booleanFlag('COOKIE_SECURE'),
   RATE_LIMIT_RELAXED: booleanFlag('RATE_LIMIT_RELAXED'),
   SEED_DEMO: booleanFlag('SEED_DEMO'),
+  TRUST_PROXY: z.preprocess(emptyToUndefined, z.string().optional()),
   UPLOAD_DIR: z.preprocess(emptyToUndefined, z.string().default('./data/uploads')),
   SMTP_HOST: z.preprocess(emptyToUndefined, z.string().optional()),
   SMTP_PORT: z.preprocess(
@@ -83,6 +84,11 @@ export interface Config {
   rateLimitRelaxed: boolean;
   seedDemo: boolean;
   uploadDir: string;
+  /**
+   * Express 'trust proxy' setting (e.g. 1 or "loopback") so req.ip, used by the per-IP
+   * sign-in limit, is the client behind a reverse proxy. false: use the socket address.
+   */
+  trustProxy: boolean | number | string;
   /** null when SMTP_HOST is unset: mail goes to the outbox only. */
   smtp: SmtpConfig | null;
 }
@@ -92,6 +98,12 @@ export class ConfigError extends Error {
     super(`Invalid environment:\n${problems.map((p) => `  - ${p}`).join('\n')}`);
     this.name = 'ConfigError';
   }
+}
+
+function parseTrustProxy(value: string | undefined): boolean | number | string {
+  if (value === undefined || value === 'false' || value === '0') return false;
+  if (value === 'true') return true;
+  return /^\d+$/.test(value) ? Number(value) : value;
 }
 
 export function loadConfig(env: Record<string, string | undefined> = process.env): Config {
@@ -118,6 +130,7 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
     rateLimitRelaxed: e.RATE_LIMIT_RELAXED ?? false,
     seedDemo: e.SEED_DEMO ?? true,
     uploadDir: e.UPLOAD_DIR,
+    trustProxy: parseTrustProxy(e.TRUST_PROXY),
     smtp: e.SMTP_HOST
       ? {
           host: e.SMTP_HOST,

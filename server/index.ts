@@ -45,12 +45,13 @@ async function main(): Promise<void> {
 
   const clientDir = await resolveClientDir(config);
   const app = createApp({ sequelize: db.sequelize, models: db.models, config, clientDir });
-  const server = app.listen(config.port, () => {
+  // Express 5 passes listen errors (e.g. EADDRINUSE) to the callback.
+  const server = app.listen(config.port, (err?: Error) => {
+    if (err) {
+      console.error(`[baywright] cannot listen on port ${config.port}: ${err.message}`);
+      process.exit(1);
+    }
     log(`listening on http://localhost:${config.port} (${config.nodeEnv})`);
-  });
-  server.on('error', (err) => {
-    console.error(`[baywright] cannot listen on port ${config.port}: ${err.message}`);
-    process.exit(1);
   });
 
   // Expired sessions are refused anyway; this only keeps the table small.

@@ -11,6 +11,7 @@ describe('loadConfig', () => {
       rateLimitRelaxed: false,
       seedDemo: true,
       uploadDir: './data/uploads',
+      trustProxy: false,
       smtp: null,
     });
   });
@@ -62,6 +63,12 @@ describe('loadConfig', () => {
     }
     expect(caught).toBeInstanceOf(ConfigError);
     expect((caught as Error).message).toMatch(pattern);
+  });
+
+  it('when TRUST_PROXY is a hop count or a name, then it is passed on typed', () => {
+    expect(loadConfig({ TRUST_PROXY: '1' }).trustProxy).toBe(1);
+    expect(loadConfig({ TRUST_PROXY: 'loopback' }).trustProxy).toBe('loopback');
+    expect(loadConfig({ TRUST_PROXY: 'true' }).trustProxy).toBe(true);
   });
 
   it('when SMTP is fully configured, then smtp carries it with port 587 by default', () => {
