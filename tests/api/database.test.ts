@@ -80,6 +80,22 @@ describe('database: migrations and demo seed', () => {
   });
 });
 
+describe('file database end to end', () => {
+  it('when the app runs on a SQLite file, then sign-up (a transaction), sign-in and a project round trip work', async () => {
+    const t = await createTestApp({ databaseUrl: `sqlite:${join(tmp, 'app.sqlite')}` });
+    try {
+      // createTestApp signed every demo role in and signed the other firm up.
+      const created = await t.agents.engineer.post('/api/projects').send({ name: 'File-backed' });
+      expect(created.status).toBe(201);
+      const listed = await t.agents.manager.get('/api/projects');
+      expect(listed.body.projects.map((p: { name: string }) => p.name)).toContain('File-backed');
+      expect(t.serverErrors).toEqual([]);
+    } finally {
+      await t.close();
+    }
+  });
+});
+
 describe('unexpected failures', () => {
   it('when the database fails under a route, then 500 with the generic body and the error is logged', async () => {
     const t = await createTestApp();
