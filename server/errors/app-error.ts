@@ -5,6 +5,8 @@ export interface AppErrorOptions {
   fields?: Record<string, string>;
   /** Extra response headers, e.g. Retry-After on 429. */
   headers?: Record<string, string>;
+  /** Extra members of the error body, e.g. problems on 422 or current on 409. */
+  details?: Record<string, unknown>;
 }
 
 export class AppError extends Error {
@@ -12,6 +14,7 @@ export class AppError extends Error {
   readonly code: string;
   readonly fields?: Record<string, string>;
   readonly headers?: Record<string, string>;
+  readonly details?: Record<string, unknown>;
 
   constructor(status: number, code: string, message: string, options: AppErrorOptions = {}) {
     super(message);
@@ -20,6 +23,7 @@ export class AppError extends Error {
     this.code = code;
     this.fields = options.fields;
     this.headers = options.headers;
+    this.details = options.details;
   }
 
   static badRequest(message: string, fields?: Record<string, string>): AppError {

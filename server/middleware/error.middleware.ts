@@ -4,7 +4,7 @@ import { z } from 'zod';
 import { AppError } from '../errors/app-error';
 
 interface ErrorBody {
-  error: { code: string; message: string; fields?: Record<string, string> };
+  error: { code: string; message: string; fields?: Record<string, string>; [extra: string]: unknown };
 }
 
 function zodFields(error: z.ZodError): Record<string, string> {
@@ -26,7 +26,14 @@ export function toErrorResponse(err: unknown): {
     return {
       status: err.status,
       headers: err.headers,
-      body: { error: { code: err.code, message: err.message, ...(err.fields ? { fields: err.fields } : {}) } },
+      body: {
+        error: {
+          ...(err.details ?? {}),
+          code: err.code,
+          message: err.message,
+          ...(err.fields ? { fields: err.fields } : {}),
+        },
+      },
     };
   }
   if (err instanceof z.ZodError) {
