@@ -1,17 +1,26 @@
-import { NavLink } from 'react-router-dom';
+import { Link, useLocation } from 'react-router-dom';
 import { paths } from '../config/paths';
 import type { Session } from '../features/auth/api/session.schema';
 import { useSignOut } from '../features/auth/api/sign-out.api';
 import { canEditProjects, canManageTeam, ROLE_LABELS } from '../lib/permissions';
 
-type NavItem = { label: string; to: string; end?: boolean };
+type NavItem = { label: string; to: string; isActive: (pathname: string) => boolean };
+
+const under = (base: string) => (pathname: string) => pathname === base || pathname.startsWith(`${base}/`);
 
 /** The header's links for a role: the client hides what a role cannot do. */
 export function navItemsFor(role: Session['role']): NavItem[] {
-  const items: NavItem[] = [{ label: 'Projects', to: paths.projects.href(), end: false }];
-  if (canEditProjects(role)) items.push({ label: 'New project', to: paths.newProject.href(), end: true });
-  if (canManageTeam(role)) items.push({ label: 'Team', to: paths.team.href(), end: true });
-  items.push({ label: 'Settings', to: paths.settings.href(), end: true });
+  const newProject = paths.newProject.href();
+  const items: NavItem[] = [
+    {
+      label: 'Projects',
+      to: paths.projects.href(),
+      isActive: (pathname) => under(paths.projects.href())(pathname) && pathname !== newProject,
+    },
+  ];
+  if (canEditProjects(role)) items.push({ label: 'New project', to: newProject, isActive: (p) => p === newProject });
+  if (canManageTeam(role)) items.push({ label: 'Team', to: paths.team.href(), isActive: under(paths.team.href()) });
+  items.push({ label: 'Settings', to: paths.settings.href(), isActive: (p) => p === paths.settings.href() });
   return items;
 }
 
@@ -27,34 +36,33 @@ export function BrandMark({ className = '' }: { className?: string }) {
 
 export function AppHeader({ session }: { session: Session }) {
   const signOut = useSignOut();
+  const { pathname } = useLocation();
 
   return (
     <header className="border-b-[3px] border-double border-ink bg-paper-raised">
       <div className="mx-auto flex h-14 max-w-6xl items-center gap-6 px-6">
-        <NavLink to={paths.projects.href()} className="flex items-center gap-2 text-ink" aria-label="Baywright, projects">
+        <Link to={paths.projects.href()} className="flex items-center gap-2 text-ink" aria-label="Baywright, projects">
           <BrandMark className="size-6" />
           <span className="text-[1.05rem] font-semibold tracking-tight">Baywright</span>
-        </NavLink>
+        </Link>
         <span aria-hidden className="h-6 w-px bg-line" />
         <span className="label-caps hidden max-w-64 truncate lg:inline" title={session.firm.name}>
           {session.firm.name}
         </span>
         <nav aria-label="Main" className="flex h-full items-stretch gap-1">
           {navItemsFor(session.role).map((item) => (
-            <NavLink
+            <Link
               key={item.to}
               to={item.to}
-              end={item.end}
-              className={({ isActive }) =>
-                `flex items-center border-b-2 px-2.5 text-sm transition-colors ${
-                  isActive
-                    ? 'border-accent font-medium text-ink'
-                    : 'border-transparent text-ink-soft hover:border-ink/30 hover:text-ink'
-                }`
-              }
+              aria-current={item.isActive(pathname) ? 'page' : undefined}
+              className={`flex items-center border-b-2 px-2.5 text-sm transition-colors ${
+                item.isActive(pathname)
+                  ? 'border-accent font-medium text-ink'
+                  : 'border-transparent text-ink-soft hover:border-ink/30 hover:text-ink'
+              }`}
             >
               {item.label}
-            </NavLink>
+            </Link>
           ))}
         </nav>
         <div className="ml-auto flex items-center gap-3">

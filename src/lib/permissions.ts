@@ -13,7 +13,7 @@ export const ROLE_LABELS: Record<Role, string> = {
 
 export const ROLE_SUMMARIES: Record<Role, { does: string; mayNot: string }> = {
   owner: {
-    does: 'Everything an engineer does; invites people, sets roles and firm-wide unit prices.',
+    does: 'Everything an engineer does; invites people, sets roles and the firm’s unit prices.',
     mayNot: '—',
   },
   engineer: {

@@ -10,7 +10,7 @@ export default function SettingsRoute() {
     <div className="flex flex-col gap-8">
       <title>Settings · Baywright</title>
       <PageHeader eyebrow={session.firm.name} title="Settings" />
-      <div className="grid gap-6 md:grid-cols-2">
+      <div className="grid gap-6 md:grid-cols-2 md:items-start">
         <section aria-labelledby="profile-heading" className="border border-ink/80 bg-paper-raised">
           <h2 id="profile-heading" className="label-caps border-b border-ink/80 px-4 py-2 text-ink">
             Profile

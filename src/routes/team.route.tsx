@@ -22,8 +22,8 @@ export default function TeamRoute() {
         title="Team"
         description={
           <>
-            You are this firm’s <strong className="font-medium text-ink">{ROLE_LABELS[session.role].toLowerCase()}</strong>.
-            The list of people and invitations will be shown here.
+            You are this firm’s <strong className="font-medium text-ink">{ROLE_LABELS[session.role].toLowerCase()}</strong>:
+            you set who does what.
           </>
         }
       />

@@ -54,3 +54,17 @@ describe('role-aware navigation', () => {
     expect(screen.getByRole('contentinfo')).toHaveTextContent(/local building code and the engineer of record govern/);
   });
 });
+
+describe('active navigation link', () => {
+  it('when on the new-project page, then only "New project" is marked current', () => {
+    renderWithProviders(<AppHeader session={testSession('engineer')} />, { path: '/projects/new' });
+    const nav = screen.getByRole('navigation', { name: 'Main' });
+    expect(within(nav).getByRole('link', { current: 'page' })).toHaveTextContent('New project');
+  });
+
+  it('when on a project page, then "Projects" is marked current', () => {
+    renderWithProviders(<AppHeader session={testSession('engineer')} />, { path: '/projects/7/plan' });
+    const nav = screen.getByRole('navigation', { name: 'Main' });
+    expect(within(nav).getByRole('link', { current: 'page' })).toHaveTextContent('Projects');
+  });
+});
