@@ -112,10 +112,16 @@ export function unitLoadDeflectionEI(L: number, x: number, xi: number): number {
 const GAUSS_X = [-Math.sqrt(3 / 5), 0, Math.sqrt(3 / 5)];
 const GAUSS_W = [5 / 9, 8 / 9, 5 / 9];
 
+// 2-point Gauss–Legendre: exact up to degree 3 (constant q times the cubic influence).
+const GAUSS2_X = 1 / Math.sqrt(3);
+
 function integrateInfluence(L: number, x: number, p: LinearPiece, lo: number, hi: number): number {
   if (hi <= lo) return 0;
   const h = (hi - lo) / 2;
   const m = (hi + lo) / 2;
+  if (p.qa === p.qb) {
+    return p.qa * h * (unitLoadDeflectionEI(L, x, m - h * GAUSS2_X) + unitLoadDeflectionEI(L, x, m + h * GAUSS2_X));
+  }
   let sum = 0;
   for (let i = 0; i < 3; i++) {
     const xi = m + h * GAUSS_X[i];
@@ -129,6 +135,7 @@ export function deflectionEIKipFt3(s: SpanLoading, x: number): number {
   const L = s.spanFt;
   let y = 0;
   for (const p of s.pieces) {
+    if (p.a === 0 && p.b === L && p.qa === p.qb) { y += uniformDeflectionEI(p.qa, L, x); continue; }
     // Split at x where the influence function changes form, so the quadrature is exact.
     y += integrateInfluence(L, x, p, p.a, Math.min(x, p.b)) + integrateInfluence(L, x, p, Math.max(x, p.a), p.b);
   }
@@ -192,9 +199,9 @@ export function maxShearKip(s: SpanLoading): number {
 }
 
 /** Closed forms for a full uniform load w (AISC Manual Part 3, simple beam, uniformly distributed load). */
-export const uniformShearKip = (w: number, L: number, x: number): number => w * (L / 2 - x);
-export const uniformMomentKipFt = (w: number, L: number, x: number): number => (w * x * (L - x)) / 2;
-export const uniformDeflectionEI = (w: number, L: number, x: number): number => (w * x * (L ** 3 - 2 * L * x * x + x ** 3)) / 24;
+export function uniformShearKip(w: number, L: number, x: number): number { return w * (L / 2 - x); }
+export function uniformMomentKipFt(w: number, L: number, x: number): number { return (w * x * (L - x)) / 2; }
+export function uniformDeflectionEI(w: number, L: number, x: number): number { return (w * x * (L * L * L - 2 * L * x * x + x * x * x)) / 24; }
 
 export interface Station { xFt: number; vKip: number; mKipFt: number; eiDeflectionKipFt3: number }
 export interface StationPosition { xFt: number; side: 1 | -1 }

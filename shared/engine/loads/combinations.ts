@@ -55,10 +55,25 @@ function dominated(a: LoadFactors, b: LoadFactors): boolean {
  * factor is ≤ another's is dropped: with gravity loads (all ≥ 0) its moments, shears and
  * deflections are pointwise smaller and every check ratio is monotone in them, so it cannot govern.
  */
+const cache = new Map<string, LoadCombination[]>();
+
 export function loadCombinations(
   method: 'LRFD' | 'ASD', casesPresent: Iterable<LoadCase>, options: CombinationOptions = {},
 ): LoadCombination[] {
   const present = new Set(casesPresent);
+  const key = `${method}|${LOAD_CASES.filter((c) => present.has(c)).join(',')}|${options.liveLoadFactorHalf ? 1 : 0}`;
+  let list = cache.get(key);
+  if (!list) {
+    list = buildCombinations(method, present, options);
+    cache.set(key, list);
+  }
+  // Callers get their own copies so a cached list is never mutated.
+  return list.map((c) => ({ name: c.name, clause: c.clause, factors: { ...c.factors } }));
+}
+
+function buildCombinations(
+  method: 'LRFD' | 'ASD', present: ReadonlySet<LoadCase>, options: CombinationOptions,
+): LoadCombination[] {
   const raw: (LoadCombination | null)[] = [];
   if (method === 'LRFD') {
     const l34 = options.liveLoadFactorHalf ? 0.5 : 1.0;

@@ -6,7 +6,20 @@ import { buildMemberResult, describeGoverning } from './member-result.builder';
 import { evaluateShape, mayPass, type ShapeEvaluation } from './shape-evaluation';
 
 /** Candidates honouring the depth and series constraints, lightest first (ties: shallower). */
-export function candidateShapes(input: MemberDesignInput): WShapeConstants[] {
+const candidateCache = new Map<string, readonly WShapeConstants[]>();
+
+export function candidateShapes(input: MemberDesignInput): readonly WShapeConstants[] {
+  const key = `${input.Fy_ksi}|${input.maxDepth_in ?? ''}|${input.minDepth_in ?? ''}|${input.allowedNominalDepths?.join(',') ?? ''}`;
+  let list = candidateCache.get(key);
+  if (!list) {
+    list = filterCandidates(input);
+    if (candidateCache.size > 1000) candidateCache.clear();
+    candidateCache.set(key, list);
+  }
+  return list;
+}
+
+function filterCandidates(input: MemberDesignInput): WShapeConstants[] {
   const maxD = input.maxDepth_in ?? Infinity;
   const minD = input.minDepth_in ?? 0;
   const series = input.allowedNominalDepths && input.allowedNominalDepths.length > 0 ? new Set(input.allowedNominalDepths) : null;

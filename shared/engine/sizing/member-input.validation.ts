@@ -40,7 +40,7 @@ export function memberInputProblems(input: MemberDesignInput): InputProblem[] {
   else if (L > 200) out.push({ path: ['span_ft'], message: 'must be at most 200 ft' });
   const spanOk = isNum(L) && L > 0;
   const within = (x: number): boolean => !spanOk || (x >= 0 && x <= L);
-  const spanText = spanOk ? `0–${fmt(L)} ft` : 'span';
+  const spanText = (): string => (spanOk ? `0–${fmt(L)} ft` : 'span');
   if (!Array.isArray(input.loads)) out.push({ path: ['loads'], message: 'must be a list of loads' });
   else input.loads.forEach((l, i) => {
     const at = (f: string, message: string): void => { out.push({ path: ['loads', i, f], message }); };
@@ -56,14 +56,14 @@ export function memberInputProblems(input: MemberDesignInput): InputProblem[] {
       case 'linear': {
         if (l.kind === 'partial') nonNeg('w_klf', l.w_klf);
         else { nonNeg('w1_klf', l.w1_klf); nonNeg('w2_klf', l.w2_klf); }
-        if (!isNum(l.from_ft) || !within(l.from_ft)) at('from_ft', `must be within the span ${spanText}`);
-        if (!isNum(l.to_ft) || !within(l.to_ft)) at('to_ft', `must be within the span ${spanText}`);
+        if (!isNum(l.from_ft) || !within(l.from_ft)) at('from_ft', `must be within the span ${spanText()}`);
+        if (!isNum(l.to_ft) || !within(l.to_ft)) at('to_ft', `must be within the span ${spanText()}`);
         else if (isNum(l.from_ft) && l.to_ft <= l.from_ft) at('to_ft', 'must be greater than from_ft');
         break;
       }
       case 'point':
         nonNeg('P_kip', l.P_kip);
-        if (!isNum(l.x_ft) || !within(l.x_ft)) at('x_ft', `must be within the span ${spanText}`);
+        if (!isNum(l.x_ft) || !within(l.x_ft)) at('x_ft', `must be within the span ${spanText()}`);
         break;
       default: at('kind', 'must be one of uniform, partial, linear, point');
     }
@@ -77,7 +77,7 @@ export function memberInputProblems(input: MemberDesignInput): InputProblem[] {
     if (!b || typeof b !== 'object' || !Array.isArray(b.points_ft)) {
       out.push({ path: ['bracing'], message: 'must be "continuous", "none" or { "points_ft": [...] }' });
     } else b.points_ft.forEach((x, i) => {
-      if (!isNum(x) || !within(x)) out.push({ path: ['bracing', 'points_ft', i], message: `must be within the span ${spanText}` });
+      if (!isNum(x) || !within(x)) out.push({ path: ['bracing', 'points_ft', i], message: `must be within the span ${spanText()}` });
     });
   }
   if (input.method !== 'LRFD' && input.method !== 'ASD') out.push({ path: ['method'], message: 'must be LRFD or ASD' });
@@ -109,7 +109,7 @@ export function memberInputProblems(input: MemberDesignInput): InputProblem[] {
   }
   const lb = input.Lb_override_ft;
   if (lb != null && (!isNum(lb) || lb < 0 || (spanOk && lb > L))) {
-    out.push({ path: ['Lb_override_ft'], message: `must be between 0 and the span (${spanText}) or null` });
+    out.push({ path: ['Lb_override_ft'], message: `must be between 0 and the span (${spanText()}) or null` });
   }
   return out;
 }

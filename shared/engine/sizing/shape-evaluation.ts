@@ -42,6 +42,8 @@ export interface ShapeEvaluation {
   mMaxAtFt: number;
 }
 
+let scratch = new Float64Array(0);
+
 /** Available strength Mc from Mn: φb Mn (LRFD) or Mn/Ωb (ASD), AISC 360-16 F1. */
 export const availableFlexure = (method: 'LRFD' | 'ASD', mnKipFt: number): number =>
   method === 'LRFD' ? PHI_B * mnKipFt : mnKipFt / OMEGA_B;
@@ -55,12 +57,24 @@ export const deflectionIn = (eiKipFt3: number, ixIn4: number): number => (eiKipF
 /** Lower-bound test: false only when the shape cannot pass (a necessary condition fails). */
 export function mayPass(ctx: MemberContext, k: WShapeConstants): boolean {
   const slack = 1 + 1e-9;
-  if (ctx.mMaxNoSwKipFt > slack * availableFlexure(ctx.method, k.mnMaxKipFt)) return false;
-  if (ctx.vMaxNoSwKip > slack * availableShear(ctx.method, k)) return false;
+  const w = ctx.includeSelfWeight ? k.weightKlf : 0;
+  // Moment with self weight at the no-self-weight maximum: a lower bound of the true maximum,
+  // and Mn never exceeds min(Mp, F3 Mn).
+  let mLow = 0;
+  let vMax = 0;
+  for (const c of ctx.combos) {
+    const m = c.mMaxNoSwKipFt + c.fD * w * c.m1AtMaxNoSw;
+    if (m > mLow) mLow = m;
+    const v = (c.rStartKip > c.rEndKip ? c.rStartKip : c.rEndKip) + (c.fD * w * ctx.spanFt) / 2;
+    if (v > vMax) vMax = v;
+  }
+  if (mLow > slack * availableFlexure(ctx.method, k.mnMaxKipFt)) return false;
+  if (vMax > slack * availableShear(ctx.method, k)) return false;
   const lim = ctx.input.deflectionLimits;
   const spanIn = ctx.spanFt * IN_PER_FT;
   if (lim.live != null && deflectionIn(ctx.liveMaxEI, k.ixIn4) > (slack * spanIn) / lim.live) return false;
-  if (lim.total != null && deflectionIn(ctx.totalMaxNoSwEI, k.ixIn4) > (slack * spanIn) / lim.total) return false;
+  const yLow = ctx.totalMaxNoSwEI + w * ctx.deflUnitAtTotalMax;
+  if (lim.total != null && deflectionIn(yLow, k.ixIn4) > (slack * spanIn) / lim.total) return false;
   return true;
 }
 
@@ -119,7 +133,7 @@ export function evaluateShape(ctx: MemberContext, k: WShapeConstants, detail: bo
     deflTotalIn = deflectionIn(ctx.totalMaxNoSwEI, k.ixIn4);
     deflTotalAtFt = refinedMax(ctx.deflTotalBase, ctx.deflX).at;
   } else {
-    const y = new Float64Array(ctx.deflX.length);
+    const y = scratch.length === ctx.deflX.length ? scratch : (scratch = new Float64Array(ctx.deflX.length));
     for (let i = 0; i < y.length; i++) y[i] = ctx.deflTotalBase[i] + wKlf * ctx.deflUnit[i];
     const mx = refinedMax(y, ctx.deflX);
     deflTotalIn = deflectionIn(mx.value, k.ixIn4);

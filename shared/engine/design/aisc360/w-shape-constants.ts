@@ -2,7 +2,7 @@ import { listWShapes, nominalDepthIn, type WShape } from '../../../catalog/w-sha
 import { E_KSI, IN_PER_FT } from '../../units/units.constants';
 import { classifyFlange, lambdaPfCase10, lambdaPwCase15, lambdaRfCase10, type FlangeClass } from './chapter-b/b4';
 import { C_DOUBLY_SYMMETRIC, eqF2_1, eqF2_5, eqF2_6 } from './chapter-f/f2.equations';
-import { lateralTorsionalF2_2, type F2SectionConstants } from './chapter-f/f2';
+import { lateralTorsionalF2_2, lateralTorsionalMnKipIn, type F2SectionConstants } from './chapter-f/f2';
 import { flangeLocalBucklingF3_2 } from './chapter-f/f3';
 import { shearStrengthG2_1, type G2ShearStrength } from './chapter-g/g2';
 
@@ -98,7 +98,7 @@ export function nominalFlexure(k: WShapeConstants, lbFt: number, cb: number): No
 
 /** Same value as nominalFlexure(...).mnKipFt without building the record (hot path). */
 export function nominalFlexureKipFt(k: WShapeConstants, lbFt: number, cb: number): number {
-  const mnKipIn = Math.min(lateralTorsionalF2_2(k, lbFt * IN_PER_FT, cb).mnKipIn, k.mpKipIn);
+  const mnKipIn = Math.min(lateralTorsionalMnKipIn(k, lbFt * IN_PER_FT, cb), k.mpKipIn);
   return (k.mnFlbKipIn !== null && k.mnFlbKipIn < mnKipIn ? k.mnFlbKipIn : mnKipIn) / IN_PER_FT;
 }
 

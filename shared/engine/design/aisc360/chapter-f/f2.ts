@@ -38,3 +38,10 @@ export function lateralTorsionalF2_2(k: F2SectionConstants, lbIn: number, cb: nu
   const fcrKsi = eqF2_4(cb, k.eKsi, lbIn, k.rtsIn, k.jIn4, k.c, k.sxIn3, k.hoIn);
   return { range: 'Lb>Lr', equation: 'Eq. F2-3', mnKipIn: eqF2_3(fcrKsi, k.sxIn3, k.mpKipIn), fcrKsi };
 }
+
+/** Mn of lateralTorsionalF2_2 without building the record (hot path of the selection). */
+export function lateralTorsionalMnKipIn(k: F2SectionConstants, lbIn: number, cb: number): number {
+  if (lbIn <= k.lpIn) return k.mpKipIn;
+  if (lbIn <= k.lrIn) return eqF2_2(cb, k.mpKipIn, k.fyKsi, k.sxIn3, lbIn, k.lpIn, k.lrIn);
+  return eqF2_3(eqF2_4(cb, k.eKsi, lbIn, k.rtsIn, k.jIn4, k.c, k.sxIn3, k.hoIn), k.sxIn3, k.mpKipIn);
+}

@@ -1,0 +1,14 @@
+/** `npm run bench`: runs each benchmark module and prints its figures. Add plan benchmarks beside member. */
+import { runMemberBench, type BenchReport } from './member.bench';
+
+const benches: (() => BenchReport)[] = [runMemberBench];
+
+for (const run of benches) {
+  const r = run();
+  process.stdout.write(
+    `${r.name}: ${r.count} in ${r.seconds.toFixed(3)} s wall = ${Math.round(r.perSecond).toLocaleString('en-US')} members/s; ` +
+      `CPU ${r.cpuSeconds.toFixed(3)} s = ${Math.round(r.perCpuSecond).toLocaleString('en-US')} members/CPU-s (one core); ` +
+      `cold first pass ${Math.round(r.coldPerSecond).toLocaleString('en-US')}/s; ` +
+      `${r.passed} passed; peak RSS ${r.peakRssMb.toFixed(1)} MB, peak heap ${r.peakHeapMb.toFixed(1)} MB\n`,
+  );
+}
