@@ -1,6 +1,11 @@
 import type { Sequelize } from 'sequelize';
+import { defineAuditEventModel } from './audit-event.model';
 import { defineFirmModel } from './firm.model';
+import { defineInvitationModel } from './invitation.model';
 import { defineMembershipModel } from './membership.model';
+import { defineNotificationPreferenceModel } from './notification-preference.model';
+import { defineOutboxMessageModel } from './outbox-message.model';
+import { definePasswordResetModel } from './password-reset.model';
 import { defineProjectModel } from './project.model';
 import { defineSessionModel } from './session.model';
 import { defineUserModel } from './user.model';
@@ -14,6 +19,11 @@ export function defineModels(sequelize: Sequelize) {
     Membership: defineMembershipModel(sequelize),
     Session: defineSessionModel(sequelize),
     Project: defineProjectModel(sequelize),
+    Invitation: defineInvitationModel(sequelize),
+    PasswordReset: definePasswordResetModel(sequelize),
+    OutboxMessage: defineOutboxMessageModel(sequelize),
+    AuditEvent: defineAuditEventModel(sequelize),
+    NotificationPreference: defineNotificationPreferenceModel(sequelize),
   };
 }
 
