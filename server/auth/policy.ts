@@ -23,13 +23,14 @@ export type Action = (typeof ACTIONS)[number];
 
 const EVERY_ACTION: readonly Action[] = ACTIONS;
 
+// Invitations, roles, the mail outbox (it holds sign-in links) and the audit log.
+const OWNER_ONLY: ReadonlySet<Action> = new Set<Action>(['team:manage', 'outbox:read', 'audit:read']);
+
 const GRANTS: Record<Role, ReadonlySet<Action>> = {
   // Owner: everything.
   owner: new Set(EVERY_ACTION),
-  // Engineer: everything except team, roles and firm-wide prices.
-  engineer: new Set(
-    EVERY_ACTION.filter((a) => a !== 'team:manage' && a !== 'prices:edit'),
-  ),
+  // Engineer: everything except team, roles, firm-wide prices, the outbox and the audit log.
+  engineer: new Set(EVERY_ACTION.filter((a) => !OWNER_ONLY.has(a) && a !== 'prices:edit')),
   // Drafter: reads, exports, renumbers marks; no geometry, loads or sizes.
   drafter: new Set<Action>(['project:read', 'export:read', 'marks:edit']),
   // Manager: reads everything, sets scheme status, comments, edits unit prices.
@@ -39,8 +40,6 @@ const GRANTS: Record<Role, ReadonlySet<Action>> = {
     'scheme:status',
     'comment:write',
     'prices:edit',
-    'outbox:read',
-    'audit:read',
   ]),
 };
 
