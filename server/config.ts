@@ -64,6 +64,19 @@ const envSchema = z.object({
     emptyToUndefined,
     z.email({ error: 'SMTP_FROM must be an email address' }).optional(),
   ),
+  // Aliases: SMTP_PASS for SMTP_PASSWORD, MAIL_FROM for SMTP_FROM.
+  SMTP_PASS: z.preprocess(emptyToUndefined, z.string().optional()),
+  MAIL_FROM: z.preprocess(
+    emptyToUndefined,
+    z.email({ error: 'MAIL_FROM must be an email address' }).optional(),
+  ),
+  APP_URL: z.preprocess(
+    emptyToUndefined,
+    z
+      .url({ protocol: /^https?$/, error: 'APP_URL must be an http(s) address, e.g. https://baywright.example' })
+      .transform((value) => value.replace(/\/+$/, ''))
+      .optional(),
+  ),
 });
 
 export type NodeEnv = 'development' | 'production' | 'test';
@@ -91,6 +104,12 @@ export interface Config {
   trustProxy: boolean | number | string;
   /** null when SMTP_HOST is unset: mail goes to the outbox only. */
   smtp: SmtpConfig | null;
+  /**
+   * Public address of the app (no trailing slash) for links in e-mails. Required with SMTP so
+   * a forged Host header can never steer a reset link elsewhere; without SMTP (local outbox)
+   * links fall back to the request's own origin.
+   */
+  appUrl?: string;
 }
 
 export class ConfigError extends Error {
@@ -119,8 +138,14 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
     throw new ConfigError(problems);
   }
   const e = parsed.data;
-  if (e.SMTP_HOST && !e.SMTP_FROM) {
-    throw new ConfigError(['SMTP_FROM: required when SMTP_HOST is set']);
+  const from = e.SMTP_FROM ?? e.MAIL_FROM;
+  if (e.SMTP_HOST && !from) {
+    throw new ConfigError(['SMTP_FROM: required when SMTP_HOST is set (or MAIL_FROM)']);
+  }
+  if (e.SMTP_HOST && !e.APP_URL) {
+    throw new ConfigError([
+      'APP_URL: required when SMTP_HOST is set (links in e-mails must not depend on the request Host header)',
+    ]);
   }
   return {
     port: e.PORT,
@@ -136,9 +161,10 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
           host: e.SMTP_HOST,
           port: e.SMTP_PORT ?? 587,
           user: e.SMTP_USER,
-          password: e.SMTP_PASSWORD,
-          from: e.SMTP_FROM as string,
+          password: e.SMTP_PASSWORD ?? e.SMTP_PASS,
+          from: from as string,
         }
       : null,
+    ...(e.APP_URL ? { appUrl: e.APP_URL } : {}),
   };
 }

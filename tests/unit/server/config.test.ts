@@ -54,6 +54,9 @@ describe('loadConfig', () => {
     [{ COOKIE_SECURE: 'maybe' }, /COOKIE_SECURE must be one of/],
     [{ SMTP_HOST: 'mail.example', SMTP_FROM: 'not-an-email' }, /SMTP_FROM must be an email/],
     [{ SMTP_HOST: 'mail.example' }, /SMTP_FROM: required when SMTP_HOST is set/],
+    [{ SMTP_HOST: 'mail.example', SMTP_FROM: 'noreply@baywright.example' }, /APP_URL: required when SMTP_HOST is set/],
+    [{ APP_URL: 'not a url' }, /APP_URL must be an http\(s\) address/],
+    [{ MAIL_FROM: 'nope' }, /MAIL_FROM must be an email/],
   ])('when the environment is %o, then a ConfigError names the variable', (env, pattern) => {
     let caught: unknown;
     try {
@@ -73,7 +76,11 @@ describe('loadConfig', () => {
 
   it('when SMTP is fully configured, then smtp carries it with port 587 by default', () => {
     expect(
-      loadConfig({ SMTP_HOST: 'mail.example', SMTP_FROM: 'noreply@baywright.example' }).smtp,
+      loadConfig({
+        SMTP_HOST: 'mail.example',
+        SMTP_FROM: 'noreply@baywright.example',
+        APP_URL: 'https://baywright.example',
+      }).smtp,
     ).toEqual({
       host: 'mail.example',
       port: 587,
@@ -81,5 +88,24 @@ describe('loadConfig', () => {
       password: undefined,
       from: 'noreply@baywright.example',
     });
+  });
+
+  it('when the aliases SMTP_PASS and MAIL_FROM are used, then smtp and appUrl carry them', () => {
+    const c = loadConfig({
+      SMTP_HOST: 'mail.example',
+      SMTP_PORT: '2525',
+      SMTP_USER: 'bw',
+      SMTP_PASS: 'secret',
+      MAIL_FROM: 'noreply@baywright.example',
+      APP_URL: 'https://baywright.example/',
+    });
+    expect(c.smtp).toEqual({
+      host: 'mail.example',
+      port: 2525,
+      user: 'bw',
+      password: 'secret',
+      from: 'noreply@baywright.example',
+    });
+    expect(c.appUrl).toBe('https://baywright.example');
   });
 });
