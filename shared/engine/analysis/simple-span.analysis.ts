@@ -15,15 +15,33 @@ export interface SpanLoading {
   points: PointPiece[];
 }
 
+/**
+ * Positions are snapped to a 1e-9 ft grid inside [0, L] so that load ends, point loads and the
+ * critical points compare exactly (a load starting at 1e-300 ft would otherwise split hairs).
+ */
+function snap(x: number, L: number): number {
+  const v = Math.round(x * 1e9) / 1e9;
+  return v < 0 ? 0 : v > L ? L : v;
+}
+
 export function toSpanLoading(spanFt: number, loads: readonly MemberLoad[]): SpanLoading {
   const pieces: LinearPiece[] = [];
   const points: PointPiece[] = [];
+  const L = spanFt;
   for (const l of loads) {
     switch (l.kind) {
-      case 'uniform': pieces.push({ a: 0, b: spanFt, qa: l.w_klf, qb: l.w_klf }); break;
-      case 'partial': if (l.to_ft > l.from_ft) pieces.push({ a: l.from_ft, b: l.to_ft, qa: l.w_klf, qb: l.w_klf }); break;
-      case 'linear': if (l.to_ft > l.from_ft) pieces.push({ a: l.from_ft, b: l.to_ft, qa: l.w1_klf, qb: l.w2_klf }); break;
-      case 'point': points.push({ x: l.x_ft, P: l.P_kip }); break;
+      case 'uniform': pieces.push({ a: 0, b: L, qa: l.w_klf, qb: l.w_klf }); break;
+      case 'partial': {
+        const a = snap(l.from_ft, L), b = snap(l.to_ft, L);
+        if (b > a) pieces.push({ a, b, qa: l.w_klf, qb: l.w_klf });
+        break;
+      }
+      case 'linear': {
+        const a = snap(l.from_ft, L), b = snap(l.to_ft, L);
+        if (b > a) pieces.push({ a, b, qa: l.w1_klf, qb: l.w2_klf });
+        break;
+      }
+      case 'point': points.push({ x: snap(l.x_ft, L), P: l.P_kip }); break;
     }
   }
   return { spanFt, pieces, points };
@@ -150,7 +168,7 @@ export function criticalPointsFt(s: SpanLoading): number[] {
   for (const p of s.points) xs.push(p.x);
   xs.sort((a, b) => a - b);
   const out: number[] = [];
-  for (const x of xs) if (x >= 0 && x <= s.spanFt && (out.length === 0 || x - out[out.length - 1] > 1e-9)) out.push(x);
+  for (const x of xs) if (x >= 0 && x <= s.spanFt && (out.length === 0 || x > out[out.length - 1])) out.push(x);
   return out;
 }
 
