@@ -2,6 +2,7 @@ import type { QueryInterface, Sequelize } from 'sequelize';
 import { SequelizeStorage, Umzug, type MigrationFn } from 'umzug';
 import * as m0001 from './migrations/0001-accounts';
 import * as m0002 from './migrations/0002-projects';
+import * as m0003 from './migrations/0003-schemes-plans';
 import * as m0004 from './migrations/0004-team-mail-audit';
 
 export type Migration = MigrationFn<QueryInterface>;
@@ -11,6 +12,7 @@ export type Migration = MigrationFn<QueryInterface>;
 const MIGRATIONS: { name: string; up: Migration; down: Migration }[] = [
   { name: '0001-accounts', ...m0001 },
   { name: '0002-projects', ...m0002 },
+  { name: '0003-schemes-plans', ...m0003 },
   { name: '0004-team-mail-audit', ...m0004 },
 ];
 

@@ -9,6 +9,18 @@ import { definePasswordResetModel } from './password-reset.model';
 import { defineProjectModel } from './project.model';
 import { defineSessionModel } from './session.model';
 import { defineUserModel } from './user.model';
+import { defineSchemeModel } from './scheme.model';
+import { defineLevelModel } from './level.model';
+import { defineGridLineModel } from './grid-line.model';
+import { defineColumnModel } from './column.model';
+import { defineMemberModel } from './member.model';
+import { defineZoneModel } from './zone.model';
+import { defineDeckModel } from './deck.model';
+import { definePointLoadModel } from './point-load.model';
+import { defineLineLoadModel } from './line-load.model';
+import { defineOpeningModel } from './opening.model';
+import { definePlanRevisionModel } from './plan-revision.model';
+import { defineDesignRunModel } from './design-run.model';
 
 // Models are defined per Sequelize instance (tests run many in-memory databases), so the
 // app passes this object around instead of importing model classes globally.
@@ -19,6 +31,19 @@ export function defineModels(sequelize: Sequelize) {
     Membership: defineMembershipModel(sequelize),
     Session: defineSessionModel(sequelize),
     Project: defineProjectModel(sequelize),
+    // Schemes and their plans (0003-schemes-plans).
+    Scheme: defineSchemeModel(sequelize),
+    Level: defineLevelModel(sequelize),
+    GridLine: defineGridLineModel(sequelize),
+    Column: defineColumnModel(sequelize),
+    Member: defineMemberModel(sequelize),
+    Zone: defineZoneModel(sequelize),
+    Deck: defineDeckModel(sequelize),
+    PointLoad: definePointLoadModel(sequelize),
+    LineLoad: defineLineLoadModel(sequelize),
+    Opening: defineOpeningModel(sequelize),
+    PlanRevision: definePlanRevisionModel(sequelize),
+    DesignRun: defineDesignRunModel(sequelize),
     Invitation: defineInvitationModel(sequelize),
     PasswordReset: definePasswordResetModel(sequelize),
     OutboxMessage: defineOutboxMessageModel(sequelize),
