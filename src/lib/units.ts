@@ -14,7 +14,7 @@
 // NIST SP 811 prints these derived factors to 7 digits (tests check against them):
 //   kip → 4.448 222 E+03 N; lbf/ft² → 4.788 026 E+01 Pa; kip/in² → 6.894 757 E+06 Pa;
 //   lbf·ft → 1.355 818 N·m; lbf/ft → 1.459 390 E+01 N/m; lb/ft → 1.488 164 kg/m;
-//   ft² → 9.290 304 E-02 m² (exact).
+//   ft² → 9.290 304 E-02 m² (exact); in² → 6.4516 E-04 m² (exact).
 
 export type UnitSystem = 'US' | 'SI';
 export const UNIT_SYSTEMS: readonly UnitSystem[] = ['US', 'SI'];
@@ -29,6 +29,8 @@ export type QuantityKind =
   | 'length_ft'
   | 'length_in'
   | 'area_ft2'
+  | 'area_in2'
+  | 'inertia_in4'
   | 'force_kip'
   | 'lineLoad_klf'
   | 'pressure_psf'
@@ -52,6 +54,8 @@ export const SI_FACTORS: Readonly<Record<QuantityKind, number>> = {
   length_ft: FT_M, // ft → m
   length_in: IN_MM, // in → mm
   area_ft2: FT_M * FT_M, // ft² → m²
+  area_in2: IN_MM * IN_MM, // in² → mm²
+  inertia_in4: (IN_MM * IN_MM * IN_MM * IN_MM) / 1e6, // in⁴ → 10⁶ mm⁴
   force_kip: KIP_KN, // kip → kN
   lineLoad_klf: KIP_KN / FT_M, // kip/ft → kN/m
   pressure_psf: LBF_N / (FT_M * FT_M) / 1000, // lbf/ft² → kPa
@@ -73,6 +77,8 @@ const US: Readonly<Record<QuantityKind, UnitSpec>> = {
   length_ft: { unit: 'ft', digits: 2, aliases: ['ft', 'feet', 'foot', "'"] },
   length_in: { unit: 'in', digits: 2, aliases: ['in', 'inch', 'inches', '"'] },
   area_ft2: { unit: 'ft²', digits: 0, aliases: ['ft²', 'ft2', 'sqft', 'sf'] },
+  area_in2: { unit: 'in²', digits: 2, aliases: ['in²', 'in2', 'sqin'] },
+  inertia_in4: { unit: 'in⁴', digits: 0, aliases: ['in⁴', 'in4'] },
   force_kip: { unit: 'kip', digits: 1, aliases: ['kip', 'kips', 'k'] },
   lineLoad_klf: { unit: 'kip/ft', digits: 3, aliases: ['kip/ft', 'klf', 'k/ft', 'kips/ft'] },
   pressure_psf: { unit: 'psf', digits: 1, aliases: ['psf', 'lb/ft²', 'lb/ft2', 'lbf/ft2', 'lbf/ft²'] },
@@ -85,6 +91,8 @@ const SI: Readonly<Record<QuantityKind, UnitSpec>> = {
   length_ft: { unit: 'm', digits: 3, aliases: ['m'] },
   length_in: { unit: 'mm', digits: 1, aliases: ['mm'] },
   area_ft2: { unit: 'm²', digits: 1, aliases: ['m²', 'm2', 'sqm'] },
+  area_in2: { unit: 'mm²', digits: 0, aliases: ['mm²', 'mm2'] },
+  inertia_in4: { unit: '10⁶ mm⁴', digits: 1, aliases: ['10⁶mm⁴', '10^6mm4', 'e6mm4'] },
   force_kip: { unit: 'kN', digits: 1, aliases: ['kn'] },
   lineLoad_klf: { unit: 'kN/m', digits: 2, aliases: ['kn/m'] },
   pressure_psf: { unit: 'kPa', digits: 2, aliases: ['kpa', 'kn/m²', 'kn/m2'] },

@@ -28,6 +28,8 @@ describe('conversion factors', () => {
     expect(agreesTo(SI_FACTORS.weight_plf, 1.488164)).toBe(true); // lb/ft = 1.488 164 kg/m
     expect(SI_FACTORS.area_ft2).toBeCloseTo(0.09290304, 15); // ft² = 9.290 304 E-02 m² (exact)
     expect(SI_FACTORS.length_in).toBe(25.4); // inch = 2.54 E-02 m (exact)
+    expect(SI_FACTORS.area_in2).toBeCloseTo(645.16, 10); // in² = 6.4516 E-04 m² (exact)
+    expect(SI_FACTORS.inertia_in4).toBeCloseTo(0.4162314256, 12); // in⁴ = 4.162 314 E-07 m⁴ (exact: 25.4⁴ = 416 231.4256 mm⁴)
   });
 
   it('when a factor is wrong by one digit in the 7th place, then the comparison helper notices', () => {
