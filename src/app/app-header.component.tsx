@@ -40,22 +40,22 @@ export function AppHeader({ session }: { session: Session }) {
 
   return (
     <header className="border-b-[3px] border-double border-ink bg-paper-raised">
-      <div className="mx-auto flex h-14 max-w-6xl items-center gap-6 px-6">
-        <Link to={paths.projects.href()} className="flex items-center gap-2 text-ink" aria-label="Baywright, projects">
+      <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-6 px-4 sm:px-6 md:h-14 md:flex-nowrap">
+        <Link to={paths.projects.href()} className="flex h-14 items-center gap-2 text-ink" aria-label="Baywright, projects">
           <BrandMark className="size-6" />
           <span className="text-[1.05rem] font-semibold tracking-tight">Baywright</span>
         </Link>
-        <span aria-hidden className="h-6 w-px bg-line" />
+        <span aria-hidden className="hidden h-6 w-px bg-line lg:block" />
         <span className="label-caps hidden max-w-64 truncate lg:inline" title={session.firm.name}>
           {session.firm.name}
         </span>
-        <nav aria-label="Main" className="flex h-full items-stretch gap-1">
+        <nav aria-label="Main" className="order-last -mx-2 flex h-11 w-[calc(100%+1rem)] items-stretch gap-1 overflow-x-auto border-t border-line md:order-none md:mx-0 md:h-full md:w-auto md:border-t-0">
           {navItemsFor(session.role).map((item) => (
             <Link
               key={item.to}
               to={item.to}
               aria-current={item.isActive(pathname) ? 'page' : undefined}
-              className={`flex items-center border-b-2 px-2.5 text-sm transition-colors ${
+              className={`flex items-center border-b-2 px-2.5 text-sm whitespace-nowrap transition-colors ${
                 item.isActive(pathname)
                   ? 'border-accent font-medium text-ink'
                   : 'border-transparent text-ink-soft hover:border-ink/30 hover:text-ink'
@@ -66,8 +66,11 @@ export function AppHeader({ session }: { session: Session }) {
           ))}
         </nav>
         <div className="ml-auto flex items-center gap-3">
-          <div className="hidden text-right leading-tight sm:block" aria-label="Signed in as">
-            <div className="text-sm font-medium text-ink">{session.user.name}</div>
+          <div className="min-w-0 max-w-40 text-right leading-tight sm:max-w-none">
+            <div className="truncate text-sm font-medium text-ink">
+              <span className="sr-only">Signed in as </span>
+              {session.user.name}
+            </div>
             <div className="label-caps text-[0.625rem]">{ROLE_LABELS[session.role]}</div>
           </div>
           {signOut.isError ? (
@@ -79,7 +82,7 @@ export function AppHeader({ session }: { session: Session }) {
             type="button"
             onClick={() => signOut.mutate()}
             disabled={signOut.isPending}
-            className="h-8 rounded-[3px] border border-ink/70 px-3 text-sm text-ink hover:bg-paper-sunk disabled:opacity-60"
+            className="h-8 rounded-[3px] border border-ink/70 px-3 text-sm whitespace-nowrap text-ink hover:bg-paper-sunk disabled:opacity-60"
           >
             Sign out
           </button>

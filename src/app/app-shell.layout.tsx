@@ -31,7 +31,7 @@ export function AppShellLayout() {
   return (
     <div className="flex min-h-dvh flex-col">
       <AppHeader session={session.data} />
-      <main className="mx-auto w-full max-w-6xl flex-1 px-6 py-8">
+      <main className="mx-auto w-full max-w-6xl flex-1 px-4 py-8 sm:px-6">
         <Outlet />
       </main>
       <AppFooter />

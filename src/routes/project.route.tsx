@@ -51,7 +51,7 @@ export default function ProjectRoute() {
             <h1 className="truncate text-2xl font-semibold tracking-tight text-ink">{p.name}</h1>
             {p.description ? <p className="mt-1 line-clamp-2 max-w-2xl text-sm text-ink-soft">{p.description}</p> : null}
           </div>
-          <dl className="grid grid-cols-[auto_1fr] content-center gap-x-4 gap-y-1 border-t border-ink px-5 py-3 text-sm sm:border-t-0 sm:border-l">
+          <dl className="grid w-full grid-cols-[auto_1fr] content-center gap-x-4 gap-y-1 border-t border-ink px-5 py-3 text-sm sm:w-auto sm:border-t-0 sm:border-l">
             <dt className="label-caps self-center">No.</dt>
             <dd className="figures font-mono text-ink">{p.number || '—'}</dd>
             <dt className="label-caps self-center">Client</dt>
