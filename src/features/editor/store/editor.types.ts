@@ -56,6 +56,13 @@ export interface EditorState {
   hover: { point: PlanPoint; snap: string | null } | null;
   options: ToolOptions;
   readOnly: boolean;
+  /** A short message from the last action (what it did, or why it could not). */
+  notice: EditorNotice | null;
+}
+
+export interface EditorNotice {
+  tone: 'info' | 'error';
+  text: string;
 }
 
 /** What an action returns: the parts of the state it changes. */
