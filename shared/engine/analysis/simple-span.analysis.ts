@@ -161,12 +161,14 @@ export function deflectionEIKipFt3(s: SpanLoading, x: number): number {
   return y;
 }
 
+function ascending(a: number, b: number): number { return a - b; }
+
 /** Points where the load pattern changes: 0, L, piece ends, point-load positions (sorted, unique). */
 export function criticalPointsFt(s: SpanLoading): number[] {
   const xs = [0, s.spanFt];
   for (const p of s.pieces) xs.push(p.a, p.b);
   for (const p of s.points) xs.push(p.x);
-  xs.sort((a, b) => a - b);
+  xs.sort(ascending);
   const out: number[] = [];
   for (const x of xs) if (x >= 0 && x <= s.spanFt && (out.length === 0 || x > out[out.length - 1])) out.push(x);
   return out;

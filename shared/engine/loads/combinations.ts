@@ -61,14 +61,17 @@ export function loadCombinations(
   method: 'LRFD' | 'ASD', casesPresent: Iterable<LoadCase>, options: CombinationOptions = {},
 ): LoadCombination[] {
   const present = new Set(casesPresent);
-  const key = `${method}|${LOAD_CASES.filter((c) => present.has(c)).join(',')}|${options.liveLoadFactorHalf ? 1 : 0}`;
+  let key = method === 'LRFD' ? (options.liveLoadFactorHalf ? 'LRFD½' : 'LRFD') : 'ASD';
+  for (const c of LOAD_CASES) if (present.has(c)) key += `|${c}`;
   let list = cache.get(key);
   if (!list) {
     list = buildCombinations(method, present, options);
     cache.set(key, list);
   }
   // Callers get their own copies so a cached list is never mutated.
-  return list.map((c) => ({ name: c.name, clause: c.clause, factors: { ...c.factors } }));
+  const out: LoadCombination[] = [];
+  for (const c of list) out.push({ name: c.name, clause: c.clause, factors: { D: c.factors.D, L: c.factors.L, Lr: c.factors.Lr, S: c.factors.S } });
+  return out;
 }
 
 function buildCombinations(

@@ -24,13 +24,13 @@ export interface FlexureSegment {
 export interface CombinationData {
   combo: LoadCombination;
   fD: number;
-  vRight: Float64Array;
-  vLeft: Float64Array;
-  m: Float64Array;
-  qRight: Float64Array;
-  qLeft: Float64Array;
+  vRight: number[];
+  vLeft: number[];
+  m: number[];
+  qRight: number[];
+  qLeft: number[];
   /** Moments at a, a+l/4, a+l/2, a+3l/4, b for every segment (5 per segment), without self weight. */
-  segM: Float64Array;
+  segM: number[];
   rStartKip: number;
   rEndKip: number;
   /** Max moment without self weight, its location and the unit self-weight moment there. */
@@ -53,16 +53,16 @@ export interface MemberContext {
   caseLoading: Record<LoadCase, SpanLoading>;
   caseReactions: Record<LoadCase, { startKip: number; endKip: number }>;
   combos: CombinationData[];
-  xs: Float64Array;
+  xs: number[];
   /** Unit (1 klf) uniform-load shear and moment at the critical points. */
-  v1: Float64Array;
-  m1: Float64Array;
+  v1: number[];
+  m1: number[];
   segments: FlexureSegment[];
-  m1Seg: Float64Array;
+  m1Seg: number[];
   /** Deflection stations and EI·y (kip·ft³) there. */
-  deflX: Float64Array;
-  deflUnit: Float64Array;
-  deflTotalBase: Float64Array;
+  deflX: number[];
+  deflUnit: number[];
+  deflTotalBase: number[];
   /** Largest EI·y under any one transient case alone (L, Lr or S) and which. */
   liveMaxEI: number;
   liveMaxAtFt: number;
@@ -75,22 +75,40 @@ export interface MemberContext {
   deflUnitAtTotalMax: number;
 }
 
+function ascending(a: number, b: number): number { return a - b; }
+
+/** Plain double arrays: cheaper to allocate than typed arrays for these short lists. */
+function zeros(n: number): number[] {
+  const a: number[] = new Array(n);
+  for (let i = 0; i < n; i++) a[i] = 0;
+  return a;
+}
+
+let scratchY: number[] = [];
+
 function segmentsFor(input: MemberDesignInput): FlexureSegment[] {
   const L = input.span_ft;
   const override = input.Lb_override_ft;
   if (input.bracing === 'continuous') {
     return [{ aFt: 0, bFt: L, lbFt: override ?? 0, cbFixed: 1 }];
   }
-  const pts = input.bracing === 'none' ? [] : input.bracing.points_ft.filter((x) => x > 1e-9 && x < L - 1e-9);
-  const xs = [0, ...[...new Set(pts)].sort((a, b) => a - b), L];
+  const xs = [0];
+  if (input.bracing !== 'none') {
+    const pts = input.bracing.points_ft.slice().sort(ascending);
+    for (const x of pts) if (x > 1e-9 && x < L - 1e-9 && x - xs[xs.length - 1] > 1e-9) xs.push(x);
+  }
+  xs.push(L);
   const segs: FlexureSegment[] = [];
   for (let i = 0; i + 1 < xs.length; i++) {
-    if (xs[i + 1] - xs[i] <= 1e-9) continue;
     segs.push(override != null
       ? { aFt: xs[i], bFt: xs[i + 1], lbFt: override, cbFixed: 1 }
       : { aFt: xs[i], bFt: xs[i + 1], lbFt: xs[i + 1] - xs[i], cbFixed: null });
   }
   return segs;
+}
+
+function loadMagnitude(l: MemberDesignInput['loads'][number]): number {
+  return l.kind === 'point' ? l.P_kip : l.kind === 'linear' ? l.w1_klf + l.w2_klf : l.w_klf;
 }
 
 /** Max of a sampled curve, refined by the parabola through the top three samples. */
@@ -109,25 +127,26 @@ export function refinedMax(y: ArrayLike<number>, x: ArrayLike<number>): { value:
 export function buildMemberContext(input: MemberDesignInput): MemberContext {
   const L = input.span_ft;
   const byCase = { D: [], L: [], Lr: [], S: [] } as Record<LoadCase, MemberDesignInput['loads']>;
-  for (const l of input.loads) byCase[l.case].push(l);
+  const hasLoad = { D: input.includeSelfWeight, L: false, Lr: false, S: false };
+  for (const l of input.loads) {
+    byCase[l.case].push(l);
+    if (loadMagnitude(l) > 0) hasLoad[l.case] = true;
+  }
   const caseLoading = {} as Record<LoadCase, SpanLoading>;
   const caseReactions = {} as Record<LoadCase, { startKip: number; endKip: number }>;
-  const present = new Set<LoadCase>();
+  const casesPresent: LoadCase[] = [];
   for (const c of LOAD_CASES) {
     caseLoading[c] = toSpanLoading(L, byCase[c]);
     caseReactions[c] = reactionsKip(caseLoading[c]);
-    const hasLoad = byCase[c].some((l) => (l.kind === 'point' ? l.P_kip : l.kind === 'linear' ? l.w1_klf + l.w2_klf : l.w_klf) > 0);
-    if (hasLoad) present.add(c);
+    if (hasLoad[c]) casesPresent.push(c);
   }
-  if (input.includeSelfWeight) present.add('D');
-  const casesPresent = LOAD_CASES.filter((c) => present.has(c));
   const comboList = loadCombinations(input.method, casesPresent, { liveLoadFactorHalf: input.liveLoadFactorHalf });
 
   // Critical points of all cases together: between them every case's q is linear.
   const all = toSpanLoading(L, input.loads);
   const xsArr = criticalPointsFt(all);
   const n = xsArr.length;
-  const xs = Float64Array.from(xsArr);
+  const xs = xsArr;
   const segments = segmentsFor(input);
   const segX: number[] = [];
   for (const s of segments) {
@@ -141,8 +160,7 @@ export function buildMemberContext(input: MemberDesignInput): MemberContext {
   for (const combo of comboList) {
     combos.push({
       combo, fD: combo.factors.D,
-      vRight: new Float64Array(n), vLeft: new Float64Array(n), m: new Float64Array(n),
-      qRight: new Float64Array(n), qLeft: new Float64Array(n), segM: new Float64Array(nSegX),
+      vRight: zeros(n), vLeft: zeros(n), m: zeros(n), qRight: zeros(n), qLeft: zeros(n), segM: zeros(nSegX),
       rStartKip: 0, rEndKip: 0, mMaxNoSwKipFt: 0, m1AtMaxNoSw: 0,
     });
   }
@@ -173,20 +191,22 @@ export function buildMemberContext(input: MemberDesignInput): MemberContext {
     }
   }
 
-  const v1 = Float64Array.from(xsArr, (x) => L / 2 - x);
-  const m1 = Float64Array.from(xsArr, (x) => uniformMomentKipFt(1, L, x));
-  const m1Seg = Float64Array.from(segX, (x) => uniformMomentKipFt(1, L, x));
+  const v1 = zeros(n);
+  const m1 = zeros(n);
+  for (let k = 0; k < n; k++) { v1[k] = L / 2 - xsArr[k]; m1[k] = uniformMomentKipFt(1, L, xsArr[k]); }
+  const m1Seg = zeros(nSegX);
+  for (let j = 0; j < nSegX; j++) m1Seg[j] = uniformMomentKipFt(1, L, segX[j]);
 
   // Deflection stations (unfactored): total = all cases together; live = each transient case alone.
   const N = DEFLECTION_INTERVALS;
-  const deflX = new Float64Array(N + 1);
-  const deflUnit = new Float64Array(N + 1);
+  const deflX = zeros(N + 1);
+  const deflUnit = zeros(N + 1);
   for (let i = 0; i <= N; i++) {
     deflX[i] = (L * i) / N;
     deflUnit[i] = uniformDeflectionEI(1, L, deflX[i]);
   }
-  const deflTotalBase = new Float64Array(N + 1);
-  const y = new Float64Array(N + 1);
+  const deflTotalBase = zeros(N + 1);
+  const y = scratchY.length === N + 1 ? scratchY : (scratchY = zeros(N + 1));
   let liveMaxEI = 0;
   let liveMaxAtFt = L / 2;
   let liveCase: LoadCase | null = null;

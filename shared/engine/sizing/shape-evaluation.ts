@@ -42,7 +42,7 @@ export interface ShapeEvaluation {
   mMaxAtFt: number;
 }
 
-let scratch = new Float64Array(0);
+let scratch: number[] = [];
 
 /** Available strength Mc from Mn: φb Mn (LRFD) or Mn/Ωb (ASD), AISC 360-16 F1. */
 export const availableFlexure = (method: 'LRFD' | 'ASD', mnKipFt: number): number =>
@@ -100,12 +100,14 @@ export function evaluateShape(ctx: MemberContext, k: WShapeConstants, detail: bo
     for (let s = 0; s < nSeg; s++) {
       const seg = segs[s];
       const j = 5 * s;
-      const mAt = (i: number): number => c.segM[j + i] + ws * ctx.m1Seg[j + i];
-      const ma = mAt(0), mb = mAt(4);
+      const segM = c.segM, m1Seg = ctx.m1Seg;
+      const ma = segM[j] + ws * m1Seg[j], mb = segM[j + 4] + ws * m1Seg[j + 4];
       // Concave M: the segment maximum is the span maximum if it lies inside, else an end.
-      const mMax = mx.xFt >= seg.aFt && mx.xFt <= seg.bFt ? mx.mKipFt : Math.max(ma, mb);
-      const mA = mAt(1), mB = mAt(2), mC = mAt(3);
-      const cb = seg.cbFixed ?? eqF1_1(Math.abs(mMax), Math.abs(mA), Math.abs(mB), Math.abs(mC));
+      const mMax = mx.xFt >= seg.aFt && mx.xFt <= seg.bFt ? mx.mKipFt : ma > mb ? ma : mb;
+      const mA = segM[j + 1] + ws * m1Seg[j + 1];
+      const mB = segM[j + 2] + ws * m1Seg[j + 2];
+      const mC = segM[j + 3] + ws * m1Seg[j + 3];
+      const cb = seg.cbFixed ?? eqF1_1(mMax < 0 ? -mMax : mMax, mA < 0 ? -mA : mA, mB < 0 ? -mB : mB, mC < 0 ? -mC : mC);
       const mn = nominalFlexureKipFt(k, seg.lbFt, cb);
       const mc = availableFlexure(method, mn);
       const ratio = mMax / mc;
@@ -133,7 +135,8 @@ export function evaluateShape(ctx: MemberContext, k: WShapeConstants, detail: bo
     deflTotalIn = deflectionIn(ctx.totalMaxNoSwEI, k.ixIn4);
     deflTotalAtFt = refinedMax(ctx.deflTotalBase, ctx.deflX).at;
   } else {
-    const y = scratch.length === ctx.deflX.length ? scratch : (scratch = new Float64Array(ctx.deflX.length));
+    if (scratch.length !== ctx.deflX.length) scratch = ctx.deflX.slice();
+    const y = scratch;
     for (let i = 0; i < y.length; i++) y[i] = ctx.deflTotalBase[i] + wKlf * ctx.deflUnit[i];
     const mx = refinedMax(y, ctx.deflX);
     deflTotalIn = deflectionIn(mx.value, k.ixIn4);
