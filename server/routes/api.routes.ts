@@ -3,10 +3,16 @@ import type { AppContext } from '../app-context';
 import { loadSession } from '../auth/auth.middleware';
 import { requireSameOrigin } from '../middleware/csrf.middleware';
 import { apiNotFound } from '../middleware/error.middleware';
+import { auditRoutes } from './audit.routes';
 import { firmsRoutes } from './firms.routes';
 import { healthRoutes } from './health.routes';
+import { invitationsRoutes } from './invitations.routes';
+import { notificationsRoutes } from './notifications.routes';
+import { outboxRoutes } from './outbox.routes';
+import { passwordResetRoutes } from './password-reset.routes';
 import { projectsRoutes } from './projects.routes';
 import { sessionRoutes } from './session.routes';
+import { teamRoutes } from './team.routes';
 
 export const JSON_BODY_LIMIT = '2mb';
 
@@ -21,6 +27,12 @@ export function apiRoutes(ctx: AppContext): Router {
   api.use('/session', sessionRoutes(ctx));
   api.use('/firms', firmsRoutes(ctx));
   api.use('/projects', projectsRoutes(ctx));
+  api.use('/invitations', invitationsRoutes(ctx));
+  api.use('/password-resets', passwordResetRoutes(ctx));
+  api.use('/team', teamRoutes(ctx));
+  api.use('/outbox', outboxRoutes(ctx));
+  api.use('/audit', auditRoutes(ctx));
+  api.use('/me/notifications', notificationsRoutes(ctx));
 
   api.use(apiNotFound);
   return api;

@@ -4,6 +4,7 @@ import { verifyAgainstDummy, verifyPassword } from '../auth/password';
 import { isRole, type Role } from '../auth/policy';
 import { AppError } from '../errors/app-error';
 import type { SignInInput } from '../schemas/session.schema';
+import { AUDIT_ACTIONS, recordAudit } from './audit.service';
 
 export interface SessionView {
   user: { id: string; email: string; name: string };
@@ -88,6 +89,8 @@ export async function signIn(
     : (await verifyAgainstDummy(input.password), false);
   if (!user || !ok) {
     ctx.limiters.perAccountFailures.hit(accountKey);
+    // Only known accounts have a firm whose log can show it.
+    if (user) await recordSignInAudit(ctx, user.getDataValue('id'), AUDIT_ACTIONS.signInFailed, input.ip);
     throw new AppError(401, 'invalid_credentials', 'Email or password is not right.');
   }
   ctx.limiters.perAccountFailures.reset(accountKey);
@@ -102,7 +105,21 @@ export async function signIn(
   const sessionId = await openSession(ctx, who);
   const view = await buildSessionView(ctx, who);
   if (!view) throw new Error('session view missing right after sign-in');
+  await recordAudit(ctx, { firmId: who.firmId, userId: who.userId, action: AUDIT_ACTIONS.signedIn, detail: { ip: input.ip } });
   return { sessionId, view };
+}
+
+async function recordSignInAudit(ctx: AppContext, userId: string, action: string, ip: string): Promise<void> {
+  const membership = await ctx.db.models.Membership.findOne({ where: { userId }, order: [['createdAt', 'ASC']] });
+  if (!membership) return;
+  const user = await ctx.db.models.User.findByPk(userId);
+  await recordAudit(ctx, {
+    firmId: membership.getDataValue('firmId'),
+    userId,
+    action,
+    target: user?.getDataValue('email') ?? null,
+    detail: { ip },
+  });
 }
 
 export async function signOut(ctx: AppContext, sessionId: string | undefined): Promise<void> {

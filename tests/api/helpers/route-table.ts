@@ -1,5 +1,6 @@
 import type { Role } from '../../../server/auth/policy';
 import { DEMO_PASSWORD } from '../../../server/db/seed-demo';
+import { newOneTimeToken } from '../../../server/services/one-time-token.service';
 import type { TestApp } from './test-app';
 
 // Every API route and who may call it. role-matrix.test.ts drives one check per row and
@@ -32,6 +33,53 @@ export interface RouteCase {
   body?: (fx: RouteFixture) => unknown;
   /** The same route aimed at another firm's resource: an allowed role must get 404. */
   foreignPath?: (fx: RouteFixture) => Promise<string>;
+}
+
+// Fixtures for the team, invitation and password-reset rows: rows made straight in the
+// database, so each call gets its own (a used token or removed person cannot be reused).
+let fixtureCounter = 0;
+const fixtureEmail = (what: string) => `${what}-${Date.now()}-${++fixtureCounter}@matrix.example`;
+
+/** A pending invitation of the demo firm (or of the other firm); returns id and token. */
+async function pendingInvitation(fx: RouteFixture, firm: 'own' | 'foreign' = 'own') {
+  const { token, tokenHash } = newOneTimeToken();
+  const row = await fx.t.ctx.db.models.Invitation.create({
+    firmId: firm === 'own' ? fx.t.seed.firmId! : fx.t.otherFirmId,
+    email: fixtureEmail('invitee'),
+    role: 'engineer',
+    tokenHash,
+    status: 'pending',
+    invitedBy: null,
+    expiresAt: new Date(Date.now() + 3600_000),
+  });
+  return { id: row.getDataValue('id'), token };
+}
+
+/** A person in the demo firm (or the other firm) with the engineer role; returns the user id. */
+async function extraMember(fx: RouteFixture, firm: 'own' | 'foreign' = 'own'): Promise<string> {
+  const { User, Membership } = fx.t.ctx.db.models;
+  const user = await User.create({ email: fixtureEmail('member'), name: 'Matrix Member', passwordHash: 'x' });
+  const userId = user.getDataValue('id');
+  await Membership.create({
+    firmId: firm === 'own' ? fx.t.seed.firmId! : fx.t.otherFirmId,
+    userId,
+    role: 'engineer',
+  });
+  return userId;
+}
+
+/** A pending password-reset token of a person of no firm (so no demo account changes). */
+async function pendingResetToken(fx: RouteFixture): Promise<string> {
+  const { User, PasswordReset } = fx.t.ctx.db.models;
+  const user = await User.create({ email: fixtureEmail('reset'), name: 'Matrix Reset', passwordHash: 'x' });
+  const { token, tokenHash } = newOneTimeToken();
+  await PasswordReset.create({
+    userId: user.getDataValue('id'),
+    tokenHash,
+    status: 'pending',
+    expiresAt: new Date(Date.now() + 3600_000),
+  });
+  return token;
 }
 
 export const ROUTE_TABLE: RouteCase[] = [
@@ -95,5 +143,98 @@ export const ROUTE_TABLE: RouteCase[] = [
     okStatus: 204,
     path: async (fx) => `/api/projects/${await fx.ownProjectId()}`,
     foreignPath: async (fx) => `/api/projects/${await fx.foreignProjectId()}`,
+  },
+  // Invitations (issue 8): owners invite; the link's token is the credential for the rest.
+  { method: 'GET', route: '/api/invitations', allowed: ['owner'], okStatus: 200 },
+  {
+    method: 'POST',
+    route: '/api/invitations',
+    allowed: ['owner'],
+    okStatus: 201,
+    body: (fx) => ({ email: fx.uniqueEmail(), role: 'drafter' }),
+  },
+  {
+    method: 'POST',
+    route: '/api/invitations/:id/resend',
+    allowed: ['owner'],
+    okStatus: 201,
+    path: async (fx) => `/api/invitations/${(await pendingInvitation(fx)).id}/resend`,
+    foreignPath: async (fx) => `/api/invitations/${(await pendingInvitation(fx, 'foreign')).id}/resend`,
+  },
+  {
+    method: 'DELETE',
+    route: '/api/invitations/:id',
+    allowed: ['owner'],
+    okStatus: 204,
+    path: async (fx) => `/api/invitations/${(await pendingInvitation(fx)).id}`,
+    foreignPath: async (fx) => `/api/invitations/${(await pendingInvitation(fx, 'foreign')).id}`,
+  },
+  {
+    method: 'GET',
+    route: '/api/invitations/:token',
+    allowed: 'public',
+    okStatus: 200,
+    path: async (fx) => `/api/invitations/${(await pendingInvitation(fx)).token}`,
+  },
+  {
+    method: 'POST',
+    route: '/api/invitations/:token/accept',
+    allowed: 'public',
+    okStatus: 201,
+    path: async (fx) => `/api/invitations/${(await pendingInvitation(fx)).token}/accept`,
+    body: () => ({ name: 'Matrix Invitee', password: 'long-enough-password' }),
+  },
+  // Password resets: public, no account enumeration.
+  {
+    method: 'POST',
+    route: '/api/password-resets',
+    allowed: 'public',
+    okStatus: 202,
+    body: () => ({ email: 'nobody-here@matrix.example' }),
+  },
+  {
+    method: 'GET',
+    route: '/api/password-resets/:token',
+    allowed: 'public',
+    okStatus: 200,
+    path: async (fx) => `/api/password-resets/${await pendingResetToken(fx)}`,
+  },
+  {
+    method: 'POST',
+    route: '/api/password-resets/:token',
+    allowed: 'public',
+    okStatus: 200,
+    path: async (fx) => `/api/password-resets/${await pendingResetToken(fx)}`,
+    body: () => ({ password: 'a-new-long-password' }),
+  },
+  // Team, outbox, audit log: the owner's.
+  { method: 'GET', route: '/api/team', allowed: ['owner'], okStatus: 200 },
+  {
+    method: 'PATCH',
+    route: '/api/team/:userId',
+    allowed: ['owner'],
+    okStatus: 200,
+    path: async (fx) => `/api/team/${await extraMember(fx)}`,
+    body: () => ({ role: 'drafter' }),
+    foreignPath: async (fx) => `/api/team/${await extraMember(fx, 'foreign')}`,
+  },
+  {
+    method: 'DELETE',
+    route: '/api/team/:userId',
+    allowed: ['owner'],
+    okStatus: 204,
+    path: async (fx) => `/api/team/${await extraMember(fx)}`,
+    foreignPath: async (fx) => `/api/team/${await extraMember(fx, 'foreign')}`,
+  },
+  { method: 'GET', route: '/api/outbox', allowed: ['owner'], okStatus: 200 },
+  { method: 'GET', route: '/api/audit', allowed: ['owner'], okStatus: 200 },
+  // Each person's own notification settings.
+  { method: 'GET', route: '/api/me/notifications', allowed: 'signed-in', okStatus: 200 },
+  {
+    method: 'PUT',
+    route: '/api/me/notifications',
+    allowed: 'signed-in',
+    okStatus: 200,
+    body: () => ({ schemeSubmitted: true, schemeChosen: false }),
   },
 ];
