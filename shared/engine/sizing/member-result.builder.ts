@@ -1,5 +1,6 @@
 import { OMEGA_B, PHI_B } from '../design/aisc360/resistance-factors';
 import { nominalFlexure } from '../design/aisc360/w-shape-constants';
+import { DEFLECTION_CLAUSE, deflectionLimitIn } from '../design/serviceability/deflection.serviceability';
 import { IN_PER_FT } from '../units/units.constants';
 import type { MemberContext } from './member-context';
 import type { CaseReactions, MemberCheck, MemberDesignResult, MemberSegment } from './member-design.types';
@@ -50,19 +51,18 @@ export function buildMemberResult(ctx: MemberContext, ev: ShapeEvaluation, locke
   };
   const checks: MemberCheck[] = [flexure, shear];
   const lim = ctx.input.deflectionLimits;
-  const spanIn = ctx.spanFt * IN_PER_FT;
   if (lim.live != null) {
     checks.push({
-      name: 'deflectionLive', clause: 'IBC Table 1604.3 (serviceability)', equation: `Δ ≤ L/${lim.live}`,
-      combination: ctx.liveCase ?? 'L', demand: ev.deflLiveIn, capacity: spanIn / lim.live, ratio: ev.ratioLive!,
+      name: 'deflectionLive', clause: DEFLECTION_CLAUSE, equation: `Δ ≤ L/${lim.live}`,
+      combination: ctx.liveCase ?? 'L', demand: ev.deflLiveIn, capacity: deflectionLimitIn(ctx.spanFt, lim.live), ratio: ev.ratioLive!,
       unit: 'in', limit_n: lim.live, loadCase: ctx.liveCase ?? 'none', Ix_in4: k.ixIn4, at_ft: ctx.liveMaxAtFt,
     });
   }
   if (lim.total != null) {
     const name = ctx.casesPresent.join('+');
     checks.push({
-      name: 'deflectionTotal', clause: 'IBC Table 1604.3 (serviceability)', equation: `Δ ≤ L/${lim.total}`,
-      combination: name, demand: ev.deflTotalIn, capacity: spanIn / lim.total, ratio: ev.ratioTotal!,
+      name: 'deflectionTotal', clause: DEFLECTION_CLAUSE, equation: `Δ ≤ L/${lim.total}`,
+      combination: name, demand: ev.deflTotalIn, capacity: deflectionLimitIn(ctx.spanFt, lim.total), ratio: ev.ratioTotal!,
       unit: 'in', limit_n: lim.total, loadCase: name, Ix_in4: k.ixIn4, at_ft: ev.deflTotalAtFt,
     });
   }

@@ -1,7 +1,8 @@
 import { eqF1_1 } from '../design/aisc360/chapter-f/f1';
 import { OMEGA_B, PHI_B } from '../design/aisc360/resistance-factors';
 import { nominalFlexureKipFt, type WShapeConstants } from '../design/aisc360/w-shape-constants';
-import { E_KSI, IN3_PER_FT3, IN_PER_FT } from '../units/units.constants';
+import { deflectionIn, deflectionRatio } from '../design/serviceability/deflection.serviceability';
+import { IN_PER_FT } from '../units/units.constants';
 import { maxMomentOfCombination, refinedMax, type MemberContext } from './member-context';
 import type { CheckName } from './member-design.types';
 
@@ -51,8 +52,7 @@ export const availableFlexure = (method: 'LRFD' | 'ASD', mnKipFt: number): numbe
 export const availableShear = (method: 'LRFD' | 'ASD', k: WShapeConstants): number =>
   method === 'LRFD' ? k.shear.phiV * k.shear.vnKip : k.shear.vnKip / k.shear.omegaV;
 
-/** Deflection in inches from EI·y in kip·ft³. */
-export const deflectionIn = (eiKipFt3: number, ixIn4: number): number => (eiKipFt3 * IN3_PER_FT3) / (E_KSI * ixIn4);
+export { deflectionIn } from '../design/serviceability/deflection.serviceability';
 
 /** Lower-bound test: false only when the shape cannot pass (a necessary condition fails). */
 export function mayPass(ctx: MemberContext, k: WShapeConstants): boolean {
@@ -127,7 +127,6 @@ export function evaluateShape(ctx: MemberContext, k: WShapeConstants, detail: bo
   const ratioShear = vrKip / vcKip;
 
   const lim = ctx.input.deflectionLimits;
-  const spanIn = ctx.spanFt * IN_PER_FT;
   const deflLiveIn = deflectionIn(ctx.liveMaxEI, k.ixIn4);
   let deflTotalIn: number;
   let deflTotalAtFt: number;
@@ -142,8 +141,8 @@ export function evaluateShape(ctx: MemberContext, k: WShapeConstants, detail: bo
     deflTotalIn = deflectionIn(mx.value, k.ixIn4);
     deflTotalAtFt = mx.at;
   }
-  const ratioLive = lim.live == null ? null : deflLiveIn / (spanIn / lim.live);
-  const ratioTotal = lim.total == null ? null : deflTotalIn / (spanIn / lim.total);
+  const ratioLive = deflectionRatio(deflLiveIn, ctx.spanFt, lim.live);
+  const ratioTotal = deflectionRatio(deflTotalIn, ctx.spanFt, lim.total);
 
   const flexure = best!;
   let ratio = flexure.ratio;
