@@ -21,6 +21,9 @@ import { defineLineLoadModel } from './line-load.model';
 import { defineOpeningModel } from './opening.model';
 import { definePlanRevisionModel } from './plan-revision.model';
 import { defineDesignRunModel } from './design-run.model';
+import { defineSchemeCommentModel } from './scheme-comment.model';
+import { defineSchemeActivityModel } from './scheme-activity.model';
+import { defineUnitPriceModel } from './unit-price.model';
 
 // Models are defined per Sequelize instance (tests run many in-memory databases), so the
 // app passes this object around instead of importing model classes globally.
@@ -49,6 +52,10 @@ export function defineModels(sequelize: Sequelize) {
     OutboxMessage: defineOutboxMessageModel(sequelize),
     AuditEvent: defineAuditEventModel(sequelize),
     NotificationPreference: defineNotificationPreferenceModel(sequelize),
+    // Scheme comments, activity and the firm's unit prices (0006-scheme-status-prices).
+    SchemeComment: defineSchemeCommentModel(sequelize),
+    SchemeActivity: defineSchemeActivityModel(sequelize),
+    UnitPrice: defineUnitPriceModel(sequelize),
   };
 }
 
