@@ -1,5 +1,6 @@
 /** `npm run bench`: runs each benchmark module and prints its figures. Add plan benchmarks beside member. */
 import { runMemberBench, type BenchReport } from './member.bench';
+import { runPlanBench } from './plan.bench';
 
 const benches: (() => BenchReport)[] = [runMemberBench];
 
@@ -12,3 +13,5 @@ for (const run of benches) {
       `${r.passed} passed; peak RSS ${r.peakRssMb.toFixed(1)} MB, peak heap ${r.peakHeapMb.toFixed(1)} MB\n`,
   );
 }
+
+runPlanBench();

@@ -5,12 +5,13 @@
 import type { Point } from './polygon.geometry';
 
 export class SegmentGridIndex<T> {
-  private readonly buckets = new Map<string, T[]>();
+  private readonly buckets = new Map<number, T[]>();
 
   constructor(private readonly cellFt: number) {}
 
-  private key(ix: number, iy: number): string {
-    return `${ix},${iy}`;
+  /** Numeric cell key; plans stay far inside ±2^20 cells. */
+  private key(ix: number, iy: number): number {
+    return (ix + 1048576) * 2097152 + (iy + 1048576);
   }
 
   /** Insert an item under every cell its segment's box (grown by padFt) touches. */

@@ -68,14 +68,20 @@ export function runsAlongSpan(fm: FramingMember, span: 'x' | 'y'): boolean {
   return Math.abs(a[1] - b[1]) <= SUPPORT_TOLERANCE_FT;
 }
 
-function boxesOverlap(poly: readonly (readonly [number, number])[], fm: FramingMember): boolean {
+type Box = [number, number, number, number];
+function polygonBox(poly: readonly (readonly [number, number])[]): Box {
   const xs = poly.map((p) => p[0]);
   const ys = poly.map((p) => p[1]);
+  return [Math.min(...xs), Math.min(...ys), Math.max(...xs), Math.max(...ys)];
+}
+
+/** The member's box meets the deck's box grown by padFt (negative: strictly inside by that much). */
+function touchesBox(box: Box, fm: FramingMember, padFt: number): boolean {
   return (
-    Math.max(fm.start[0], fm.end[0]) > Math.min(...xs) &&
-    Math.min(fm.start[0], fm.end[0]) < Math.max(...xs) &&
-    Math.max(fm.start[1], fm.end[1]) > Math.min(...ys) &&
-    Math.min(fm.start[1], fm.end[1]) < Math.max(...ys)
+    Math.max(fm.start[0], fm.end[0]) >= box[0] - padFt &&
+    Math.min(fm.start[0], fm.end[0]) <= box[2] + padFt &&
+    Math.max(fm.start[1], fm.end[1]) >= box[1] - padFt &&
+    Math.min(fm.start[1], fm.end[1]) <= box[3] + padFt
   );
 }
 
@@ -96,14 +102,15 @@ export function buildDeckContexts(plan: Plan, topology: FramingTopology): { deck
     if (!zone || deck.polygon.length < 3) return; // reported by the repair step
     const supporters: DeckSupporter[] = [];
     const axes = new Map<string, MemberAxisInDeck>();
+    const box = polygonBox(deck.polygon);
     for (const fm of membersByLevel.get(deck.level) ?? []) {
-      if (!boxesOverlap(deck.polygon, fm) && !touchesBox(deck.polygon, fm)) continue;
+      if (!touchesBox(box, fm, SUPPORT_TOLERANCE_FT)) continue;
       if (runsAcrossSpan(fm, deck.spanDirection)) {
         const a = toDeckFrame(fm.start, deck.spanDirection);
         const b = toDeckFrame(fm.end, deck.spanDirection);
         supporters.push({ id: fm.id, u_ft: (a[0] + b[0]) / 2, vMin_ft: Math.min(a[1], b[1]), vMax_ft: Math.max(a[1], b[1]) });
         axes.set(fm.id, { vStart_ft: a[1], sign: b[1] >= a[1] ? 1 : -1, span_ft: fm.span_ft });
-      } else if (!runsAlongSpan(fm, deck.spanDirection) && boxesOverlap(deck.polygon, fm)) {
+      } else if (!runsAlongSpan(fm, deck.spanDirection) && touchesBox(box, fm, -SUPPORT_TOLERANCE_FT)) {
         problems.push(
           planProblem('warning', 'member-skew-to-deck', `Member ${fm.id}: at an angle to the span of deck ${deck.id}; it takes no load from that deck (only members square across the span carry deck)`, {
             elementId: fm.id,
@@ -126,18 +133,6 @@ export function buildDeckContexts(plan: Plan, topology: FramingTopology): { deck
     decks.push({ deck, zone, roof: roofLevels.has(deck.level), supporters, axes, tributary });
   });
   return { decks, problems };
-}
-
-function touchesBox(poly: readonly (readonly [number, number])[], fm: FramingMember): boolean {
-  const t = SUPPORT_TOLERANCE_FT;
-  const xs = poly.map((p) => p[0]);
-  const ys = poly.map((p) => p[1]);
-  return (
-    Math.max(fm.start[0], fm.end[0]) >= Math.min(...xs) - t &&
-    Math.min(fm.start[0], fm.end[0]) <= Math.max(...xs) + t &&
-    Math.max(fm.start[1], fm.end[1]) >= Math.min(...ys) - t &&
-    Math.min(fm.start[1], fm.end[1]) <= Math.max(...ys) + t
-  );
 }
 
 const widthText = (w1: number, w2: number) => (Math.abs(w1 - w2) < 0.005 ? `${w1.toFixed(1)} ft` : `${w1.toFixed(1)}–${w2.toFixed(1)} ft`);

@@ -50,6 +50,8 @@ export interface DeckTributaryResult {
   netArea_ft2: number;
   /** Ranges of v (deck frame) along which the deck bears on each member (for bracing). */
   bearing_v: Map<string, [number, number][]>;
+  /** Working state: each member's latest strip, to extend it across band cuts. */
+  lastStrip: Map<string, DeckStrip>;
 }
 
 /** Plan (x, y) → deck frame (u, v). */
@@ -129,7 +131,7 @@ export function computeDeckTributary(
   }
   const vs = [...cuts].sort((a, b) => a - b);
 
-  const result: DeckTributaryResult = { strips: [], overhangMemberIds: new Set(), unsupported: [], netArea_ft2: 0, bearing_v: new Map() };
+  const result: DeckTributaryResult = { strips: [], overhangMemberIds: new Set(), unsupported: [], netArea_ft2: 0, bearing_v: new Map(), lastStrip: new Map() };
   for (let i = 0; i + 1 < vs.length; i++) {
     if (vs[i + 1] - vs[i] > 1e-9) addBand(vs[i], vs[i + 1], deck, holesNear, candidates, span, result, 0);
   }
@@ -171,17 +173,19 @@ function addBandInterval(
   const vm = (va + vb) / 2;
   const holeIntervals = holes.flatMap((h) => intervalsAt(h, vm));
   const lines: Linear[] = [interval.left, interval.right, ...holeIntervals.flatMap((h) => [h.left, h.right])];
-  const constants = inside.flatMap((s, k) => (k + 1 < inside.length ? [s.u_ft, (s.u_ft + inside[k + 1].u_ft) / 2] : [s.u_ft]));
-  const all: Linear[] = [...lines, ...constants.map((c) => ({ a: c, b: 0 }))];
-  for (const f of lines) {
-    if (f.b === 0) continue;
-    for (const g of all) {
-      if (g === f || g.b === f.b) continue;
-      const v = (g.a - f.a) / (f.b - g.b);
-      if (v > va + 1e-7 && v < vb - 1e-7 && depth < 64) {
-        addBandInterval(va, v, interval, holes, inside, span, out, depth + 1);
-        addBandInterval(v, vb, interval, holes, inside, span, out, depth + 1);
-        return;
+  if (lines.some((f) => f.b !== 0) && depth < 64) {
+    const constants = inside.flatMap((s, k) => (k + 1 < inside.length ? [s.u_ft, (s.u_ft + inside[k + 1].u_ft) / 2] : [s.u_ft]));
+    const all: Linear[] = [...lines, ...constants.map((c) => ({ a: c, b: 0 }))];
+    for (const f of lines) {
+      if (f.b === 0) continue;
+      for (const g of all) {
+        if (g === f || g.b === f.b) continue;
+        const v = (g.a - f.a) / (f.b - g.b);
+        if (v > va + 1e-7 && v < vb - 1e-7) {
+          addBandInterval(va, v, interval, holes, inside, span, out, depth + 1);
+          addBandInterval(v, vb, interval, holes, inside, span, out, depth + 1);
+          return;
+        }
       }
     }
   }
@@ -198,10 +202,14 @@ function addStripsInBand(
   span: SpanDirection,
   out: DeckTributaryResult,
 ): void {
-  const holesAt = (v: number) => holeIntervals.map((h) => [valueAt(h.left, v), valueAt(h.right, v)] as [number, number]);
-  const netAt = (v: number) => lengthOutsideHoles(valueAt(interval.left, v), valueAt(interval.right, v), holesAt(v));
-  const netA = netAt(va);
-  const netB = netAt(vb);
+  const holesA = holeIntervals.map((h) => [valueAt(h.left, va), valueAt(h.right, va)] as [number, number]);
+  const holesB = holeIntervals.map((h) => [valueAt(h.left, vb), valueAt(h.right, vb)] as [number, number]);
+  const uLA = valueAt(interval.left, va);
+  const uRA = valueAt(interval.right, va);
+  const uLB = valueAt(interval.left, vb);
+  const uRB = valueAt(interval.right, vb);
+  const netA = lengthOutsideHoles(uLA, uRA, holesA);
+  const netB = lengthOutsideHoles(uLB, uRB, holesB);
   out.netArea_ft2 += ((netA + netB) / 2) * (vb - va);
   if (inside.length === 0) {
     const area = ((netA + netB) / 2) * (vb - va);
@@ -213,15 +221,13 @@ function addStripsInBand(
     return;
   }
   inside.forEach((s, k) => {
-    const widthAt = (v: number) => {
-      const uL = valueAt(interval.left, v);
-      const uR = valueAt(interval.right, v);
+    const widthAt = (uL: number, uR: number, holesHere: readonly [number, number][]) => {
       const lo = k === 0 ? uL : Math.max(uL, (inside[k - 1].u_ft + s.u_ft) / 2);
       const hi = k === inside.length - 1 ? uR : Math.min(uR, (s.u_ft + inside[k + 1].u_ft) / 2);
-      return lengthOutsideHoles(lo, hi, holesAt(v));
+      return holesHere.length === 0 ? Math.max(0, hi - lo) : lengthOutsideHoles(lo, hi, holesHere);
     };
-    const w1 = widthAt(va);
-    const w2 = widthAt(vb);
+    const w1 = widthAt(uLA, uRA, holesA);
+    const w2 = widthAt(uLB, uRB, holesB);
     const vm = (va + vb) / 2;
     if ((k === 0 && s.u_ft - valueAt(interval.left, vm) > SUPPORT_TOLERANCE_FT) || (k === inside.length - 1 && valueAt(interval.right, vm) - s.u_ft > SUPPORT_TOLERANCE_FT)) {
       out.overhangMemberIds.add(s.id);
@@ -229,6 +235,16 @@ function addStripsInBand(
     const ranges = out.bearing_v.get(s.id);
     if (ranges) ranges.push([va, vb]);
     else out.bearing_v.set(s.id, [[va, vb]]);
-    if (w1 > 1e-12 || w2 > 1e-12) out.strips.push({ memberId: s.id, v1_ft: va, v2_ft: vb, width1_ft: w1, width2_ft: w2 });
+    if (w1 > 1e-12 || w2 > 1e-12) {
+      // Continue the member's previous strip when the width carries on unchanged (fewer, longer loads).
+      const last = out.lastStrip.get(s.id);
+      if (last && Math.abs(last.v2_ft - va) < 1e-12 && last.width1_ft === last.width2_ft && w1 === w2 && Math.abs(last.width2_ft - w1) <= 1e-12 * Math.max(1, w1)) {
+        last.v2_ft = vb;
+      } else {
+        const strip = { memberId: s.id, v1_ft: va, v2_ft: vb, width1_ft: w1, width2_ft: w2 };
+        out.strips.push(strip);
+        out.lastStrip.set(s.id, strip);
+      }
+    }
   });
 }

@@ -170,7 +170,24 @@ export function memberDesignInput(plan: Plan, mt: MemberTakedown, forcedShape: s
 
 /** Key of the design input: positions and magnitudes rounded far below any engineering meaning. */
 function inputKey(input: MemberDesignInput): string {
-  return JSON.stringify(input, (k, v) => (k === 'source' ? undefined : typeof v === 'number' ? Math.round(v * 1e9) / 1e9 : v));
+  const n = (v: number) => Math.round(v * 1e9) / 1e9;
+  const loads = input.loads.map((l) => {
+    switch (l.kind) {
+      case 'uniform':
+        return `${l.case}u${n(l.w_klf)}`;
+      case 'partial':
+        return `${l.case}p${n(l.w_klf)},${n(l.from_ft)},${n(l.to_ft)}`;
+      case 'linear':
+        return `${l.case}l${n(l.w1_klf)},${n(l.w2_klf)},${n(l.from_ft)},${n(l.to_ft)}`;
+      case 'point':
+        return `${l.case}P${n(l.P_kip)},${n(l.x_ft)}`;
+    }
+  });
+  return [
+    n(input.span_ft), typeof input.bracing === 'string' ? input.bracing : input.bracing.points_ft.map(n).join(','), input.method, input.Fy_ksi,
+    input.deflectionLimits.live, input.deflectionLimits.total, input.shape ?? '', input.maxDepth_in ?? '', input.minDepth_in ?? '',
+    (input.allowedNominalDepths ?? []).join(','), input.includeSelfWeight, input.Lb_override_ft ?? '', input.liveLoadFactorHalf ?? '', loads.join(';'),
+  ].join('|');
 }
 
 /** Group key: level, kind, span, bracing and the layout (case, kind, position) of the loads. */

@@ -27,6 +27,7 @@ export const LOAD_CASES: readonly LoadCase[] = ['D', 'L', 'Lr', 'S'];
  * (a deck cut into bands by an opening elsewhere), and write a full-length one as uniform.
  */
 export function mergeContiguousLoads<T extends LoadDistribution>(loads: readonly T[], spanFt: number, sameKind: (a: T, b: T) => boolean): T[] {
+  if (loads.filter((l) => l.kind === 'partial').length < 2 && !loads.some((l) => l.kind === 'partial' && l.from_ft <= 1e-9 && l.to_ft >= spanFt - 1e-9)) return [...loads];
   const out: T[] = [];
   const partials = loads.filter((l) => l.kind === 'partial').sort((a, b) => (a as { from_ft: number }).from_ft - (b as { from_ft: number }).from_ft);
   const consumed = new Set<T>();
