@@ -1,6 +1,7 @@
 import { hashPassword } from '../auth/password';
 import type { Role } from '../auth/policy';
 import type { Db } from '../models/models';
+import { demoBuildingStep } from './seed-demo-building';
 
 // Demo data: an invented firm and project of Baywright's own. Every step is idempotent
 // (find-or-create by a natural key), so the seed can run again on a seeded database.
@@ -88,6 +89,8 @@ export const DEMO_SEED_STEPS: SeedStep[] = [
       state.projectId = project.getDataValue('id');
     },
   },
+  // The clinic building: two framing schemes, each designed (seed-demo-building.ts).
+  demoBuildingStep,
 ];
 
 /** Runs every demo seed step in order; safe to run again. */

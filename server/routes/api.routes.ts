@@ -11,6 +11,7 @@ import { notificationsRoutes } from './notifications.routes';
 import { outboxRoutes } from './outbox.routes';
 import { passwordResetRoutes } from './password-reset.routes';
 import { projectsRoutes } from './projects.routes';
+import { projectSchemesRoutes, schemesRoutes } from './schemes.routes';
 import { sessionRoutes } from './session.routes';
 import { teamRoutes } from './team.routes';
 
@@ -27,6 +28,8 @@ export function apiRoutes(ctx: AppContext): Router {
   api.use('/session', sessionRoutes(ctx));
   api.use('/firms', firmsRoutes(ctx));
   api.use('/projects', projectsRoutes(ctx));
+  api.use('/projects', projectSchemesRoutes(ctx));
+  api.use('/schemes', schemesRoutes(ctx));
   api.use('/invitations', invitationsRoutes(ctx));
   api.use('/password-resets', passwordResetRoutes(ctx));
   api.use('/team', teamRoutes(ctx));

@@ -1,6 +1,7 @@
 import type { Role } from '../../../server/auth/policy';
 import { DEMO_PASSWORD } from '../../../server/db/seed-demo';
 import { newOneTimeToken } from '../../../server/services/one-time-token.service';
+import { makeScheme, twoBayPlan } from './schemes-fixture';
 import type { TestApp } from './test-app';
 
 // Every API route and who may call it. role-matrix.test.ts drives one check per row and
@@ -237,4 +238,56 @@ export const ROUTE_TABLE: RouteCase[] = [
     okStatus: 200,
     body: () => ({ schemeSubmitted: true, schemeChosen: false }),
   },
+  // Schemes and plans: everyone in the firm reads; engineers and owners write.
+  {
+    method: 'GET',
+    route: '/api/projects/:id/schemes',
+    allowed: ['owner', 'engineer', 'drafter', 'manager'],
+    okStatus: 200,
+    path: async (fx) => `/api/projects/${(await makeScheme(fx.t)).projectId}/schemes`,
+    foreignPath: async (fx) => `/api/projects/${(await makeScheme(fx.t, { firm: 'foreign' })).projectId}/schemes`,
+  },
+  {
+    method: 'POST',
+    route: '/api/projects/:id/schemes',
+    allowed: ['owner', 'engineer'],
+    okStatus: 201,
+    path: async (fx) => `/api/projects/${await fx.ownProjectId()}/schemes`,
+    body: () => ({ name: 'Matrix scheme' }),
+    foreignPath: async (fx) => `/api/projects/${await fx.foreignProjectId()}/schemes`,
+  },
+  ...schemeRows(),
 ];
+
+function schemeRows(): RouteCase[] {
+  const own = (suffix = '', designed = false) => async (fx: RouteFixture) =>
+    `/api/schemes/${(await makeScheme(fx.t, { designed })).schemeId}${suffix}`;
+  const foreign = (suffix = '') => async (fx: RouteFixture) =>
+    `/api/schemes/${(await makeScheme(fx.t, { firm: 'foreign', designed: true })).schemeId}${suffix}`;
+  const readers = ['owner', 'engineer', 'drafter', 'manager'] as const;
+  const writers = ['owner', 'engineer'] as const;
+  return [
+    { method: 'GET', route: '/api/schemes/:id', allowed: readers, okStatus: 200, path: own(), foreignPath: foreign() },
+    {
+      method: 'PATCH', route: '/api/schemes/:id', allowed: writers, okStatus: 200,
+      path: own(), body: () => ({ name: 'Renamed in the matrix' }), foreignPath: foreign(),
+    },
+    { method: 'DELETE', route: '/api/schemes/:id', allowed: writers, okStatus: 204, path: own(), foreignPath: foreign() },
+    { method: 'GET', route: '/api/schemes/:id/export', allowed: readers, okStatus: 200, path: own('/export'), foreignPath: foreign('/export') },
+    {
+      method: 'PUT', route: '/api/schemes/:id/plan', allowed: writers, okStatus: 200,
+      path: own('/plan'), body: () => ({ revision: 1, plan: twoBayPlan() }), foreignPath: foreign('/plan'),
+    },
+    { method: 'POST', route: '/api/schemes/:id/design', allowed: writers, okStatus: 200, path: own('/design'), foreignPath: foreign('/design') },
+    { method: 'GET', route: '/api/schemes/:id/design', allowed: readers, okStatus: 200, path: own('/design', true), foreignPath: foreign('/design') },
+    {
+      method: 'POST', route: '/api/schemes/:id/clone', allowed: writers, okStatus: 201,
+      path: own('/clone'), body: () => ({}), foreignPath: foreign('/clone'),
+    },
+    { method: 'GET', route: '/api/schemes/:id/revisions', allowed: readers, okStatus: 200, path: own('/revisions'), foreignPath: foreign('/revisions') },
+    {
+      method: 'POST', route: '/api/schemes/:id/revisions/:revision/restore', allowed: writers, okStatus: 200,
+      path: own('/revisions/1/restore'), foreignPath: foreign('/revisions/1/restore'),
+    },
+  ];
+}

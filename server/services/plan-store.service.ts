@@ -1,0 +1,382 @@
+import type { Model, Transaction } from 'sequelize';
+import {
+  exportPlanFile,
+  PLAN_FORMAT,
+  type Plan,
+  type PlanFileInput,
+  type PlanMember,
+} from '../../shared/schemas/plan.schema';
+import { planProblem, type PlanProblem } from '../../shared/schemas/plan-problem.schema';
+import { AppError } from '../errors/app-error';
+import type { Db } from '../models/models';
+import type { ColumnAttributes } from '../models/column.model';
+import type { DeckAttributes } from '../models/deck.model';
+import type { GridLineAttributes } from '../models/grid-line.model';
+import type { LevelAttributes } from '../models/level.model';
+import type { LineLoadAttributes } from '../models/line-load.model';
+import type { MemberAttributes } from '../models/member.model';
+import type { OpeningAttributes } from '../models/opening.model';
+import type { PointLoadAttributes } from '../models/point-load.model';
+import type { ZoneAttributes } from '../models/zone.model';
+import type { SchemeAttributes, SchemeCreation } from '../models/scheme.model';
+
+// The current plan of a scheme lives in the normalized element tables; this file turns a
+// plan into rows and rows back into the same plan, and writes a plan together with its
+// revision bump and revision snapshot in one transaction.
+
+/** Who is calling: the firm scopes every read, the user signs every write. */
+export interface SchemeActor {
+  firmId: string;
+  userId: string;
+}
+
+/** What scheme services take: the database and the caller (never req/res). */
+export interface SchemeServiceContext {
+  db: Db;
+  actor: SchemeActor;
+}
+
+export type SchemeRow = Model<SchemeAttributes, SchemeCreation>;
+
+/** A scheme of the caller's firm; another firm's scheme is "not found", never forbidden. */
+export async function findOwnScheme(ctx: SchemeServiceContext, schemeId: string, transaction?: Transaction): Promise<SchemeRow> {
+  const { models } = ctx.db;
+  const scheme = await models.Scheme.findByPk(schemeId, { transaction });
+  if (scheme) {
+    const project = await models.Project.findOne({
+      where: { id: scheme.getDataValue('projectId'), firmId: ctx.actor.firmId },
+      attributes: ['id'],
+      transaction,
+    });
+    if (project) return scheme;
+  }
+  throw AppError.notFound('Scheme');
+}
+
+export async function assertOwnProject(ctx: SchemeServiceContext, projectId: string): Promise<void> {
+  const project = await ctx.db.models.Project.findOne({
+    where: { id: projectId, firmId: ctx.actor.firmId },
+    attributes: ['id'],
+  });
+  if (!project) throw AppError.notFound('Project');
+}
+
+// ---------------------------------------------------------------------------------------
+// Storage limits: what the columns hold. Checked before writing so a long id is a clear
+// 422 naming the element on every database, not a driver error.
+
+const LIMITS = { id: 255, name: 200, label: 50, shape: 40, mark: 40 } as const;
+
+export function storageProblems(plan: Plan): PlanProblem[] {
+  const problems: PlanProblem[] = [];
+  const check = (value: string | null | undefined, max: number, path: string, elementId?: string, what = 'text') => {
+    if (value != null && value.length > max) {
+      problems.push(
+        planProblem('error', 'value-too-long', `${path}${elementId ? ` (id ${elementId.slice(0, 40)})` : ''}: ${what} is longer than ${max} characters`, {
+          elementId,
+          path,
+        }),
+      );
+    }
+  };
+  const ids = (collection: string, items: { id?: string }[]) =>
+    items.forEach((item, i) => check(item.id, LIMITS.id, `${collection}[${i}].id`, item.id, 'id'));
+  ids('levels', plan.levels);
+  ids('grids', plan.grids ?? []);
+  ids('columns', plan.columns);
+  ids('members', plan.members);
+  ids('zones', plan.zones);
+  ids('decks', plan.decks);
+  ids('pointLoads', plan.pointLoads);
+  ids('lineLoads', plan.lineLoads);
+  ids('openings', plan.openings);
+  plan.levels.forEach((l, i) => check(l.name, LIMITS.name, `levels[${i}].name`, l.id, 'name'));
+  plan.zones.forEach((z, i) => check(z.name, LIMITS.name, `zones[${i}].name`, z.id, 'name'));
+  (plan.grids ?? []).forEach((g, i) => check(g.label, LIMITS.label, `grids[${i}].label`, g.id, 'label'));
+  plan.members.forEach((m, i) => {
+    check(m.shape, LIMITS.shape, `members[${i}].shape`, m.id, 'shape');
+    check(m.mark, LIMITS.mark, `members[${i}].mark`, m.id, 'mark');
+  });
+  return problems;
+}
+
+// ---------------------------------------------------------------------------------------
+// Plan → rows
+
+/** Member fields that are optional and may also be null: NULL in the column means absent
+ *  unless the field is listed in null_fields. */
+const MEMBER_OPTIONAL_NULLABLE = ['minDepth_in', 'allowedNominalDepths', 'Lb_override_ft', 'bracing', 'mark'] as const;
+
+function memberRow(schemeId: string, m: PlanMember, position: number): Omit<MemberAttributes, 'id'> {
+  const explicitNulls = MEMBER_OPTIONAL_NULLABLE.filter((k) => k in m && m[k] === null);
+  return {
+    schemeId,
+    elementId: m.id,
+    position,
+    levelId: m.level,
+    kind: m.kind,
+    startXFt: m.start[0],
+    startYFt: m.start[1],
+    endXFt: m.end[0],
+    endYFt: m.end[1],
+    shape: m.shape,
+    maxDepthIn: m.maxDepth_in,
+    minDepthIn: m.minDepth_in ?? null,
+    allowedNominalDepths: m.allowedNominalDepths ?? null,
+    lbOverrideFt: m.Lb_override_ft ?? null,
+    bracing: m.bracing ?? null,
+    mark: m.mark ?? null,
+    markLocked: m.markLocked ?? null,
+    nullFields: explicitNulls.length > 0 ? explicitNulls.join(',') : null,
+  };
+}
+
+const ELEMENT_MODELS = ['Level', 'GridLine', 'Column', 'Member', 'Zone', 'Deck', 'PointLoad', 'LineLoad', 'Opening'] as const;
+
+/** Replaces the scheme's element rows with the plan's (inside the caller's transaction). */
+export async function replacePlanRows(db: Db, schemeId: string, plan: Plan, transaction: Transaction): Promise<void> {
+  const { models } = db;
+  for (const name of ELEMENT_MODELS) {
+    await (models[name] as typeof models.Level).destroy({ where: { schemeId }, transaction });
+  }
+  const opts = { transaction };
+  const at = <T>(items: T[]) => items.map((item, position) => ({ item, position }));
+  await models.Level.bulkCreate(
+    at(plan.levels).map(({ item: l, position }) => ({
+      schemeId, elementId: l.id, position, name: l.name, elevationFt: l.elevation_ft, roof: l.roof ?? null,
+    })),
+    opts,
+  );
+  await models.GridLine.bulkCreate(
+    at(plan.grids ?? []).map(({ item: g, position }) => ({
+      schemeId, elementId: g.id, position, axis: g.axis, label: g.label, offsetFt: g.offset_ft,
+    })),
+    opts,
+  );
+  await models.Column.bulkCreate(
+    at(plan.columns).map(({ item: c, position }) => ({
+      schemeId, elementId: c.id, position, xFt: c.x_ft, yFt: c.y_ft, levels: c.levels,
+    })),
+    opts,
+  );
+  await models.Member.bulkCreate(plan.members.map((m, position) => memberRow(schemeId, m, position)), opts);
+  await models.Zone.bulkCreate(
+    at(plan.zones).map(({ item: z, position }) => ({
+      schemeId,
+      elementId: z.id,
+      position,
+      name: z.name,
+      deadPsf: z.dead_psf,
+      superimposedDeadPsf: z.superimposedDead_psf,
+      partitionPsf: z.partition_psf,
+      livePsf: z.live_psf,
+      liveReducible: z.liveReducible,
+      roofLivePsf: z.roofLive_psf,
+      snowPsf: z.snow_psf,
+    })),
+    opts,
+  );
+  await models.Deck.bulkCreate(
+    at(plan.decks).map(({ item: d, position }) => ({
+      schemeId, elementId: d.id, position, levelId: d.level, polygon: d.polygon, spanDirection: d.spanDirection, zoneId: d.zone,
+    })),
+    opts,
+  );
+  await models.PointLoad.bulkCreate(
+    at(plan.pointLoads).map(({ item: p, position }) => ({
+      schemeId,
+      elementId: p.id,
+      position,
+      levelId: p.level,
+      xFt: p.x_ft,
+      yFt: p.y_ft,
+      dKip: p.D_kip,
+      lKip: p.L_kip,
+      lrKip: p.Lr_kip ?? null,
+      sKip: p.S_kip ?? null,
+    })),
+    opts,
+  );
+  await models.LineLoad.bulkCreate(
+    at(plan.lineLoads).map(({ item: w, position }) => ({
+      schemeId,
+      elementId: w.id,
+      position,
+      levelId: w.level,
+      startXFt: w.start[0],
+      startYFt: w.start[1],
+      endXFt: w.end[0],
+      endYFt: w.end[1],
+      dKlf: w.D_klf,
+      lKlf: w.L_klf,
+      lrKlf: w.Lr_klf ?? null,
+      sKlf: w.S_klf ?? null,
+    })),
+    opts,
+  );
+  await models.Opening.bulkCreate(
+    at(plan.openings).map(({ item: o, position }) => ({
+      schemeId, elementId: o.id, position, levelId: o.level, polygon: o.polygon,
+    })),
+    opts,
+  );
+}
+
+// ---------------------------------------------------------------------------------------
+// Rows → plan
+
+/** Sets key on target only when the stored value says it was present. */
+function setOptional<T extends object, K extends string>(target: T, key: K, value: unknown, explicitNull = false): void {
+  if (value !== null && value !== undefined) (target as Record<string, unknown>)[key] = value;
+  else if (explicitNull) (target as Record<string, unknown>)[key] = null;
+}
+
+/** Rebuilds the scheme's plan file from its rows (the inverse of replacePlanRows). */
+export async function readPlan(db: Db, scheme: SchemeAttributes, transaction?: Transaction): Promise<Plan> {
+  const { models } = db;
+  const q = { where: { schemeId: scheme.id }, order: [['position', 'ASC']] as [string, string][], raw: true, transaction };
+  const [levels, grids, columns, members, zones, decks, pointLoads, lineLoads, openings] = await Promise.all([
+    models.Level.findAll(q),
+    models.GridLine.findAll(q),
+    models.Column.findAll(q),
+    models.Member.findAll(q),
+    models.Zone.findAll(q),
+    models.Deck.findAll(q),
+    models.PointLoad.findAll(q),
+    models.LineLoad.findAll(q),
+    models.Opening.findAll(q),
+  ]);
+  // raw rows: JSON columns come back parsed on every dialect Sequelize supports except
+  // SQLite raw queries, where they may be strings.
+  const json = <T>(value: unknown): T => (typeof value === 'string' ? (JSON.parse(value) as T) : (value as T));
+  const bool = (value: unknown): boolean | null => (value === null || value === undefined ? null : Boolean(value));
+  const a = <T>(rows: unknown[]) => rows as T[];
+
+  const plan: Plan = {
+    format: PLAN_FORMAT,
+    version: 1,
+    name: scheme.name,
+    designBasis: json(scheme.designBasis),
+    levels: a<LevelAttributes>(levels).map((l) => {
+      const level: Plan['levels'][number] = { id: l.elementId, name: l.name, elevation_ft: l.elevationFt };
+      setOptional(level, 'roof', bool(l.roof));
+      return level;
+    }),
+    columns: a<ColumnAttributes>(columns).map((c) => ({ id: c.elementId, x_ft: c.xFt, y_ft: c.yFt, levels: json<string[]>(c.levels) })),
+    members: a<MemberAttributes>(members).map((r) => {
+      const nulls = new Set((r.nullFields ?? '').split(',').filter(Boolean));
+      const m: PlanMember = {
+        id: r.elementId,
+        level: r.levelId,
+        kind: r.kind,
+        start: [r.startXFt, r.startYFt],
+        end: [r.endXFt, r.endYFt],
+        shape: r.shape,
+        maxDepth_in: r.maxDepthIn,
+      };
+      setOptional(m, 'minDepth_in', r.minDepthIn, nulls.has('minDepth_in'));
+      setOptional(m, 'allowedNominalDepths', r.allowedNominalDepths === null ? null : json(r.allowedNominalDepths), nulls.has('allowedNominalDepths'));
+      setOptional(m, 'Lb_override_ft', r.lbOverrideFt, nulls.has('Lb_override_ft'));
+      setOptional(m, 'bracing', r.bracing === null ? null : json(r.bracing), nulls.has('bracing'));
+      setOptional(m, 'mark', r.mark, nulls.has('mark'));
+      setOptional(m, 'markLocked', bool(r.markLocked));
+      return m;
+    }),
+    zones: a<ZoneAttributes>(zones).map((z) => ({
+      id: z.elementId,
+      name: z.name,
+      dead_psf: z.deadPsf,
+      superimposedDead_psf: z.superimposedDeadPsf,
+      partition_psf: z.partitionPsf,
+      live_psf: z.livePsf,
+      liveReducible: Boolean(z.liveReducible),
+      roofLive_psf: z.roofLivePsf,
+      snow_psf: z.snowPsf,
+    })),
+    decks: a<DeckAttributes>(decks).map((d) => ({
+      id: d.elementId, level: d.levelId, polygon: json(d.polygon), spanDirection: d.spanDirection, zone: d.zoneId,
+    })),
+    pointLoads: a<PointLoadAttributes>(pointLoads).map((p) => {
+      const load: Plan['pointLoads'][number] = { id: p.elementId, level: p.levelId, x_ft: p.xFt, y_ft: p.yFt, D_kip: p.dKip, L_kip: p.lKip };
+      setOptional(load, 'Lr_kip', p.lrKip);
+      setOptional(load, 'S_kip', p.sKip);
+      return load;
+    }),
+    lineLoads: a<LineLoadAttributes>(lineLoads).map((w) => {
+      const load: Plan['lineLoads'][number] = {
+        id: w.elementId, level: w.levelId, start: [w.startXFt, w.startYFt], end: [w.endXFt, w.endYFt], D_klf: w.dKlf, L_klf: w.lKlf,
+      };
+      setOptional(load, 'Lr_klf', w.lrKlf);
+      setOptional(load, 'S_klf', w.sKlf);
+      return load;
+    }),
+    openings: a<OpeningAttributes>(openings).map((o) => ({ id: o.elementId, level: o.levelId, polygon: json(o.polygon) })),
+  };
+  if (scheme.hasGrids) {
+    plan.grids = a<GridLineAttributes>(grids).map((g) => ({ id: g.elementId, axis: g.axis, label: g.label, offset_ft: g.offsetFt }));
+  }
+  return plan;
+}
+
+// ---------------------------------------------------------------------------------------
+// Writing a revision
+
+export interface CommitInput {
+  plan: Plan;
+  userId: string;
+  note: string | null;
+  /** The revision the writer started from; the write fails with 409 when it is not current. */
+  expectedRevision: number;
+}
+
+export class RevisionConflict extends Error {
+  constructor() {
+    super('revision conflict');
+    this.name = 'RevisionConflict';
+  }
+}
+
+/**
+ * Writes the plan as the scheme's next revision in one transaction: revision bump (compare
+ * and set on the expected revision), element rows, revision snapshot. Any failure rolls
+ * everything back, so the previously saved plan is never lost. Returns the new revision.
+ */
+export async function commitPlanRevision(db: Db, scheme: SchemeRow, input: CommitInput): Promise<number> {
+  const schemeId = scheme.getDataValue('id');
+  const next = input.expectedRevision + 1;
+  const plan: Plan = { ...input.plan, name: scheme.getDataValue('name') };
+  return db.sequelize.transaction(async (transaction) => {
+    const [updated] = await db.models.Scheme.update(
+      {
+        revision: next,
+        updatedBy: input.userId,
+        designBasis: plan.designBasis,
+        hasGrids: plan.grids !== undefined,
+      },
+      { where: { id: schemeId, revision: input.expectedRevision }, transaction },
+    );
+    if (updated !== 1) throw new RevisionConflict();
+    await replacePlanRows(db, schemeId, plan, transaction);
+    await db.models.PlanRevision.create(
+      { schemeId, revision: next, plan: exportPlanFile(plan), note: input.note, userId: input.userId },
+      { transaction },
+    );
+    return next;
+  });
+}
+
+/** Writes the first revision of a new scheme (row already created inside transaction). */
+export async function writeInitialRevision(
+  db: Db,
+  schemeId: string,
+  plan: Plan,
+  userId: string,
+  note: string | null,
+  transaction: Transaction,
+): Promise<void> {
+  await replacePlanRows(db, schemeId, plan, transaction);
+  await db.models.PlanRevision.create(
+    { schemeId, revision: 1, plan: exportPlanFile(plan) as PlanFileInput, note, userId },
+    { transaction },
+  );
+}

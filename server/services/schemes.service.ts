@@ -1,0 +1,410 @@
+import type { WhereOptions } from 'sequelize';
+import { buildFramingTopology } from '../../shared/engine/index';
+import {
+  exportPlanFile,
+  parsePlanFile,
+  PLAN_FORMAT,
+  type Plan,
+  type PlanDesignBasis,
+  type PlanFileInput,
+  type PlanProblem,
+} from '../../shared/schemas/plan.schema';
+import { AppError } from '../errors/app-error';
+import type { SchemeAttributes, SchemeStatus } from '../models/scheme.model';
+import type { SchemePatchInput } from '../schemas/scheme.schema';
+import {
+  assertOwnProject,
+  commitPlanRevision,
+  findOwnScheme,
+  readPlan,
+  RevisionConflict,
+  storageProblems,
+  writeInitialRevision,
+  type SchemeRow,
+  type SchemeServiceContext,
+} from './plan-store.service';
+import { latestDesignRuns, storeDesignRun, toDesignSummary, type DesignSummary } from './scheme-design.service';
+
+export type { SchemeServiceContext } from './plan-store.service';
+
+/** The design basis of a new scheme (design-basis.md §1, §5; IBC Table 1604.3 floor limits). */
+export const DEFAULT_DESIGN_BASIS: PlanDesignBasis = {
+  method: 'LRFD',
+  Fy_ksi: 50,
+  liveLoadReduction: true,
+  deflectionLimits: { live: 360, total: 240 },
+};
+
+/** A new scheme: one level, no framing yet. */
+export function emptyPlan(name: string): Plan {
+  return {
+    format: PLAN_FORMAT,
+    version: 1,
+    name,
+    designBasis: structuredClone(DEFAULT_DESIGN_BASIS),
+    grids: [],
+    levels: [{ id: 'L2', name: 'Level 2', elevation_ft: 14 }],
+    columns: [],
+    members: [],
+    zones: [],
+    decks: [],
+    pointLoads: [],
+    lineLoads: [],
+    openings: [],
+  };
+}
+
+export interface PersonRef {
+  id: string;
+  name: string;
+}
+
+export interface SchemeSummary {
+  id: string;
+  projectId: string;
+  name: string;
+  status: SchemeStatus;
+  archived: boolean;
+  revision: number;
+  designBasis: PlanDesignBasis;
+  createdBy: PersonRef | null;
+  updatedBy: PersonRef | null;
+  createdAt: string;
+  updatedAt: string;
+  /** The latest design run, or null when never designed. */
+  design: DesignSummary | null;
+  /** True when there is no design of the current revision (never designed, or saved since). */
+  designStale: boolean;
+}
+
+export interface SchemeDetail extends SchemeSummary {
+  plan: PlanFileInput;
+}
+
+async function peopleByIds(ctx: SchemeServiceContext, ids: (string | null)[]): Promise<Map<string, PersonRef>> {
+  const wanted = [...new Set(ids.filter((id): id is string => typeof id === 'string'))];
+  const out = new Map<string, PersonRef>();
+  if (wanted.length === 0) return out;
+  const users = await ctx.db.models.User.findAll({ where: { id: wanted }, attributes: ['id', 'name'] });
+  for (const u of users) out.set(u.getDataValue('id'), { id: u.getDataValue('id'), name: u.getDataValue('name') });
+  return out;
+}
+
+async function toSummaries(ctx: SchemeServiceContext, rows: SchemeAttributes[]): Promise<SchemeSummary[]> {
+  const people = await peopleByIds(ctx, rows.flatMap((r) => [r.createdBy, r.updatedBy]));
+  const runs = await latestDesignRuns(ctx.db, rows.map((r) => r.id));
+  return rows.map((s) => {
+    const run = runs.get(s.id);
+    const design = run ? toDesignSummary(run, s.revision) : null;
+    return {
+      id: s.id,
+      projectId: s.projectId,
+      name: s.name,
+      status: s.status,
+      archived: Boolean(s.archived),
+      revision: s.revision,
+      designBasis: typeof s.designBasis === 'string' ? JSON.parse(s.designBasis) : s.designBasis,
+      createdBy: s.createdBy ? (people.get(s.createdBy) ?? null) : null,
+      updatedBy: s.updatedBy ? (people.get(s.updatedBy) ?? null) : null,
+      createdAt: new Date(s.createdAt).toISOString(),
+      updatedAt: new Date(s.updatedAt).toISOString(),
+      design,
+      designStale: design === null || design.stale,
+    };
+  });
+}
+
+async function toDetail(ctx: SchemeServiceContext, row: SchemeRow): Promise<SchemeDetail> {
+  const attrs = row.get({ plain: true });
+  const [summary] = await toSummaries(ctx, [attrs]);
+  const plan = await readPlan(ctx.db, attrs);
+  return { ...summary, plan: exportPlanFile(plan) };
+}
+
+/** Reads a plan document through migrations, zod and repair; 422 plan_invalid naming each element. */
+export function acceptPlan(document: unknown): { plan: Plan; repairs: string[]; warnings: PlanProblem[] } {
+  const { plan, repairs, problems } = parsePlanFile(document);
+  const errors = problems.filter((p) => p.severity === 'error');
+  if (plan) errors.push(...storageProblems(plan));
+  if (!plan || errors.length > 0) {
+    const first = errors[0]?.message ?? 'the file is not a plan';
+    throw new AppError(
+      422,
+      'plan_invalid',
+      `The plan cannot be saved: ${first}${errors.length > 1 ? ` (and ${errors.length - 1} more)` : ''}.`,
+      { details: { problems: errors, repairs } },
+    );
+  }
+  return { plan, repairs, warnings: problems.filter((p) => p.severity !== 'error') };
+}
+
+/**
+ * Problems of a saved plan that do not stop it being saved: a drawing in progress is
+ * legitimately incomplete (a member end that lands on nothing yet, a zero-length member,
+ * a support cycle). They are reported with the save and again by the design.
+ */
+function topologyProblems(plan: Plan): PlanProblem[] {
+  try {
+    return buildFramingTopology(plan).problems;
+  } catch {
+    return [];
+  }
+}
+
+// ---------------------------------------------------------------------------------------
+
+export async function listSchemes(
+  ctx: SchemeServiceContext,
+  projectId: string,
+  options: { archived: 'include' | 'exclude' | 'only' } = { archived: 'include' },
+): Promise<SchemeSummary[]> {
+  await assertOwnProject(ctx, projectId);
+  const where: WhereOptions<SchemeAttributes> =
+    options.archived === 'include'
+      ? { projectId }
+      : { projectId, archived: options.archived === 'only' };
+  const rows = await ctx.db.models.Scheme.findAll({ where, order: [['createdAt', 'ASC'], ['name', 'ASC']] });
+  return toSummaries(ctx, rows.map((r) => r.get({ plain: true })));
+}
+
+export async function getScheme(ctx: SchemeServiceContext, schemeId: string): Promise<SchemeDetail> {
+  return toDetail(ctx, await findOwnScheme(ctx, schemeId));
+}
+
+/** Creates a scheme with an empty plan ({name}) or from an imported plan file ({name?, plan}). */
+export async function createScheme(
+  ctx: SchemeServiceContext,
+  projectId: string,
+  input: { name?: string; plan?: unknown },
+): Promise<SchemeDetail & { repairs: string[]; problems: PlanProblem[] }> {
+  await assertOwnProject(ctx, projectId);
+  let plan: Plan;
+  let repairs: string[] = [];
+  let warnings: PlanProblem[] = [];
+  if (input.plan !== undefined) {
+    ({ plan, repairs, warnings } = acceptPlan(input.plan));
+  } else {
+    plan = emptyPlan(input.name ?? 'Scheme');
+  }
+  const name = (input.name ?? plan.name.trim()).slice(0, 200) || 'Imported scheme';
+  plan = { ...plan, name };
+  const row = await insertScheme(ctx, projectId, plan, input.plan !== undefined ? 'Imported from a plan file' : 'New scheme');
+  const detail = await toDetail(ctx, row);
+  return { ...detail, repairs, problems: [...warnings, ...topologyProblems(plan)] };
+}
+
+async function insertScheme(ctx: SchemeServiceContext, projectId: string, plan: Plan, note: string): Promise<SchemeRow> {
+  const { db, actor } = ctx;
+  return db.sequelize.transaction(async (transaction) => {
+    const row = await db.models.Scheme.create(
+      {
+        projectId,
+        name: plan.name,
+        designBasis: plan.designBasis,
+        hasGrids: plan.grids !== undefined,
+        revision: 1,
+        createdBy: actor.userId,
+        updatedBy: actor.userId,
+      },
+      { transaction },
+    );
+    await writeInitialRevision(db, row.getDataValue('id'), plan, actor.userId, note, transaction);
+    return row;
+  });
+}
+
+export interface RevisionConflictCurrent {
+  revision: number;
+  plan: PlanFileInput;
+  updatedBy: PersonRef | null;
+  updatedAt: string;
+}
+
+async function conflictError(ctx: SchemeServiceContext, schemeId: string, yourRevision: number): Promise<AppError> {
+  const detail = await getScheme(ctx, schemeId);
+  const current: RevisionConflictCurrent = {
+    revision: detail.revision,
+    plan: detail.plan,
+    updatedBy: detail.updatedBy,
+    updatedAt: detail.updatedAt,
+  };
+  return new AppError(
+    409,
+    'revision_conflict',
+    `This scheme was saved by ${current.updatedBy?.name ?? 'someone else'} since revision ${yourRevision} (it is now at revision ${current.revision}). Your changes were not saved; merge them into the current plan and save again.`,
+    { details: { current } },
+  );
+}
+
+/**
+ * PUT /api/schemes/:id/plan. Saves the plan as the next revision when `revision` is the
+ * current one (409 revision_conflict with the current plan otherwise). Plans that cannot be
+ * read or repaired are refused (422); topology problems are saved and reported.
+ */
+export async function saveSchemePlan(
+  ctx: SchemeServiceContext,
+  schemeId: string,
+  input: { revision: number; plan: unknown; note: string | null },
+): Promise<{ revision: number; repairs: string[]; problems: PlanProblem[] }> {
+  const scheme = await findOwnScheme(ctx, schemeId);
+  const { plan, repairs, warnings } = acceptPlan(input.plan);
+  try {
+    const revision = await commitPlanRevision(ctx.db, scheme, {
+      plan,
+      userId: ctx.actor.userId,
+      note: input.note,
+      expectedRevision: input.revision,
+    });
+    return { revision, repairs, problems: [...warnings, ...topologyProblems(plan)] };
+  } catch (err) {
+    if (err instanceof RevisionConflict) throw await conflictError(ctx, schemeId, input.revision);
+    throw err;
+  }
+}
+
+export async function exportScheme(
+  ctx: SchemeServiceContext,
+  schemeId: string,
+): Promise<{ filename: string; plan: PlanFileInput }> {
+  const scheme = await findOwnScheme(ctx, schemeId);
+  const attrs = scheme.get({ plain: true });
+  const plan = exportPlanFile(await readPlan(ctx.db, attrs));
+  return { filename: `${fileSlug(attrs.name)}.plan.json`, plan };
+}
+
+/** ASCII file name from a scheme name ("Scheme A — beams at 10 ft" → "scheme-a-beams-at-10-ft"). */
+export function fileSlug(name: string): string {
+  const slug = name
+    .normalize('NFKD')
+    .replace(/[\u0300-\u036f]/g, '')
+    .toLowerCase()
+    .replace(/[^a-z0-9]+/g, '-')
+    .replace(/^-+|-+$/g, '')
+    .slice(0, 80)
+    .replace(/-+$/, '');
+  return slug || 'scheme';
+}
+
+/** A copy of the scheme (plan at revision 1) with a copy of its latest design. */
+export async function cloneScheme(
+  ctx: SchemeServiceContext,
+  schemeId: string,
+  input: { name?: string },
+): Promise<SchemeDetail> {
+  const source = await findOwnScheme(ctx, schemeId);
+  const src = source.get({ plain: true });
+  const plan = await readPlan(ctx.db, src);
+  const name = input.name ?? `${src.name} (copy)`.slice(0, 200);
+  const note = `Cloned from "${src.name}" revision ${src.revision}`;
+  const run = await ctx.db.models.DesignRun.findOne({
+    where: { schemeId },
+    order: [['createdAt', 'DESC'], ['revision', 'DESC']],
+  });
+  const row = await ctx.db.sequelize.transaction(async (transaction) => {
+    const created = await ctx.db.models.Scheme.create(
+      {
+        projectId: src.projectId,
+        name,
+        designBasis: plan.designBasis,
+        hasGrids: plan.grids !== undefined,
+        revision: 1,
+        createdBy: ctx.actor.userId,
+        updatedBy: ctx.actor.userId,
+      },
+      { transaction },
+    );
+    const newId = created.getDataValue('id');
+    await writeInitialRevision(ctx.db, newId, { ...plan, name }, ctx.actor.userId, note, transaction);
+    if (run) {
+      const r = run.get({ plain: true });
+      // The copy is current when the source's design was; a stale design stays stale (revision 0).
+      const result = typeof r.result === 'string' ? JSON.parse(r.result) : r.result;
+      await storeDesignRun(
+        ctx.db,
+        { schemeId: newId, revision: r.revision === src.revision ? 1 : 0, result: { ...result, name }, userId: ctx.actor.userId },
+        transaction,
+      );
+    }
+    return created;
+  });
+  return toDetail(ctx, row);
+}
+
+/** Rename or archive; neither changes the plan revision. */
+export async function updateScheme(
+  ctx: SchemeServiceContext,
+  schemeId: string,
+  patch: SchemePatchInput,
+): Promise<SchemeSummary> {
+  const scheme = await findOwnScheme(ctx, schemeId);
+  const changes: Partial<SchemeAttributes> = { updatedBy: ctx.actor.userId };
+  if (patch.name !== undefined) changes.name = patch.name;
+  if (patch.archived !== undefined) changes.archived = patch.archived;
+  await scheme.update(changes);
+  const [summary] = await toSummaries(ctx, [scheme.get({ plain: true })]);
+  return summary;
+}
+
+export async function deleteScheme(ctx: SchemeServiceContext, schemeId: string): Promise<void> {
+  const scheme = await findOwnScheme(ctx, schemeId);
+  // Element rows, revisions and design runs go with it (ON DELETE CASCADE, 0003).
+  await scheme.destroy();
+}
+
+export interface RevisionEntry {
+  revision: number;
+  userId: string | null;
+  userName: string | null;
+  createdAt: string;
+  note: string | null;
+  current: boolean;
+}
+
+export async function listRevisions(ctx: SchemeServiceContext, schemeId: string): Promise<RevisionEntry[]> {
+  const scheme = await findOwnScheme(ctx, schemeId);
+  const current = scheme.getDataValue('revision');
+  const rows = await ctx.db.models.PlanRevision.findAll({
+    where: { schemeId },
+    attributes: ['revision', 'userId', 'createdAt', 'note'],
+    order: [['revision', 'DESC']],
+  });
+  const people = await peopleByIds(ctx, rows.map((r) => r.getDataValue('userId')));
+  return rows.map((r) => {
+    const userId = r.getDataValue('userId');
+    return {
+      revision: r.getDataValue('revision'),
+      userId,
+      userName: userId ? (people.get(userId)?.name ?? null) : null,
+      createdAt: new Date(r.getDataValue('createdAt')).toISOString(),
+      note: r.getDataValue('note'),
+      current: r.getDataValue('revision') === current,
+    };
+  });
+}
+
+/** Restore = a new revision whose plan equals the old one (nothing in between is lost). */
+export async function restoreRevision(
+  ctx: SchemeServiceContext,
+  schemeId: string,
+  revision: number,
+): Promise<SchemeDetail & { restoredFrom: number }> {
+  const scheme = await findOwnScheme(ctx, schemeId);
+  const old = await ctx.db.models.PlanRevision.findOne({ where: { schemeId, revision } });
+  if (!old) throw AppError.notFound(`Revision ${revision}`);
+  const snapshot = old.getDataValue('plan');
+  // Snapshots written by an older Baywright pass the plan file's migrations first.
+  const { plan } = acceptPlan(typeof snapshot === 'string' ? JSON.parse(snapshot) : snapshot);
+  const expectedRevision = scheme.getDataValue('revision');
+  try {
+    await commitPlanRevision(ctx.db, scheme, {
+      plan,
+      userId: ctx.actor.userId,
+      note: `Restored revision ${revision}`,
+      expectedRevision,
+    });
+  } catch (err) {
+    if (err instanceof RevisionConflict) throw await conflictError(ctx, schemeId, expectedRevision);
+    throw err;
+  }
+  return { ...(await getScheme(ctx, schemeId)), restoredFrom: revision };
+}
