@@ -17,7 +17,7 @@ export const memberLoadSchema = z.discriminatedUnion('kind', [
   z.object({ case: loadCase, kind: z.literal('linear'), w1_klf: num, w2_klf: num, from_ft: num, to_ft: num, source }),
   z.object({ case: loadCase, kind: z.literal('point'), P_kip: num, x_ft: num, source }),
 ], {
-  error: (iss) => (iss.code === 'invalid_type' ? 'must be a load object with a kind' : 'must be one of uniform, partial, linear, point'),
+  error: (iss) => (iss.input === null || typeof iss.input !== 'object' ? 'must be a load object with a kind' : 'must be one of uniform, partial, linear, point'),
 });
 
 export const bracingSchema = z.union([

@@ -61,8 +61,7 @@ export function designMember(input: MemberDesignInput): MemberDesignResult {
       result.passes = false;
       result.failure = `Locked shape ${k.label}: web noncompact in flexure at Fy = ${input.Fy_ksi} ksi (AISC 360-16 F4 not implemented; not permitted).`;
     } else if (!result.passes) {
-      result.failure = `Locked shape ${k.label} does not pass: ratio ${result.ratio.toFixed(3)}, ${describeGoverning(
-        { governing: result.governing } as ShapeEvaluation, result)}.`;
+      result.failure = `Locked shape ${k.label} does not pass: ratio ${result.ratio.toFixed(3)}, ${describeGoverning(result)}.`;
     }
     return result;
   }
@@ -89,7 +88,7 @@ export function designMember(input: MemberDesignInput): MemberDesignResult {
   const result = buildMemberResult(ctx, evaluateShape(ctx, best.k, true), false);
   result.passes = false;
   result.failure = `No W-shape${constraintText(input)} passes. Best ratio reached: ${result.ratio.toFixed(3)} with ${
-    result.shape}, governed by ${describeGoverning(best, result)}.`;
+    result.shape}, governed by ${describeGoverning(result)}.`;
   return result;
 }
 

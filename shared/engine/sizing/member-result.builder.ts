@@ -14,10 +14,11 @@ const CHECK_LABEL: Record<string, string> = {
   flexure: 'flexure', shear: 'shear', deflectionLive: 'live-load deflection', deflectionTotal: 'total-load deflection',
 };
 
-export function describeGoverning(ev: ShapeEvaluation, result: Pick<MemberDesignResult, 'checks'>): string {
-  const chk = result.checks.find((c) => c.name === ev.governing);
+/** "flexure (AISC 360-16 F2.2, 1.2D+1.6L)": the governing check of a built result, in words. */
+export function describeGoverning(result: Pick<MemberDesignResult, 'checks' | 'governing'>): string {
+  const chk = result.checks.find((c) => c.name === result.governing);
   const where = chk ? ` (${chk.clause}, ${chk.combination})` : '';
-  return `${CHECK_LABEL[ev.governing]}${where}`;
+  return `${CHECK_LABEL[result.governing]}${where}`;
 }
 
 /** Builds the full result, with every check's working, from one shape's evaluation. */

@@ -122,6 +122,14 @@ describe('member design against AISC Design Examples (companion to the 15th ed. 
     }
   });
 
+  it('when shapes weigh the same, then the shallower comes first in the selection order (design-basis §5)', () => {
+    const order = candidateShapes(base()).map((k) => k.label);
+    // W10X22, W12X22 and W14X22 all weigh 22 lb/ft (AISC Shapes Database v15.0); d = 10.2, 12.3, 13.7 in
+    expect(order.indexOf('W10X22')).toBeLessThan(order.indexOf('W12X22'));
+    expect(order.indexOf('W12X22')).toBeLessThan(order.indexOf('W14X22'));
+    expect(order.indexOf('W14X22') + 1).toBeLessThan(order.length);
+  });
+
   it('when allowed nominal depths are given, then only those series are chosen', () => {
     const r = designMember(base({ allowedNominalDepths: [16] }));
     expect(r.shape.startsWith('W16X')).toBe(true);

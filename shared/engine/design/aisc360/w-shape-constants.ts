@@ -116,6 +116,7 @@ function forFy(fyKsi: number): FyCache {
     const all = listWShapes().map((s) => computeWShapeConstants(s, fyKsi));
     const byWeight = [...all].sort((a, b) => a.weightPlf - b.weightPlf || a.dIn - b.dIn || (a.label < b.label ? -1 : a.label > b.label ? 1 : 0));
     c = { all, byLabel: new Map(all.map((k) => [k.label.toUpperCase(), k])), byWeight };
+    if (cache.size >= 16) cache.clear(); // a handful of steel grades in practice
     cache.set(fyKsi, c);
   }
   return c;
