@@ -49,7 +49,9 @@ test('when an owner walks through every screen, then each carries the caution', 
 
   await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Team' }).click();
   await expect(page.getByRole('heading', { name: 'Team', level: 1 })).toBeVisible();
-  await expect(page.getByRole('row', { name: /Owner/ })).toHaveAttribute('aria-current', 'true');
+  await expect(
+    page.getByRole('table', { name: 'What each role may do' }).getByRole('row', { name: /Owner/ }),
+  ).toHaveAttribute('aria-current', 'true');
   await expectCaution(page);
   await page.screenshot({ path: `${SCREENSHOT_DIR}/team.png`, fullPage: true });
 });

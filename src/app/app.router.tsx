@@ -22,8 +22,12 @@ export const appRoutes: RouteObject[] = [
         children: [
           { path: paths.signIn.path, lazy: page(() => import('../routes/signin.route')) },
           { path: paths.signUp.path, lazy: page(() => import('../routes/signup.route')) },
+          { path: paths.passwordForgot.path, lazy: page(() => import('../routes/password-forgot.route')) },
         ],
       },
+      // Links from e-mails: open whether or not someone is signed in on this browser.
+      { path: paths.invitationAccept.path, lazy: page(() => import('../routes/invitation-accept.route')) },
+      { path: paths.passwordReset.path, lazy: page(() => import('../routes/password-reset.route')) },
       {
         element: <AppShellLayout />,
         children: [
@@ -42,6 +46,8 @@ export const appRoutes: RouteObject[] = [
           },
           { path: paths.settings.path, lazy: page(() => import('../routes/settings.route')) },
           { path: paths.team.path, lazy: page(() => import('../routes/team.route')) },
+          { path: paths.outbox.path, lazy: page(() => import('../routes/outbox.route')) },
+          { path: paths.audit.path, lazy: page(() => import('../routes/audit.route')) },
           { path: '*', lazy: page(() => import('../routes/not-found.route')) },
         ],
       },

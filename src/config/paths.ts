@@ -19,6 +19,12 @@ export const paths = {
     path: '/projects/:projectId/plan',
     href: (projectId: string | number) => `${paths.project.href(projectId)}/plan`,
   },
+  /** The plan page opened on one scheme. */
+  projectSchemePlan: {
+    path: '/projects/:projectId/plan',
+    href: (projectId: string | number, schemeId: string) =>
+      `${paths.projectPlan.href(projectId)}?scheme=${encodeURIComponent(schemeId)}`,
+  },
   projectSchedule: {
     path: '/projects/:projectId/schedule',
     href: (projectId: string | number) => `${paths.project.href(projectId)}/schedule`,
@@ -33,6 +39,17 @@ export const paths = {
   },
   settings: { path: '/settings', href: () => '/settings' },
   team: { path: '/settings/team', href: () => '/settings/team' },
+  outbox: { path: '/settings/team/outbox', href: () => '/settings/team/outbox' },
+  audit: { path: '/settings/team/audit', href: () => '/settings/team/audit' },
+  invitationAccept: {
+    path: '/invitations/:token',
+    href: (token: string) => `/invitations/${encodeURIComponent(token)}`,
+  },
+  passwordForgot: { path: '/password-forgot', href: () => '/password-forgot' },
+  passwordReset: {
+    path: '/password-reset/:token',
+    href: (token: string) => `/password-reset/${encodeURIComponent(token)}`,
+  },
 } as const;
 
 /** A `next` value is followed only when it is a path inside this app. */

@@ -20,6 +20,11 @@ export default function SignInRoute() {
       }
     >
       <SignInForm onSignedIn={() => navigate(safeNextPath(search.get('next')), { replace: true })} />
+      <p className="mt-4 text-center text-sm">
+        <Link to={paths.passwordForgot.href()} className="text-ink-soft underline-offset-4 hover:text-accent hover:underline">
+          Forgot your password?
+        </Link>
+      </p>
     </AuthCard>
   );
 }
