@@ -23,7 +23,7 @@ function draw(doc: PDFKit.PDFDocument, p: SheetPrimitive): void {
     case 'line': {
       doc.save().lineWidth(p.weight).strokeColor(toneColour(p.tone)).lineCap('butt');
       // pdfkit takes a whole dash array at run time; its typings only declare a number.
-      if (p.dash) doc.dash(p.dash as unknown as number);
+      if (p.dash) doc.dash(p.dash as unknown as number, {});
       doc.moveTo(p.x1, p.y1).lineTo(p.x2, p.y2).stroke().restore();
       return;
     }
