@@ -4,6 +4,7 @@ import * as m0001 from './migrations/0001-accounts';
 import * as m0002 from './migrations/0002-projects';
 import * as m0003 from './migrations/0003-schemes-plans';
 import * as m0004 from './migrations/0004-team-mail-audit';
+import * as m0005 from './migrations/0005-underlays';
 import * as m0006 from './migrations/0006-scheme-status-prices';
 
 export type Migration = MigrationFn<QueryInterface>;
@@ -15,6 +16,7 @@ const MIGRATIONS: { name: string; up: Migration; down: Migration }[] = [
   { name: '0002-projects', ...m0002 },
   { name: '0003-schemes-plans', ...m0003 },
   { name: '0004-team-mail-audit', ...m0004 },
+  { name: '0005-underlays', ...m0005 },
   { name: '0006-scheme-status-prices', ...m0006 },
 ];
 

@@ -24,6 +24,7 @@ import { defineDesignRunModel } from './design-run.model';
 import { defineSchemeCommentModel } from './scheme-comment.model';
 import { defineSchemeActivityModel } from './scheme-activity.model';
 import { defineUnitPriceModel } from './unit-price.model';
+import { defineUnderlayModel } from './underlay.model';
 
 // Models are defined per Sequelize instance (tests run many in-memory databases), so the
 // app passes this object around instead of importing model classes globally.
@@ -56,6 +57,8 @@ export function defineModels(sequelize: Sequelize) {
     SchemeComment: defineSchemeCommentModel(sequelize),
     SchemeActivity: defineSchemeActivityModel(sequelize),
     UnitPrice: defineUnitPriceModel(sequelize),
+    // Plan images under a level (0005-underlays).
+    Underlay: defineUnderlayModel(sequelize),
   };
 }
 

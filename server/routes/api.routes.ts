@@ -14,6 +14,7 @@ import { projectsRoutes } from './projects.routes';
 import { projectSchemesRoutes, schemesRoutes } from './schemes.routes';
 import { sessionRoutes } from './session.routes';
 import { teamRoutes } from './team.routes';
+import { underlaysRoutes } from './underlays.routes';
 
 export const JSON_BODY_LIMIT = '2mb';
 
@@ -36,6 +37,8 @@ export function apiRoutes(ctx: AppContext): Router {
   api.use('/outbox', outboxRoutes(ctx));
   api.use('/audit', auditRoutes(ctx));
   api.use('/me/notifications', notificationsRoutes(ctx));
+  // /schemes/:id/underlays and /underlays/:id (full paths inside).
+  api.use('/', underlaysRoutes(ctx));
 
   api.use(apiNotFound);
   return api;

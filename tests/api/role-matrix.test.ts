@@ -44,6 +44,11 @@ afterAll(async () => {
 async function call(agent: Agent, row: RouteCase, path: string) {
   const body = row.body?.(fx);
   const req = agent[row.method.toLowerCase() as 'get' | 'post' | 'put' | 'patch' | 'delete'](path);
+  if (row.multipart) {
+    const m = row.multipart(fx);
+    for (const [name, value] of Object.entries(m.fields)) req.field(name, value);
+    return req.attach(m.file.field, m.file.content, m.file.filename);
+  }
   return body === undefined ? req : req.send(body as object);
 }
 

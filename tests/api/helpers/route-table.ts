@@ -1,7 +1,9 @@
 import type { Role } from '../../../server/auth/policy';
 import { DEMO_PASSWORD } from '../../../server/db/seed-demo';
 import { newOneTimeToken } from '../../../server/services/one-time-token.service';
+import { createUnderlay } from '../../../server/services/underlays.service';
 import { makeScheme, twoBayPlan } from './schemes-fixture';
+import { tinyPng } from './underlay-images';
 import type { TestApp } from './test-app';
 
 // Every API route and who may call it. role-matrix.test.ts drives one check per row and
@@ -34,6 +36,8 @@ export interface RouteCase {
   body?: (fx: RouteFixture) => unknown;
   /** The same route aimed at another firm's resource: an allowed role must get 404. */
   foreignPath?: (fx: RouteFixture) => Promise<string>;
+  /** A multipart body (file upload) instead of JSON. */
+  multipart?: (fx: RouteFixture) => { fields: Record<string, string>; file: { field: string; content: Buffer; filename: string } };
 }
 
 // Fixtures for the team, invitation and password-reset rows: rows made straight in the
@@ -257,7 +261,40 @@ export const ROUTE_TABLE: RouteCase[] = [
     foreignPath: async (fx) => `/api/projects/${await fx.foreignProjectId()}/schemes`,
   },
   ...schemeRows(),
+  ...underlayRows(),
 ];
+
+/** Underlays: every role of the firm sees them; engineers and owners upload, place and delete. */
+function underlayRows(): RouteCase[] {
+  const readers = ['owner', 'engineer', 'drafter', 'manager'] as const;
+  const writers = ['owner', 'engineer'] as const;
+  const scheme = (firm: 'own' | 'foreign', suffix: string) => async (fx: RouteFixture) =>
+    `/api/schemes/${(await makeScheme(fx.t, { firm })).schemeId}${suffix}`;
+  const underlay = (firm: 'own' | 'foreign', suffix = '') => async (fx: RouteFixture) => {
+    const { schemeId } = await makeScheme(fx.t, { firm });
+    const user = firm === 'own' ? fx.t.seed.userIds.engineer! : (await fx.t.ctx.db.models.User.findOne({ where: { email: 'rosalind@quillon.example' } }))!.getDataValue('id');
+    const actor = { firmId: firm === 'own' ? fx.t.seed.firmId! : fx.t.otherFirmId, userId: user };
+    const u = await createUnderlay(fx.t.ctx.db, { uploadDir: fx.t.config.uploadDir }, actor, schemeId, {
+      levelId: 'L2',
+      file: { buffer: tinyPng(2, 2), originalName: 'matrix.png' },
+    });
+    return `/api/underlays/${u.id}${suffix}`;
+  };
+  return [
+    {
+      method: 'POST', route: '/api/schemes/:id/underlays', allowed: writers, okStatus: 201,
+      path: scheme('own', '/underlays'), foreignPath: scheme('foreign', '/underlays'),
+      multipart: () => ({ fields: { level: 'L2' }, file: { field: 'file', content: tinyPng(2, 2), filename: 'matrix.png' } }),
+    },
+    { method: 'GET', route: '/api/schemes/:id/underlays', allowed: readers, okStatus: 200, path: scheme('own', '/underlays'), foreignPath: scheme('foreign', '/underlays') },
+    { method: 'GET', route: '/api/underlays/:id/image', allowed: readers, okStatus: 200, path: underlay('own', '/image'), foreignPath: underlay('foreign', '/image') },
+    {
+      method: 'PATCH', route: '/api/underlays/:id', allowed: writers, okStatus: 200,
+      path: underlay('own'), body: () => ({ opacity: 0.7 }), foreignPath: underlay('foreign'),
+    },
+    { method: 'DELETE', route: '/api/underlays/:id', allowed: writers, okStatus: 204, path: underlay('own'), foreignPath: underlay('foreign') },
+  ];
+}
 
 function schemeRows(): RouteCase[] {
   const own = (suffix = '', designed = false) => async (fx: RouteFixture) =>

@@ -1,3 +1,5 @@
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import type { AddressInfo } from 'node:net';
 import type { Server } from 'node:http';
 import type { Express } from 'express';
@@ -46,6 +48,8 @@ export interface TestApp {
 export function testConfig(overrides: Partial<Config> = {}): Config {
   return {
     ...loadConfig({ NODE_ENV: 'test', DATABASE_URL: 'sqlite::memory:' }),
+    // Uploaded files (underlays) go to the OS temp folder, never into the repository's data/.
+    uploadDir: join(tmpdir(), 'baywright-test-uploads'),
     ...overrides,
   };
 }

@@ -1,0 +1,282 @@
+// Underlays: an architectural plan image under one level of a scheme, to trace framing over.
+// The type is read from the file's CONTENT (magic bytes and header), never from its name or
+// the browser's mime type; the pixel size comes from the header too. Bytes are stored on disk
+// under <uploadDir>/underlays/<uuid>.<ext>; the row keeps the metadata and the placement.
+// Every lookup goes through the scheme's project to the caller's firm: another firm's scheme
+// or underlay is "not found", never forbidden.
+import { randomUUID } from 'node:crypto';
+import { mkdir, rm, stat, writeFile } from 'node:fs/promises';
+import { basename, join, resolve } from 'node:path';
+import type { Model } from 'sequelize';
+import { AppError } from '../errors/app-error';
+import type { Db } from '../models/models';
+import type { UnderlayAttributes, UnderlayCreation } from '../models/underlay.model';
+
+export const UNDERLAY_MAX_BYTES = 10 * 1024 * 1024;
+/** Larger sides do not draw reliably in browser canvases. */
+export const UNDERLAY_MAX_SIDE_PX = 16384;
+/** A fresh underlay: 0.05 ft per px (a 3000 px scan covers 150 ft) until it is calibrated. */
+export const UNDERLAY_DEFAULT_SCALE_FT_PER_PX = 0.05;
+export const UNDERLAY_DEFAULT_OPACITY = 0.5;
+
+export type UnderlayMime = 'image/png' | 'image/jpeg';
+
+export interface ImageInfo {
+  mime: UnderlayMime;
+  extension: 'png' | 'jpg';
+  widthPx: number;
+  heightPx: number;
+}
+
+export interface UnderlayPlacement {
+  /** Plan coordinates (ft) of the image's top-left pixel. */
+  origin_ft: [number, number];
+  scale_ft_per_px: number;
+  /** Counter-clockwise on the plan about the top-left corner. */
+  rotation_deg: number;
+}
+
+export interface UnderlayView {
+  id: string;
+  schemeId: string;
+  levelId: string;
+  filename: string;
+  mime: UnderlayMime;
+  bytes: number;
+  width_px: number;
+  height_px: number;
+  placement: UnderlayPlacement;
+  opacity: number;
+  visible: boolean;
+  imageUrl: string;
+  createdBy: string | null;
+  createdAt: string;
+  updatedAt: string;
+}
+
+export interface UnderlayPatch {
+  placement?: Partial<UnderlayPlacement>;
+  opacity?: number;
+  visible?: boolean;
+}
+
+const PNG_SIGNATURE = [0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a];
+
+function startsWith(buf: Uint8Array, bytes: readonly number[]): boolean {
+  return buf.length >= bytes.length && bytes.every((b, i) => buf[i] === b);
+}
+
+function unsupported(message: string): AppError {
+  return new AppError(415, 'unsupported_media_type', message, { fields: { file: message } });
+}
+
+/** PNG: 8-byte signature, then the IHDR chunk (PNG spec §11.2.2) with width and height. */
+function readPng(buf: Buffer): ImageInfo {
+  if (buf.length < 33 || buf.toString('latin1', 12, 16) !== 'IHDR') {
+    throw unsupported('The file starts like a PNG but has no image header (IHDR); it may be damaged.');
+  }
+  return { mime: 'image/png', extension: 'png', widthPx: buf.readUInt32BE(16), heightPx: buf.readUInt32BE(20) };
+}
+
+/** JPEG: walk the marker segments (ITU-T T.81 Annex B) to the first start-of-frame (SOFn). */
+function readJpeg(buf: Buffer): ImageInfo {
+  let i = 2;
+  while (i + 3 < buf.length) {
+    if (buf[i] !== 0xff) break;
+    let marker = buf[i + 1];
+    while (marker === 0xff && i + 2 < buf.length) {
+      i += 1; // fill bytes
+      marker = buf[i + 1];
+    }
+    i += 2;
+    if (marker === 0xd8 || marker === 0x01 || (marker >= 0xd0 && marker <= 0xd7)) continue; // no length
+    if (marker === 0xd9 || marker === 0xda) break; // end of image or start of scan before any frame
+    if (i + 1 >= buf.length) break;
+    const length = buf.readUInt16BE(i);
+    if (length < 2) break;
+    const isSof = marker >= 0xc0 && marker <= 0xcf && marker !== 0xc4 && marker !== 0xc8 && marker !== 0xcc;
+    if (isSof) {
+      if (i + 7 > buf.length) break;
+      return { mime: 'image/jpeg', extension: 'jpg', heightPx: buf.readUInt16BE(i + 3), widthPx: buf.readUInt16BE(i + 5) };
+    }
+    i += length;
+  }
+  throw unsupported('The file starts like a JPEG but no image frame header was found; it may be damaged.');
+}
+
+/**
+ * What the file is, from its bytes: PNG or JPEG with its pixel size. PDF and anything else
+ * answer 415 with a message saying what to do instead.
+ */
+export function sniffImage(buf: Buffer): ImageInfo {
+  let info: ImageInfo;
+  if (startsWith(buf, PNG_SIGNATURE)) info = readPng(buf);
+  else if (startsWith(buf, [0xff, 0xd8, 0xff])) info = readJpeg(buf);
+  else if (buf.toString('latin1', 0, 5) === '%PDF-') {
+    throw unsupported('PDF underlays are not supported: export the drawing page as a PNG or JPEG image and upload that.');
+  } else {
+    throw unsupported('The file is not a PNG or JPEG image (its content was checked, not its name).');
+  }
+  if (info.widthPx < 1 || info.heightPx < 1) throw unsupported('The image header gives a width or height of zero.');
+  if (info.widthPx > UNDERLAY_MAX_SIDE_PX || info.heightPx > UNDERLAY_MAX_SIDE_PX) {
+    throw AppError.badRequest(`The image is ${info.widthPx} × ${info.heightPx} px; the largest side accepted is ${UNDERLAY_MAX_SIDE_PX} px.`, {
+      file: `Largest side accepted: ${UNDERLAY_MAX_SIDE_PX} px`,
+    });
+  }
+  return info;
+}
+
+/** The uploaded name, for display only: no path, no control characters, at most 200 characters. */
+export function cleanFilename(name: string | undefined, extension: string): string {
+  const base = basename((name ?? '').replace(/\\/g, '/'))
+    .replace(/[\u0000-\u001f\u007f]/g, '')
+    .trim()
+    .slice(0, 200);
+  return base || `underlay.${extension}`;
+}
+
+function underlayDir(uploadDir: string): string {
+  return resolve(uploadDir, 'underlays');
+}
+
+function toView(row: Model<UnderlayAttributes, UnderlayCreation>): UnderlayView {
+  const u = row.get({ plain: true });
+  return {
+    id: u.id,
+    schemeId: u.schemeId,
+    levelId: u.levelId,
+    filename: u.filename,
+    mime: u.mime,
+    bytes: u.bytes,
+    width_px: u.widthPx,
+    height_px: u.heightPx,
+    placement: { origin_ft: [u.originXFt, u.originYFt], scale_ft_per_px: u.scaleFtPerPx, rotation_deg: u.rotationDeg },
+    opacity: u.opacity,
+    visible: Boolean(u.visible),
+    imageUrl: `/api/underlays/${u.id}/image`,
+    createdBy: u.createdBy ?? null,
+    createdAt: new Date(u.createdAt).toISOString(),
+    updatedAt: new Date(u.updatedAt).toISOString(),
+  };
+}
+
+/** The scheme, if its project belongs to the firm; else 404. */
+async function findOwnScheme(db: Db, firmId: string, schemeId: string) {
+  const scheme = await db.models.Scheme.findByPk(schemeId);
+  if (!scheme) throw AppError.notFound('Scheme');
+  const project = await db.models.Project.findOne({ where: { id: scheme.getDataValue('projectId'), firmId } });
+  if (!project) throw AppError.notFound('Scheme');
+  return scheme;
+}
+
+async function findOwnUnderlay(db: Db, firmId: string, id: string) {
+  const row = await db.models.Underlay.findByPk(id);
+  if (!row) throw AppError.notFound('Underlay');
+  try {
+    await findOwnScheme(db, firmId, row.getDataValue('schemeId'));
+  } catch {
+    throw AppError.notFound('Underlay');
+  }
+  return row;
+}
+
+export async function listUnderlays(db: Db, firmId: string, schemeId: string): Promise<UnderlayView[]> {
+  await findOwnScheme(db, firmId, schemeId);
+  const rows = await db.models.Underlay.findAll({ where: { schemeId }, order: [['levelId', 'ASC'], ['createdAt', 'ASC']] });
+  return rows.map(toView);
+}
+
+export interface UnderlayUpload {
+  levelId: string;
+  /** The multipart file part, or null when none was sent. */
+  file: { buffer: Buffer; originalName: string | undefined } | null;
+}
+
+export async function createUnderlay(
+  db: Db,
+  storage: { uploadDir: string },
+  actor: { firmId: string; userId: string },
+  schemeId: string,
+  upload: UnderlayUpload,
+): Promise<UnderlayView> {
+  await findOwnScheme(db, actor.firmId, schemeId);
+  if (!upload.file || upload.file.buffer.length === 0) {
+    throw AppError.badRequest('Attach the plan image as the "file" part (PNG or JPEG).', { file: 'Choose a PNG or JPEG image' });
+  }
+  const level = await db.models.Level.findOne({ where: { schemeId, elementId: upload.levelId } });
+  if (!level) {
+    throw AppError.badRequest(`Level "${upload.levelId}" is not a level of this scheme.`, { level: `No level "${upload.levelId}" in this scheme` });
+  }
+  const info = sniffImage(upload.file.buffer);
+
+  const dir = underlayDir(storage.uploadDir);
+  await mkdir(dir, { recursive: true });
+  const storageKey = `${randomUUID()}.${info.extension}`;
+  const path = join(dir, storageKey);
+  await writeFile(path, upload.file.buffer, { flag: 'wx' });
+  try {
+    const scale = UNDERLAY_DEFAULT_SCALE_FT_PER_PX;
+    const row = await db.models.Underlay.create({
+      schemeId,
+      levelId: upload.levelId,
+      filename: cleanFilename(upload.file.originalName, info.extension),
+      mime: info.mime,
+      bytes: upload.file.buffer.length,
+      widthPx: info.widthPx,
+      heightPx: info.heightPx,
+      storageKey,
+      // Bottom-left corner of the image on the plan origin, image above and to the right.
+      originXFt: 0,
+      originYFt: info.heightPx * scale,
+      scaleFtPerPx: scale,
+      rotationDeg: 0,
+      opacity: UNDERLAY_DEFAULT_OPACITY,
+      visible: true,
+      createdBy: actor.userId,
+    });
+    return toView(row);
+  } catch (error) {
+    await rm(path, { force: true }); // no orphan file when the row could not be written
+    throw error;
+  }
+}
+
+export async function getUnderlayImage(
+  db: Db,
+  storage: { uploadDir: string },
+  firmId: string,
+  id: string,
+): Promise<{ path: string; mime: UnderlayMime; bytes: number; filename: string }> {
+  const row = await findOwnUnderlay(db, firmId, id);
+  const u = row.get({ plain: true });
+  const path = join(underlayDir(storage.uploadDir), basename(u.storageKey));
+  try {
+    await stat(path);
+  } catch {
+    throw new AppError(404, 'not_found', 'The image file of this underlay is missing from the server; delete the underlay and upload it again.');
+  }
+  return { path, mime: u.mime, bytes: u.bytes, filename: u.filename };
+}
+
+export async function updateUnderlay(db: Db, firmId: string, id: string, patch: UnderlayPatch): Promise<UnderlayView> {
+  const row = await findOwnUnderlay(db, firmId, id);
+  const changes: Partial<UnderlayAttributes> = {};
+  const p = patch.placement;
+  if (p?.origin_ft) {
+    changes.originXFt = p.origin_ft[0];
+    changes.originYFt = p.origin_ft[1];
+  }
+  if (p?.scale_ft_per_px !== undefined) changes.scaleFtPerPx = p.scale_ft_per_px;
+  if (p?.rotation_deg !== undefined) changes.rotationDeg = p.rotation_deg;
+  if (patch.opacity !== undefined) changes.opacity = patch.opacity;
+  if (patch.visible !== undefined) changes.visible = patch.visible;
+  await row.update(changes);
+  return toView(row);
+}
+
+export async function deleteUnderlay(db: Db, storage: { uploadDir: string }, firmId: string, id: string): Promise<void> {
+  const row = await findOwnUnderlay(db, firmId, id);
+  const key = basename(row.getDataValue('storageKey'));
+  await row.destroy();
+  await rm(join(underlayDir(storage.uploadDir), key), { force: true });
+}

@@ -1,0 +1,247 @@
+import { existsSync, mkdtempSync, readFileSync, readdirSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { cleanFilename, sniffImage, UNDERLAY_MAX_BYTES } from '../../server/services/underlays.service';
+import { makeScheme } from './helpers/schemes-fixture';
+import { createTestApp, type Agent, type TestApp } from './helpers/test-app';
+import { jpegHeader, tinyPng } from './helpers/underlay-images';
+
+let t: TestApp;
+let uploadDir: string;
+let schemeId: string;
+let foreignSchemeId: string;
+
+beforeAll(async () => {
+  uploadDir = mkdtempSync(join(tmpdir(), 'baywright-underlays-'));
+  t = await createTestApp({ uploadDir });
+  schemeId = (await makeScheme(t)).schemeId;
+  foreignSchemeId = (await makeScheme(t, { firm: 'foreign' })).schemeId;
+});
+
+afterAll(async () => {
+  expect(t.serverErrors).toEqual([]);
+  await t.close();
+  rmSync(uploadDir, { recursive: true, force: true });
+});
+
+const stored = () => (existsSync(join(uploadDir, 'underlays')) ? readdirSync(join(uploadDir, 'underlays')) : []);
+
+function upload(agent: Agent, id: string, file: Buffer | null, filename = 'level-2-plan.png', level = 'L2', contentType?: string) {
+  const req = agent.post(`/api/schemes/${id}/underlays`).field('level', level);
+  return file ? req.attach('file', file, contentType ? { filename, contentType } : filename) : req;
+}
+
+describe('underlays API: upload', () => {
+  it('when an engineer uploads a 3 × 2 px PNG for level L2, then 201, the row and the file are stored with size from the header', async () => {
+    const png = tinyPng(3, 2);
+    const before = stored().length;
+    const res = await upload(t.agents.engineer, schemeId, png);
+    expect(res.status, JSON.stringify(res.body)).toBe(201);
+    const u = res.body.underlay;
+    expect(u).toMatchObject({
+      schemeId,
+      levelId: 'L2',
+      filename: 'level-2-plan.png',
+      mime: 'image/png',
+      bytes: png.length,
+      width_px: 3,
+      height_px: 2,
+      // Default placement: bottom-left corner on the plan origin at 0.05 ft/px, so top-left y = 2 × 0.05.
+      placement: { origin_ft: [0, 0.1], scale_ft_per_px: 0.05, rotation_deg: 0 },
+      opacity: 0.5,
+      visible: true,
+      imageUrl: `/api/underlays/${u.id}/image`,
+      createdBy: t.seed.userIds.engineer,
+    });
+    const row = await t.ctx.db.models.Underlay.findByPk(u.id);
+    expect(row?.get({ plain: true })).toMatchObject({ schemeId, levelId: 'L2', mime: 'image/png', widthPx: 3, heightPx: 2, bytes: png.length });
+    expect(stored().length).toBe(before + 1);
+    const onDisk = readFileSync(join(uploadDir, 'underlays', row!.getDataValue('storageKey')));
+    expect(onDisk.equals(png)).toBe(true);
+  });
+
+  it('when a PNG is named .jpg and sent as image/jpeg, then the content decides: stored as image/png', async () => {
+    const res = await upload(t.agents.owner, schemeId, tinyPng(4, 4), 'scan.jpg', 'L2', 'image/jpeg');
+    expect(res.status).toBe(201);
+    expect(res.body.underlay).toMatchObject({ mime: 'image/png', width_px: 4, height_px: 4, filename: 'scan.jpg' });
+  });
+
+  it('when a text file is named .png and sent as image/png, then 415 and nothing is stored', async () => {
+    const before = stored().length;
+    const rows = await t.ctx.db.models.Underlay.count();
+    const res = await upload(t.agents.engineer, schemeId, Buffer.from('this is not an image, only words\n'), 'plan.png', 'L2', 'image/png');
+    expect(res.status).toBe(415);
+    expect(res.body.error).toMatchObject({ code: 'unsupported_media_type', message: expect.stringContaining('not a PNG or JPEG image') });
+    expect(res.body.error.fields.file).toBeDefined();
+    expect(stored().length).toBe(before);
+    expect(await t.ctx.db.models.Underlay.count()).toBe(rows);
+  });
+
+  it('when a PDF is uploaded, then 415 says PDF is not supported and to export the page as PNG or JPEG', async () => {
+    const res = await upload(t.agents.engineer, schemeId, Buffer.from('%PDF-1.7\n%âãÏÓ\n1 0 obj\n<<>>\nendobj\n', 'latin1'), 'arch.pdf', 'L2', 'application/pdf');
+    expect(res.status).toBe(415);
+    expect(res.body.error.message).toMatch(/PDF underlays are not supported: export the drawing page as a PNG or JPEG/);
+  });
+
+  it('when the file is larger than 10 MB, then 413 with a clear message and nothing is stored', async () => {
+    const before = stored().length;
+    const big = Buffer.concat([tinyPng(2, 2), Buffer.alloc(UNDERLAY_MAX_BYTES + 1 - tinyPng(2, 2).length + 1)]);
+    expect(big.length).toBeGreaterThan(UNDERLAY_MAX_BYTES);
+    const res = await upload(t.agents.engineer, schemeId, big, 'huge.png');
+    expect(res.status).toBe(413);
+    expect(res.body.error).toMatchObject({ code: 'payload_too_large', message: expect.stringContaining('larger than 10 MB') });
+    expect(stored().length).toBe(before);
+  });
+
+  it('when a drafter or a manager uploads, then 403 and nothing is stored', async () => {
+    const before = stored().length;
+    for (const role of ['drafter', 'manager'] as const) {
+      const res = await upload(t.agents[role], schemeId, tinyPng(2, 2));
+      expect(res.status).toBe(403);
+      expect(res.body.error.code).toBe('forbidden');
+    }
+    expect(stored().length).toBe(before);
+  });
+
+  it("when another firm uploads to this firm's scheme, then 404 and nothing is stored", async () => {
+    const before = stored().length;
+    const res = await upload(t.otherOwner, schemeId, tinyPng(2, 2));
+    expect(res.status).toBe(404);
+    expect(res.body.error.code).toBe('not_found');
+    expect(stored().length).toBe(before);
+  });
+
+  it('when the level is not a level of the scheme, or the file is missing, then 400 naming the field', async () => {
+    const badLevel = await upload(t.agents.engineer, schemeId, tinyPng(2, 2), 'a.png', 'L9');
+    expect(badLevel.status).toBe(400);
+    expect(badLevel.body.error.fields.level).toBe('No level "L9" in this scheme');
+    const noFile = await upload(t.agents.engineer, schemeId, null);
+    expect(noFile.status).toBe(400);
+    expect(noFile.body.error.fields.file).toBe('Choose a PNG or JPEG image');
+    const wrongPart = await t.agents.engineer.post(`/api/schemes/${schemeId}/underlays`).field('level', 'L2').attach('image', tinyPng(2, 2), 'a.png');
+    expect(wrongPart.status).toBe(400);
+    expect(wrongPart.body.error.message).toContain('"file"');
+  });
+});
+
+describe('underlays API: list, image, change, delete', () => {
+  let underlayId: string;
+  let png: Buffer;
+
+  beforeAll(async () => {
+    const own = (await makeScheme(t)).schemeId;
+    schemeId = own;
+    png = tinyPng(5, 3, [10, 20, 30]);
+    const res = await upload(t.agents.engineer, own, png, 'ground.png');
+    expect(res.status).toBe(201);
+    underlayId = res.body.underlay.id;
+  });
+
+  it('when any role of the firm lists the scheme underlays, then it gets them; another firm gets 404', async () => {
+    for (const role of ['owner', 'engineer', 'drafter', 'manager'] as const) {
+      const res = await t.agents[role].get(`/api/schemes/${schemeId}/underlays`);
+      expect(res.status).toBe(200);
+      expect(res.body.underlays.map((u: { id: string }) => u.id)).toEqual([underlayId]);
+    }
+    expect((await t.otherOwner.get(`/api/schemes/${schemeId}/underlays`)).status).toBe(404);
+  });
+
+  it('when a drafter asks for the image, then the stored bytes come back as image/png; another firm gets 404', async () => {
+    const res = await t.agents.drafter.get(`/api/underlays/${underlayId}/image`).buffer(true).parse((r, cb) => {
+      const parts: Buffer[] = [];
+      r.on('data', (c: Buffer) => parts.push(c));
+      r.on('end', () => cb(null, Buffer.concat(parts)));
+    });
+    expect(res.status).toBe(200);
+    expect(res.headers['content-type']).toBe('image/png');
+    expect(res.headers['x-content-type-options']).toBe('nosniff');
+    expect((res.body as Buffer).equals(png)).toBe(true);
+    const foreign = await t.otherOwner.get(`/api/underlays/${underlayId}/image`);
+    expect(foreign.status).toBe(404);
+  });
+
+  it('when an engineer changes placement, opacity and visibility, then they are stored and returned', async () => {
+    const res = await t.agents.engineer.patch(`/api/underlays/${underlayId}`).send({
+      placement: { origin_ft: [-2.5, 40], scale_ft_per_px: 0.125 },
+      opacity: 0.3,
+      visible: false,
+    });
+    expect(res.status, JSON.stringify(res.body)).toBe(200);
+    expect(res.body.underlay).toMatchObject({ placement: { origin_ft: [-2.5, 40], scale_ft_per_px: 0.125, rotation_deg: 0 }, opacity: 0.3, visible: false });
+    const row = await t.ctx.db.models.Underlay.findByPk(underlayId);
+    expect(row?.get({ plain: true })).toMatchObject({ originXFt: -2.5, originYFt: 40, scaleFtPerPx: 0.125, opacity: 0.3, visible: false });
+  });
+
+  it('when a change is out of range or unknown, then 400 names the field and nothing changes', async () => {
+    const opacity = await t.agents.engineer.patch(`/api/underlays/${underlayId}`).send({ opacity: 2 });
+    expect(opacity.status).toBe(400);
+    expect(opacity.body.error.fields.opacity).toBe('opacity must be from 0 to 1');
+    const scale = await t.agents.engineer.patch(`/api/underlays/${underlayId}`).send({ placement: { scale_ft_per_px: 0 } });
+    expect(scale.status).toBe(400);
+    expect(scale.body.error.fields['placement.scale_ft_per_px']).toMatch(/more than 0/);
+    expect((await t.agents.engineer.patch(`/api/underlays/${underlayId}`).send({})).status).toBe(400);
+    expect((await t.agents.engineer.patch(`/api/underlays/${underlayId}`).send({ filename: 'x.png' })).status).toBe(400);
+    const row = await t.ctx.db.models.Underlay.findByPk(underlayId);
+    expect(row?.getDataValue('opacity')).toBe(0.3);
+    expect(row?.getDataValue('scaleFtPerPx')).toBe(0.125);
+  });
+
+  it('when a drafter changes or deletes, then 403; another firm gets 404', async () => {
+    expect((await t.agents.drafter.patch(`/api/underlays/${underlayId}`).send({ opacity: 0.9 })).status).toBe(403);
+    expect((await t.agents.manager.delete(`/api/underlays/${underlayId}`)).status).toBe(403);
+    expect((await t.otherOwner.patch(`/api/underlays/${underlayId}`).send({ opacity: 0.9 })).status).toBe(404);
+    expect((await t.otherOwner.delete(`/api/underlays/${underlayId}`)).status).toBe(404);
+    expect(await t.ctx.db.models.Underlay.findByPk(underlayId)).not.toBeNull();
+  });
+
+  it('when the stored file has gone missing, then the image answers 404 saying so, not 500', async () => {
+    const res = await upload(t.agents.engineer, schemeId, tinyPng(2, 2), 'lost.png');
+    const row = await t.ctx.db.models.Underlay.findByPk(res.body.underlay.id);
+    rmSync(join(uploadDir, 'underlays', row!.getDataValue('storageKey')));
+    const image = await t.agents.engineer.get(`/api/underlays/${res.body.underlay.id}/image`);
+    expect(image.status).toBe(404);
+    expect(image.body.error.message).toMatch(/image file of this underlay is missing/);
+  });
+
+  it('when an engineer deletes the underlay, then 204, the row and the file are gone and the image is 404', async () => {
+    const key = (await t.ctx.db.models.Underlay.findByPk(underlayId))!.getDataValue('storageKey');
+    expect(stored()).toContain(key);
+    const res = await t.agents.engineer.delete(`/api/underlays/${underlayId}`);
+    expect(res.status).toBe(204);
+    expect(await t.ctx.db.models.Underlay.findByPk(underlayId)).toBeNull();
+    expect(stored()).not.toContain(key);
+    expect((await t.agents.engineer.get(`/api/underlays/${underlayId}/image`)).status).toBe(404);
+  });
+
+  it("when listing another firm's scheme, then 404 even for the owner", async () => {
+    expect((await t.agents.owner.get(`/api/schemes/${foreignSchemeId}/underlays`)).status).toBe(404);
+  });
+});
+
+describe('sniffImage: type and size from the content', () => {
+  it('when given a PNG, then its IHDR width and height are read (PNG spec §11.2.2)', () => {
+    expect(sniffImage(tinyPng(640, 480))).toEqual({ mime: 'image/png', extension: 'png', widthPx: 640, heightPx: 480 });
+  });
+
+  it('when given JPEG headers with a fill byte before SOF0, then the frame size is read (ITU-T T.81 B.2.2)', () => {
+    expect(sniffImage(jpegHeader(2480, 3508))).toEqual({ mime: 'image/jpeg', extension: 'jpg', widthPx: 2480, heightPx: 3508 });
+  });
+
+  it('when a JPEG has no frame header, or a PNG has no IHDR, then 415 says it may be damaged', () => {
+    expect(() => sniffImage(Buffer.from([0xff, 0xd8, 0xff, 0xd9]))).toThrow(/no image frame header/);
+    expect(() => sniffImage(Buffer.concat([tinyPng(1, 1).subarray(0, 8), Buffer.alloc(30)]))).toThrow(/no image header \(IHDR\)/);
+  });
+
+  it('when an image is wider than 16384 px, then it is refused with the size in the message', () => {
+    const wide = tinyPng(1, 1);
+    wide.writeUInt32BE(20000, 16); // IHDR width
+    expect(() => sniffImage(wide)).toThrow(/20000 × 1 px; the largest side accepted is 16384 px/);
+  });
+
+  it('when a file name carries a path or control characters, then only a clean base name is kept', () => {
+    expect(cleanFilename('C:\\drawings\\level\u0007 2.png', 'png')).toBe('level 2.png');
+    expect(cleanFilename('../../etc/passwd', 'png')).toBe('passwd');
+    expect(cleanFilename('', 'jpg')).toBe('underlay.jpg');
+  });
+});
