@@ -1,0 +1,90 @@
+import { screen, waitFor, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import ProjectSchemesRoute from '../../src/routes/project-schemes.route';
+import { jsonResponse, renderWithProviders, testSession } from '../../src/testing/test-utils';
+
+const PROJECT = 'p-1';
+
+const scheme = (over: Record<string, unknown> = {}) => ({
+  id: 's-1',
+  projectId: PROJECT,
+  name: 'Scheme A — beams at about 10 ft',
+  status: 'draft',
+  archived: false,
+  revision: 3,
+  createdBy: { id: 'u-1', name: 'Tobias Renfrew' },
+  updatedBy: { id: 'u-1', name: 'Tobias Renfrew' },
+  createdAt: '2026-11-02T10:00:00.000Z',
+  updatedAt: '2026-11-03T10:00:00.000Z',
+  design: {
+    revision: 2,
+    designedAt: '2026-11-02T11:00:00.000Z',
+    stale: true,
+    steelWeight_lb: 274326,
+    pieces: 220,
+    floorArea_ft2: 42870,
+    steel_psf: 6.399,
+    failingMembers: 0,
+    problemCount: 0,
+  },
+  designStale: true,
+  ...over,
+});
+
+function mockFetch(schemes: unknown[]) {
+  const calls: { url: string; method: string; body: unknown }[] = [];
+  vi.stubGlobal(
+    'fetch',
+    vi.fn(async (url: string, init?: RequestInit) => {
+      calls.push({ url, method: init?.method ?? 'GET', body: init?.body ? JSON.parse(String(init.body)) : undefined });
+      if ((init?.method ?? 'GET') === 'GET') return jsonResponse(200, { schemes });
+      return jsonResponse(201, { scheme: scheme({ id: 's-2', name: 'Scheme C', revision: 1, design: null }) });
+    }),
+  );
+  return calls;
+}
+
+afterEach(() => vi.unstubAllGlobals());
+
+const renderAs = (role: 'engineer' | 'drafter') =>
+  renderWithProviders(<ProjectSchemesRoute />, {
+    path: `/projects/${PROJECT}`,
+    session: testSession(role),
+    routes: [{ path: '/projects/:projectId', element: <ProjectSchemesRoute /> }],
+  });
+
+describe('project schemes page', () => {
+  it('when a scheme has a stale design, then its weight, psf, pieces and the stale badge show with the plan link', async () => {
+    mockFetch([scheme()]);
+    renderAs('drafter');
+    const row = (await screen.findByRole('link', { name: 'Scheme A — beams at about 10 ft' })).closest('tr')!;
+    // 274,326 lb / 2,000 lb per ton = 137.2 t
+    expect(within(row).getByText('137.2 t')).toBeInTheDocument();
+    expect(within(row).getByText('6.40 psf')).toBeInTheDocument();
+    expect(within(row).getByText('220 pcs')).toBeInTheDocument();
+    expect(within(row).getByText('Stale · rev 2')).toBeInTheDocument();
+    expect(within(row).getByRole('link', { name: 'Open plan' })).toHaveAttribute('href', `/projects/${PROJECT}/plan?scheme=s-1`);
+    expect(within(row).getByRole('link', { name: 'Export' })).toHaveAttribute('href', '/api/schemes/s-1/export');
+  });
+
+  it('when a drafter opens the page, then no create, clone, archive or delete controls are shown', async () => {
+    mockFetch([scheme()]);
+    renderAs('drafter');
+    await screen.findByRole('link', { name: 'Scheme A — beams at about 10 ft' });
+    for (const name of ['New scheme', 'Import plan file', 'Clone', 'Archive', 'Delete']) {
+      expect(screen.queryByRole('button', { name })).toBeNull();
+    }
+  });
+
+  it('when an engineer names a new scheme, then it is posted to the project and the list is read again', async () => {
+    const calls = mockFetch([]);
+    renderAs('engineer');
+    expect(await screen.findByRole('heading', { name: 'No schemes yet' })).toBeInTheDocument();
+    await userEvent.type(screen.getByLabelText('New scheme'), 'Scheme C');
+    await userEvent.click(screen.getByRole('button', { name: 'New scheme' }));
+    await waitFor(() => expect(calls.filter((c) => c.method === 'POST')).toHaveLength(1));
+    expect(calls.find((c) => c.method === 'POST')).toEqual({ url: `/api/projects/${PROJECT}/schemes`, method: 'POST', body: { name: 'Scheme C' } });
+    await waitFor(() => expect(calls.filter((c) => c.method === 'GET')).toHaveLength(2));
+  });
+});
