@@ -17,7 +17,14 @@ export const paths = {
   },
   projectPlan: {
     path: '/projects/:projectId/plan',
-    href: (projectId: string | number) => `${paths.project.href(projectId)}/plan`,
+    /** The Plan, optionally of one scheme and level: /projects/7/plan?scheme=12&level=L2. */
+    href: (projectId: string | number, at: { scheme?: string | number | null; level?: string | null } = {}) => {
+      const q = new URLSearchParams();
+      if (at.scheme != null && at.scheme !== '') q.set('scheme', String(at.scheme));
+      if (at.level) q.set('level', at.level);
+      const query = q.toString();
+      return `${paths.project.href(projectId)}/plan${query ? `?${query}` : ''}`;
+    },
   },
   /** The plan page opened on one scheme. */
   projectSchemePlan: {
