@@ -91,7 +91,46 @@ export const DEMO_SEED_STEPS: SeedStep[] = [
   },
   // The clinic building: two framing schemes, each designed (seed-demo-building.ts).
   demoBuildingStep,
+  {
+    // Firm unit prices (an invented example, marked so in the app) and Scheme B in review.
+    name: 'review-and-prices',
+    async run({ models }, state) {
+      const firmId = required(state.firmId, 'firm');
+      if ((await models.UnitPrice.count({ where: { firmId } })) === 0) {
+        await models.UnitPrice.create({
+          firmId,
+          ...DEMO_UNIT_PRICES,
+          example: true,
+          note: 'Invented example prices for the demo, not a quotation.',
+          userId: state.userIds.owner ?? null,
+          createdAt: new Date(),
+        });
+      }
+      const schemeIds = (state.demoSchemeIds as string[] | undefined) ?? [];
+      const inReview = schemeIds[1];
+      // Only on a fresh seed: a status anyone has set since is left alone.
+      if (inReview && (await models.SchemeActivity.count({ where: { schemeId: schemeIds } })) === 0) {
+        await models.Scheme.update({ status: 'in_review' }, { where: { id: inReview, status: 'draft' } });
+        await models.SchemeActivity.create({
+          schemeId: inReview,
+          userId: state.userIds.engineer ?? null,
+          kind: 'status_changed',
+          detail: JSON.stringify({ from: 'draft', to: 'in_review' }),
+          createdAt: new Date(),
+        });
+        await models.SchemeComment.create({
+          schemeId: inReview,
+          userId: state.userIds.engineer ?? null,
+          body: 'Submitted for review: same grid as Scheme A with the infill beams closer together. Please compare the tonnage and cost before we pick one.',
+          createdAt: new Date(),
+        });
+      }
+    },
+  },
 ];
+
+/** Invented, plausible example prices for the demo firm (not market data). */
+export const DEMO_UNIT_PRICES = { steelUsdPerTon: 4800, connectionUsdEach: 210 } as const;
 
 /** Runs every demo seed step in order; safe to run again. */
 export async function seedDemo(db: Db, steps: SeedStep[] = DEMO_SEED_STEPS): Promise<SeedState> {

@@ -4,17 +4,24 @@ import { loadSession } from '../auth/auth.middleware';
 import { requireSameOrigin } from '../middleware/csrf.middleware';
 import { apiNotFound } from '../middleware/error.middleware';
 import { auditRoutes } from './audit.routes';
+import { comparisonRoutes } from './comparison.routes';
 import { firmsRoutes } from './firms.routes';
 import { healthRoutes } from './health.routes';
 import { invitationsRoutes } from './invitations.routes';
+import { marksRoutes } from './marks.routes';
 import { notificationsRoutes } from './notifications.routes';
 import { outboxRoutes } from './outbox.routes';
 import { passwordResetRoutes } from './password-reset.routes';
+import { planSheetRoutes } from './plan-sheet.routes';
 import { projectsRoutes } from './projects.routes';
+import { schemeCommentsRoutes } from './scheme-comments.routes';
+import { schemeStatusRoutes } from './scheme-status.routes';
+import { scheduleRoutes } from './schedule.routes';
 import { projectSchemesRoutes, schemesRoutes } from './schemes.routes';
 import { sessionRoutes } from './session.routes';
 import { teamRoutes } from './team.routes';
 import { underlaysRoutes } from './underlays.routes';
+import { unitPricesRoutes } from './unit-prices.routes';
 
 export const JSON_BODY_LIMIT = '2mb';
 
@@ -31,6 +38,15 @@ export function apiRoutes(ctx: AppContext): Router {
   api.use('/projects', projectsRoutes(ctx));
   api.use('/projects', projectSchemesRoutes(ctx));
   api.use('/schemes', schemesRoutes(ctx));
+  // Drafting (issue 6): marks, schedule, plan sheets.
+  api.use('/schemes', marksRoutes(ctx));
+  api.use('/schemes', scheduleRoutes(ctx));
+  api.use('/schemes', planSheetRoutes(ctx));
+  // Review (issue 7): status, comments, activity; Tonnage comparison; firm unit prices.
+  api.use('/schemes', schemeStatusRoutes(ctx));
+  api.use('/schemes', schemeCommentsRoutes(ctx));
+  api.use('/projects', comparisonRoutes(ctx));
+  api.use('/unit-prices', unitPricesRoutes(ctx));
   api.use('/invitations', invitationsRoutes(ctx));
   api.use('/password-resets', passwordResetRoutes(ctx));
   api.use('/team', teamRoutes(ctx));

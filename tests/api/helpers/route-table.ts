@@ -262,7 +262,40 @@ export const ROUTE_TABLE: RouteCase[] = [
   },
   ...schemeRows(),
   ...underlayRows(),
+  ...draftingRows(),
+  ...reviewRows(),
 ];
+
+/** Issue 7: scheme status, comments, activity, Tonnage comparison and exports, unit prices. */
+function reviewRows(): RouteCase[] {
+  const readers = ['owner', 'engineer', 'drafter', 'manager'] as const;
+  const reviewers = ['owner', 'engineer', 'manager'] as const;
+  const scheme = (firm: 'own' | 'foreign', suffix: string) => async (fx: RouteFixture) =>
+    `/api/schemes/${(await makeScheme(fx.t, { firm })).schemeId}${suffix}`;
+  const project = (firm: 'own' | 'foreign', suffix: string) => async (fx: RouteFixture) =>
+    `/api/projects/${(await makeScheme(fx.t, { firm, designed: true })).projectId}${suffix}`;
+  return [
+    {
+      method: 'POST', route: '/api/schemes/:id/status', allowed: reviewers, okStatus: 200,
+      path: scheme('own', '/status'), body: () => ({ status: 'in_review' }), foreignPath: scheme('foreign', '/status'),
+    },
+    { method: 'GET', route: '/api/schemes/:id/comments', allowed: readers, okStatus: 200, path: scheme('own', '/comments'), foreignPath: scheme('foreign', '/comments') },
+    {
+      method: 'POST', route: '/api/schemes/:id/comments', allowed: reviewers, okStatus: 201,
+      path: scheme('own', '/comments'), body: () => ({ body: 'Matrix comment' }), foreignPath: scheme('foreign', '/comments'),
+    },
+    { method: 'GET', route: '/api/schemes/:id/activity', allowed: readers, okStatus: 200, path: scheme('own', '/activity'), foreignPath: scheme('foreign', '/activity') },
+    { method: 'GET', route: '/api/projects/:id/comparison', allowed: readers, okStatus: 200, path: project('own', '/comparison'), foreignPath: project('foreign', '/comparison') },
+    { method: 'GET', route: '/api/projects/:id/comparison.csv', allowed: readers, okStatus: 200, path: project('own', '/comparison.csv'), foreignPath: project('foreign', '/comparison.csv') },
+    { method: 'GET', route: '/api/projects/:id/comparison.pdf', allowed: readers, okStatus: 200, path: project('own', '/comparison.pdf'), foreignPath: project('foreign', '/comparison.pdf') },
+    { method: 'GET', route: '/api/unit-prices', allowed: readers, okStatus: 200 },
+    {
+      method: 'PUT', route: '/api/unit-prices', allowed: ['owner', 'manager'], okStatus: 200,
+      body: () => ({ steel_usd_per_ton: 5000, connection_usd_each: 200 }),
+    },
+    { method: 'GET', route: '/api/unit-prices/history', allowed: readers, okStatus: 200 },
+  ];
+}
 
 /** Underlays: every role of the firm sees them; engineers and owners upload, place and delete. */
 function underlayRows(): RouteCase[] {
@@ -325,6 +358,32 @@ function schemeRows(): RouteCase[] {
     {
       method: 'POST', route: '/api/schemes/:id/revisions/:revision/restore', allowed: writers, okStatus: 200,
       path: own('/revisions/1/restore'), foreignPath: foreign('/revisions/1/restore'),
+    },
+  ];
+}
+
+/** Issue 6: piece marks (drafters may edit), schedule JSON/CSV, plan sheets (model and PDF). */
+function draftingRows(): RouteCase[] {
+  const readers = ['owner', 'engineer', 'drafter', 'manager'] as const;
+  const markers = ['owner', 'engineer', 'drafter'] as const;
+  const scheme = (firm: 'own' | 'foreign', suffix: string) => async (fx: RouteFixture) =>
+    `/api/schemes/${(await makeScheme(fx.t, { firm, designed: true })).schemeId}${suffix}`;
+  return [
+    {
+      method: 'PATCH', route: '/api/schemes/:id/marks', allowed: markers, okStatus: 200,
+      path: scheme('own', '/marks'), body: () => ({ revision: 1, marks: [{ memberId: 'b2', mark: '2B9' }] }),
+      foreignPath: scheme('foreign', '/marks'),
+    },
+    {
+      method: 'POST', route: '/api/schemes/:id/marks/renumber', allowed: markers, okStatus: 200,
+      path: scheme('own', '/marks/renumber'), body: () => ({ keepManual: false }), foreignPath: scheme('foreign', '/marks/renumber'),
+    },
+    { method: 'GET', route: '/api/schemes/:id/schedule', allowed: readers, okStatus: 200, path: scheme('own', '/schedule'), foreignPath: scheme('foreign', '/schedule') },
+    { method: 'GET', route: '/api/schemes/:id/schedule.csv', allowed: readers, okStatus: 200, path: scheme('own', '/schedule.csv'), foreignPath: scheme('foreign', '/schedule.csv') },
+    { method: 'GET', route: '/api/schemes/:id/plan-sheet', allowed: readers, okStatus: 200, path: scheme('own', '/plan-sheet'), foreignPath: scheme('foreign', '/plan-sheet') },
+    {
+      method: 'GET', route: '/api/schemes/:id/plan-sheet.pdf', allowed: readers, okStatus: 200,
+      path: scheme('own', '/plan-sheet.pdf?level=L2'), foreignPath: scheme('foreign', '/plan-sheet.pdf'),
     },
   ];
 }

@@ -1,0 +1,155 @@
+/**
+ * Tonnage of a designed scheme: steel weight, weight per floor area, pieces and end
+ * connections, in total, by level and by kind. Pure: reads a stored design (the `calc plan`
+ * output, calc-interface.md) and the plan's levels; no I/O.
+ *
+ * Steel weight is Σ W_plf × span_ft over the members (the nominal weight per foot of the
+ * shape times the member's span). Connection material (plates, angles, bolts, welds) is
+ * excluded, as are columns, deck and studs.
+ */
+
+/** Short ton (US customary): 2,000 lb. Common practice for steel tonnage in the US. */
+export const LB_PER_TON = 2000;
+
+/** End connections per member: one at each end (common practice for simple-span framing). */
+export const END_CONNECTIONS_PER_MEMBER = 2;
+
+export const TONNAGE_BASIS =
+  'Steel weight is the sum of shape weight × span for the beams and girders of the design ' +
+  '(W_plf × span_ft). Connection material, columns, deck and studs are excluded. ' +
+  'Connections count two per member, one at each end. Tons are short tons of 2,000 lb.';
+
+export type MemberKind = 'girder' | 'beam';
+export const MEMBER_KINDS: readonly MemberKind[] = ['girder', 'beam'];
+
+/** The member fields tonnage reads from a design. */
+export interface TonnageMemberInput {
+  id: string;
+  level: string;
+  kind: MemberKind;
+  shape: string | null;
+  span_ft: number;
+  weight_plf: number;
+  /**
+   * End connections of this member when the design states them. The engine's `connections`
+   * field also counts members framing in (those are the other member's end connections), so
+   * it is not read here: counting it would count a beam-to-girder connection twice.
+   */
+  endConnections?: number;
+}
+
+/** The design fields tonnage reads (the stored `calc plan` output). */
+export interface TonnageDesignInput {
+  members: TonnageMemberInput[];
+  totals?: {
+    floorArea_ft2?: number;
+    byLevel?: { level: string; floorArea_ft2?: number }[];
+  };
+}
+
+export interface TonnageLevelInput {
+  id: string;
+  name: string;
+  elevation_ft?: number;
+}
+
+export interface TonnageFigures {
+  steelWeight_lb: number;
+  steelWeight_tons: number;
+  /** lb of steel per ft² of floor; null when the floor area is zero or unknown. */
+  steel_psf: number | null;
+  pieces: number;
+  connections: number;
+  floorArea_ft2: number;
+  /** Members without a shape (not designed): their weight is the design's estimate. */
+  unsizedPieces: number;
+}
+
+export interface TonnageByLevel extends TonnageFigures {
+  level: string;
+  levelName: string;
+}
+
+export interface TonnageByKind extends TonnageFigures {
+  kind: MemberKind;
+}
+
+export interface SchemeTonnage {
+  totals: TonnageFigures;
+  byLevel: TonnageByLevel[];
+  byKind: TonnageByKind[];
+}
+
+/** W_plf × span_ft; a non-finite or negative input counts as 0 (never NaN in a total). */
+export function memberSteelWeightLb(m: Pick<TonnageMemberInput, 'weight_plf' | 'span_ft'>): number {
+  const w = Number.isFinite(m.weight_plf) && m.weight_plf > 0 ? m.weight_plf : 0;
+  const l = Number.isFinite(m.span_ft) && m.span_ft > 0 ? m.span_ft : 0;
+  return w * l;
+}
+
+export function memberEndConnections(m: Pick<TonnageMemberInput, 'endConnections'>): number {
+  return typeof m.endConnections === 'number' && Number.isInteger(m.endConnections) && m.endConnections >= 0
+    ? m.endConnections
+    : END_CONNECTIONS_PER_MEMBER;
+}
+
+function figures(members: TonnageMemberInput[], floorArea_ft2: number): TonnageFigures {
+  let steelWeight_lb = 0;
+  let connections = 0;
+  let unsizedPieces = 0;
+  for (const m of members) {
+    steelWeight_lb += memberSteelWeightLb(m);
+    connections += memberEndConnections(m);
+    if (!m.shape) unsizedPieces++;
+  }
+  const area = Number.isFinite(floorArea_ft2) && floorArea_ft2 > 0 ? floorArea_ft2 : 0;
+  return {
+    steelWeight_lb,
+    steelWeight_tons: steelWeight_lb / LB_PER_TON,
+    steel_psf: area > 0 ? steelWeight_lb / area : null,
+    pieces: members.length,
+    connections,
+    floorArea_ft2: area,
+    unsizedPieces,
+  };
+}
+
+/**
+ * Totals, by level (in the plan's level order, top of the list first as the plan lists them;
+ * levels the plan does not name are appended) and by kind (girders, then beams).
+ */
+export function computeTonnage(design: TonnageDesignInput, levels: readonly TonnageLevelInput[] = []): SchemeTonnage {
+  const members = design.members ?? [];
+  const areaByLevel = new Map<string, number>();
+  for (const l of design.totals?.byLevel ?? []) areaByLevel.set(l.level, l.floorArea_ft2 ?? 0);
+
+  const levelIds: string[] = levels.map((l) => l.id);
+  for (const m of members) if (!levelIds.includes(m.level)) levelIds.push(m.level);
+  const nameOf = new Map(levels.map((l) => [l.id, l.name]));
+
+  const byLevel = levelIds.map((id) => ({
+    level: id,
+    levelName: nameOf.get(id) || id,
+    ...figures(
+      members.filter((m) => m.level === id),
+      areaByLevel.get(id) ?? 0,
+    ),
+  }));
+
+  // Total floor area: the design's figure, or the sum of its levels when it gives none.
+  const levelAreaSum = [...areaByLevel.values()].reduce((s, a) => s + (a > 0 ? a : 0), 0);
+  const totalArea = design.totals?.floorArea_ft2 ?? levelAreaSum;
+
+  return {
+    totals: figures(members, totalArea),
+    byLevel,
+    byKind: MEMBER_KINDS.map((kind) => ({
+      kind,
+      // Floor area belongs to levels, not kinds: psf by kind is over the whole floor area.
+      ...figures(
+        members.filter((m) => m.kind === kind),
+        totalArea,
+      ),
+    })),
+  };
+}
