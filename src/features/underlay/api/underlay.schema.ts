@@ -1,0 +1,39 @@
+import { z } from 'zod';
+
+// An underlay as the API returns it (server/services/underlays.service.ts UnderlayView).
+export const underlayPlacementSchema = z.object({
+  /** Plan coordinates (ft) of the image's top-left pixel. */
+  origin_ft: z.tuple([z.number(), z.number()]),
+  scale_ft_per_px: z.number().positive(),
+  /** Counter-clockwise on the plan, about the top-left corner. */
+  rotation_deg: z.number(),
+});
+export type UnderlayPlacement = z.infer<typeof underlayPlacementSchema>;
+
+export const underlaySchema = z.object({
+  id: z.string(),
+  schemeId: z.string(),
+  levelId: z.string(),
+  filename: z.string(),
+  mime: z.enum(['image/png', 'image/jpeg']),
+  bytes: z.number(),
+  width_px: z.number().int().positive(),
+  height_px: z.number().int().positive(),
+  placement: underlayPlacementSchema,
+  opacity: z.number().min(0).max(1),
+  visible: z.boolean(),
+  imageUrl: z.string(),
+  createdBy: z.string().nullable(),
+  createdAt: z.string(),
+  updatedAt: z.string(),
+});
+export type Underlay = z.infer<typeof underlaySchema>;
+
+export interface UnderlayPatch {
+  placement?: Partial<UnderlayPlacement>;
+  opacity?: number;
+  visible?: boolean;
+}
+
+/** The server's limit (UNDERLAY_MAX_BYTES), checked here first to spare a long upload. */
+export const UNDERLAY_MAX_BYTES = 10 * 1024 * 1024;
