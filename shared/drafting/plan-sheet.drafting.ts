@@ -550,11 +550,11 @@ function titleBlockPrimitives(out: SheetPrimitive[], input: PlanSheetInput, leve
   );
 }
 
-/** Sheets for every level, in plan order, numbered FP-1 … FP-n. */
+/** Sheets for every level (or the ones asked for), numbered FP-1 … FP-n by the level's place in the plan. */
 export function buildPlanSheets(input: Omit<PlanSheetInput, 'levelId'> & { levelIds?: string[] }): PlanSheet[] {
-  const ids = input.levelIds ?? input.plan.levels.map((l) => l.id);
-  return ids.map((levelId, i) =>
-    buildPlanSheet({ ...input, levelId, titleBlock: { ...input.titleBlock, sheetIndex: i + 1, sheetCount: ids.length } }),
+  const all = input.plan.levels.map((l) => l.id);
+  const ids = input.levelIds ?? all;
+  return ids.map((levelId) =>
+    buildPlanSheet({ ...input, levelId, titleBlock: { ...input.titleBlock, sheetIndex: all.indexOf(levelId) + 1, sheetCount: all.length } }),
   );
 }
-
