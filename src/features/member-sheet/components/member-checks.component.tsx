@@ -25,10 +25,10 @@ const num = (v: number | null | undefined, digits = 2) => (v == null || !Number.
 
 function Row({ label, value, note }: { label: ReactNode; value: ReactNode; note?: ReactNode }) {
   return (
-    <div className="grid grid-cols-[minmax(9rem,auto)_minmax(7rem,auto)_1fr] items-baseline gap-x-4 py-0.5">
-      <dt className="text-ink-soft">{label}</dt>
-      <dd className="figures m-0 font-mono text-ink">{value}</dd>
-      <dd className="m-0 text-xs text-ink-faint">{note}</dd>
+    <div className="contents">
+      <dt className="py-0.5 text-ink-soft">{label}</dt>
+      <dd className="figures m-0 whitespace-nowrap py-0.5 font-mono text-ink">{value}</dd>
+      <dd className="m-0 py-0.5 text-xs text-ink-faint">{note}</dd>
     </div>
   );
 }
@@ -37,7 +37,7 @@ function FlexureWorking({ c, units }: { c: MemberCheck; units: UnitSystem }) {
   const f = (kind: QuantityKind, v: number | null | undefined) => (v == null ? '—' : formatQuantity(kind, v, units));
   const lrfd = c.method === 'LRFD';
   return (
-    <dl className="m-0 text-sm">
+    <dl className="m-0 grid grid-cols-[auto_auto_1fr] items-baseline gap-x-5 text-sm">
       <Row label="Segment" value={`${f('length_ft', c.from_ft)} – ${f('length_ft', c.to_ft)}`} note="between brace points" />
       <Row label={<>λ = b<sub>f</sub>/2t<sub>f</sub></>} value={num(c.lambda_f)} note={`flange ${c.flangeClass ?? ''} (AISC 360-16 Table B4.1b)`} />
       <Row label={<>λ<sub>pf</sub></>} value={num(c.lambda_pf)} note="0.38√(E/Fy), Table B4.1b case 10" />
@@ -50,7 +50,9 @@ function FlexureWorking({ c, units }: { c: MemberCheck; units: UnitSystem }) {
         label={<>C<sub>b</sub></>}
         value={num(c.Cb, 3)}
         note={
-          c.MA_kipft != null ? (
+          c.Lb_ft === 0 ? (
+            'continuous bracing: no lateral-torsional buckling, Cb = 1.0'
+          ) : c.MA_kipft != null ? (
             <>Eq. F1-1 with M<sub>A</sub> {f('moment_kipft', Math.abs(c.MA_kipft))}, M<sub>B</sub> {f('moment_kipft', Math.abs(c.MB_kipft ?? 0))}, M<sub>C</sub> {f('moment_kipft', Math.abs(c.MC_kipft ?? 0))}</>
           ) : (
             'Eq. F1-1'
@@ -73,7 +75,7 @@ function FlexureWorking({ c, units }: { c: MemberCheck; units: UnitSystem }) {
 function ShearWorking({ c, units }: { c: MemberCheck; units: UnitSystem }) {
   const lrfd = c.method === 'LRFD';
   return (
-    <dl className="m-0 text-sm">
+    <dl className="m-0 grid grid-cols-[auto_auto_1fr] items-baseline gap-x-5 text-sm">
       <Row label={<>A<sub>w</sub> = d t<sub>w</sub></>} value={c.Aw_in2 == null ? '—' : formatQuantity('area_in2', c.Aw_in2, units)} note="G2.1" />
       <Row label={<>h/t<sub>w</sub></>} value={num(c.h_tw)} note={<>limit 2.24√(E/Fy) = {num(c.h_tw_limit)} for G2.1(a)</>} />
       <Row label="Case" value={c.shearCase ?? '—'} note={c.kv != null ? <>k<sub>v</sub> = {num(c.kv)} (no stiffeners)</> : 'rolled I-shape, G2.1(a)'} />
@@ -90,7 +92,7 @@ function ShearWorking({ c, units }: { c: MemberCheck; units: UnitSystem }) {
 
 function DeflectionWorking({ c, units, span_ft }: { c: MemberCheck; units: UnitSystem; span_ft: number }) {
   return (
-    <dl className="m-0 text-sm">
+    <dl className="m-0 grid grid-cols-[auto_auto_1fr] items-baseline gap-x-5 text-sm">
       <Row label="Loads" value={c.loadCase ?? c.combination} note="unfactored (serviceability)" />
       <Row label="Δ max" value={formatQuantity('length_in', c.demand, units)} note={c.at_ft != null ? `at ${formatQuantity('length_ft', c.at_ft, units)}` : undefined} />
       <Row label={`L/${c.limit_n ?? '?'}`} value={formatQuantity('length_in', c.capacity, units)} note={`span ${formatQuantity('length_ft', span_ft, units)}; IBC Table 1604.3`} />
@@ -144,16 +146,16 @@ export function MemberChecksTable({ design, units }: ChecksProps) {
                   <span className="block">{c.clause}</span>
                   <span className="block text-xs text-ink-soft">{c.equation}</span>
                 </td>
-                <td className="figures py-2 pr-3 font-mono">{c.combination}</td>
-                <td className="figures py-2 pr-3 text-right font-mono">
+                <td className="figures whitespace-nowrap py-2 pr-3 font-mono">{c.combination}</td>
+                <td className="figures whitespace-nowrap py-2 pr-3 text-right font-mono">
                   <span className="text-ink-faint">{sym.demand} </span>
                   {formatQuantity(kind, c.demand, units)}
                 </td>
-                <td className="figures py-2 pr-3 text-right font-mono">
+                <td className="figures whitespace-nowrap py-2 pr-3 text-right font-mono">
                   <span className="text-ink-faint">{sym.capacity} </span>
                   {formatQuantity(kind, c.capacity, units)}
                 </td>
-                <td className="py-2 pr-3 text-right">
+                <td className="whitespace-nowrap py-2 pr-3 text-right">
                   <UtilisationChip ratio={c.ratio} />
                 </td>
                 <td className="py-2 text-right">
@@ -206,7 +208,7 @@ export function MemberSegmentsTable({ segments, governingIndex, units, method }:
       <tbody>
         {segments.map((s, i) => (
           <tr key={`${s.from_ft}-${s.to_ft}`} data-segment={i} className={`border-b border-line ${i === governingIndex ? 'bg-accent-wash' : ''}`}>
-            <td className="figures py-1.5 pr-3 font-mono">
+            <td className="figures whitespace-nowrap py-1.5 pr-3 font-mono">
               {formatQuantity('length_ft', s.from_ft, units)} – {formatQuantity('length_ft', s.to_ft, units)}
               {i === governingIndex ? <span className="label-caps ml-2 text-accent-strong">Governs</span> : null}
             </td>

@@ -55,15 +55,13 @@ function LoadingPanel({ loads, span_ft, brace, units }: Omit<Props, 'diagrams' |
     <figure className="m-0">
       <Caption>
         <span>Loading (unfactored, all cases incl. self weight)</span>
+        {wMax > 0 ? <span className="figures normal-case text-ink">w max {formatQuantity('lineLoad_klf', wMax, units)}</span> : null}
       </Caption>
       <svg viewBox={`0 0 ${W} ${H}`} role="img" aria-label={label} className="w-full">
         {outline.length > 0 && wMax > 0 ? (
           <>
             <path d={area(outlineXs, outlineYs, beamY - 4)} className="fill-ink/10" />
             <path d={polyline(outlineXs, outlineYs)} className="fill-none stroke-ink" strokeWidth={1.25} />
-            <text x={clampLabelX(W / 2)} y={top - 6} textAnchor="middle" className="figures fill-ink font-mono text-[11px]">
-              w max {formatQuantity('lineLoad_klf', wMax, units)}
-            </text>
           </>
         ) : null}
         {points.map((p) => {

@@ -78,8 +78,8 @@ export function MemberLoadsTable({ member, units }: { member: SchemeMember; unit
                 <span className="font-mono">{l.case}</span> <span className="text-xs text-ink-soft">{CASE_NAME[l.case]}</span>
               </td>
               <td className="py-1.5 pr-3">{KIND_NAME[l.kind]}</td>
-              <td className="figures py-1.5 pr-3 text-right font-mono">{magnitude(l, units)}</td>
-              <td className="figures py-1.5 pr-3 font-mono">{position(l, member.span_ft, units)}</td>
+              <td className="figures whitespace-nowrap py-1.5 pr-3 text-right font-mono">{magnitude(l, units)}</td>
+              <td className="figures whitespace-nowrap py-1.5 pr-3 font-mono">{position(l, member.span_ft, units)}</td>
               <td className="py-1.5 text-ink-soft">{l.source ?? '—'}</td>
             </tr>
           ))}

@@ -165,7 +165,7 @@ export function MemberSheet({ member, designBasis, planMember, units, canEdit, o
         <p className={`text-sm ${design.passes ? 'text-ink-soft' : 'text-danger'}`} role={design.passes ? undefined : 'alert'}>
           {design.passes ? (
             <>
-              Passes every check. {CHECK_WORDS[design.governing]} governs ({design.checks.find((c) => c.name === design.governing)?.clause}).
+              Passes every check. Governing: {CHECK_WORDS[design.governing]}, {design.checks.find((c) => c.name === design.governing)?.clause}.
             </>
           ) : (
             (design.failure ?? 'Does not pass.')
