@@ -124,7 +124,7 @@ export async function listActivity(ctx: ReviewContext, schemeId: string): Promis
       attributes: ['revision', 'steelWeightLb', 'pieces', 'failingMembers', 'problemCount', 'userId', 'createdAt'],
     }),
     models.SchemeComment.findAll({ where: { schemeId } }),
-    models.SchemeActivity.findAll({ where: { schemeId } }),
+    models.SchemeActivity.findAll({ where: { schemeId }, order: [['createdAt', 'ASC']] }),
   ]);
   const who = await people(ctx.db, [
     ...revisions.map((r) => r.getDataValue('userId')),

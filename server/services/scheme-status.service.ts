@@ -1,4 +1,4 @@
-import { Op } from 'sequelize';
+import { Op, type Model, type Transaction } from 'sequelize';
 import type { Config } from '../config';
 import { AppError } from '../errors/app-error';
 import type { Db } from '../models/models';
@@ -52,6 +52,13 @@ export interface StatusChangeResult {
 /** The status the project's previously chosen scheme goes back to when another is chosen. */
 export const UNCHOSEN_STATUS: SchemeStatus = 'in_review';
 
+/** Now, or 1 ms after the scheme's last recorded event: the history keeps its order. */
+async function nextActivityTime(db: Db, schemeId: string, transaction: Transaction): Promise<Date> {
+  const last = await db.models.SchemeActivity.max<Date | null, Model>('createdAt', { where: { schemeId }, transaction });
+  const lastMs = last ? new Date(last).getTime() : 0;
+  return new Date(Math.max(Date.now(), lastMs + 1));
+}
+
 export async function setSchemeStatus(ctx: ReviewContext, schemeId: string, to: SchemeStatus): Promise<StatusChangeResult> {
   const { db, actor } = ctx;
   const outcome = await db.sequelize.transaction(async (transaction) => {
@@ -87,7 +94,7 @@ export async function setSchemeStatus(ctx: ReviewContext, schemeId: string, to: 
             userId: actor.userId,
             kind: 'status_changed',
             detail: JSON.stringify({ from: 'chosen', to: UNCHOSEN_STATUS, because: { schemeId, schemeName: name } }),
-            createdAt: new Date(),
+            createdAt: await nextActivityTime(db, other.getDataValue('id'), transaction),
           },
           { transaction },
         );
@@ -101,7 +108,7 @@ export async function setSchemeStatus(ctx: ReviewContext, schemeId: string, to: 
         userId: actor.userId,
         kind: 'status_changed',
         detail: JSON.stringify({ from, to }),
-        createdAt: new Date(),
+        createdAt: await nextActivityTime(db, schemeId, transaction),
       },
       { transaction },
     );

@@ -84,17 +84,18 @@ function pctText(pct: number): string {
  * than Scheme A." Weights to 0.1 ton, percent whole, dollars to $100.
  */
 export function describeDifference(otherName: string, baseName: string, d: TonnageDifference): string {
-  const tons = Math.abs(d.steelWeight_tons);
-  let weight: string;
-  if (tons < 0.05) weight = 'the same weight (within 0.1 ton)';
-  else {
-    const pct = d.steelWeight_pct === null ? '' : ` (${pctText(d.steelWeight_pct)})`;
-    weight = `${tonsFmt.format(tons)} tons${pct} ${d.steelWeight_lb < 0 ? 'lighter' : 'heavier'}`;
+  const sameWeight = Math.abs(d.steelWeight_tons) < 0.05;
+  const pct = d.steelWeight_pct === null ? '' : ` (${pctText(d.steelWeight_pct)})`;
+  const weight = `${tonsFmt.format(Math.abs(d.steelWeight_tons))} tons${pct} ${d.steelWeight_lb < 0 ? 'lighter' : 'heavier'}`;
+  const roundedUsd = d.cost_usd === null ? null : Math.round(Math.abs(d.cost_usd) / 100) * 100;
+  const cost = roundedUsd === null || roundedUsd === 0 ? null : `${dollarsFmt.format(roundedUsd)} ${d.cost_usd! < 0 ? 'cheaper' : 'more expensive'}`;
+  const sameCost = roundedUsd === 0;
+  if (sameWeight) {
+    if (cost) return `${otherName} weighs about the same as ${baseName} (within 0.1 ton) and is ${cost}.`;
+    if (sameCost) return `${otherName} weighs and costs about the same as ${baseName}.`;
+    return `${otherName} weighs about the same as ${baseName} (within 0.1 ton).`;
   }
-  let cost = '';
-  if (d.cost_usd !== null) {
-    const rounded = Math.round(Math.abs(d.cost_usd) / 100) * 100;
-    cost = rounded === 0 ? ' and about the same cost' : ` and ${dollarsFmt.format(rounded)} ${d.cost_usd < 0 ? 'cheaper' : 'more expensive'}`;
-  }
-  return `${otherName} is ${weight}${cost} than ${baseName}.`;
+  if (cost) return `${otherName} is ${weight} and ${cost} than ${baseName}.`;
+  if (sameCost) return `${otherName} is ${weight} than ${baseName} at about the same cost.`;
+  return `${otherName} is ${weight} than ${baseName}.`;
 }
