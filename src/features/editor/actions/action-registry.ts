@@ -12,7 +12,7 @@ import {
 } from './plan-edits';
 import { bayPolygon, findBay, infillBay, infillDirection } from '../tools/infill.tool';
 import { fitView, panBy, zoomAt } from '../canvas/view-transform';
-import type { PlanZone } from '../../../../shared/schemas/plan.schema';
+import type { Plan, PlanZone } from '../../../../shared/schemas/plan.schema';
 
 /** 'record': one undo step when the plan changes. 'none': never in the undo history. */
 export type UndoMode = 'record' | 'none';
@@ -215,6 +215,20 @@ export const ACTIONS = {
   'elements.delete': action<{ ids: string[] }>({
     id: 'elements.delete', label: 'Delete', undo: 'record', edits: true,
     run: (s, a) => ({ plan: deleteElements(s.plan, a.ids), selection: s.selection.filter((id) => !a.ids.includes(id)) }),
+  }),
+
+  'member.setShape': action<{ id: string; shape: string | null }>({
+    id: 'member.setShape', label: 'Lock size', undo: 'record', edits: true,
+    run: (s, a) => ({ plan: { ...s.plan, members: s.plan.members.map((m) => (m.id === a.id ? { ...m, shape: a.shape } : m)) } }),
+  }),
+  'member.setConstraints': action<{ id: string; maxDepth_in: number | null; minDepth_in: number | null; allowedNominalDepths: number[] | null }>({
+    id: 'member.setConstraints', label: 'Depth limits', undo: 'record', edits: true,
+    run: (s, a) => ({
+      plan: { ...s.plan, members: s.plan.members.map((m) => (m.id === a.id ? { ...m, maxDepth_in: a.maxDepth_in, minDepth_in: a.minDepth_in, allowedNominalDepths: a.allowedNominalDepths } : m)) },
+    }),
+  }),
+  'plan.setDesignBasis': action<{ designBasis: Plan['designBasis'] }>({
+    id: 'plan.setDesignBasis', label: 'Design basis', undo: 'record', edits: true, run: (s, a) => ({ plan: { ...s.plan, designBasis: a.designBasis } }),
   }),
 
   // Levels

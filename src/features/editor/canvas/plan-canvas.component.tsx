@@ -1,0 +1,228 @@
+import { useEffect, useRef, useState, useSyncExternalStore } from 'react';
+import { Layer, Shape, Stage } from 'react-konva';
+import type Konva from 'konva';
+import { useStore } from 'zustand';
+import type { EditorStore } from '../store/editor.store';
+import type { LiveDesign } from '../design/live-design';
+import type { ToolController } from '../tools/tool-controller';
+import { buildStaticGeometry, type StaticGeometry } from './static-geometry';
+import { drawStatic } from './draw-static';
+import { drawOverlay } from './draw-overlay';
+import { readPlanTheme, type PlanTheme } from './plan-theme';
+import { scaleBarLength } from './view-transform';
+import { pickAt } from '../tools/hit-test.tool';
+import { memberStatus } from '../members/member-status';
+import { toPlan } from './view-transform';
+
+type Props = {
+  store: EditorStore;
+  design: LiveDesign;
+  controller: ToolController;
+  label: string;
+};
+
+/**
+ * The Plan canvas: a static layer for the committed drawing (not listening, redrawn from a
+ * cached geometry only when the plan, the design or the view changes) and an interactive
+ * layer for selection, drafts and handles. Pointer input is handled on the container and
+ * hit-tested with plain geometry, so neither layer needs Konva's hit graph.
+ */
+export function PlanCanvas({ store, design, controller, label }: Props) {
+  const containerRef = useRef<HTMLDivElement>(null);
+  const staticLayer = useRef<Konva.Layer>(null);
+  const overlayLayer = useRef<Konva.Layer>(null);
+  const geometry = useRef<StaticGeometry | null>(null);
+  const theme = useRef<PlanTheme | null>(null);
+  const [size, setSize] = useState({ width: 800, height: 560 });
+  const tool = useStore(store, (s) => s.tool);
+  const readOnly = useStore(store, (s) => s.readOnly);
+  const [panning, setPanning] = useState(false);
+  const tooltip = useTooltip(store, design, containerRef);
+
+  // Size follows the container.
+  useEffect(() => {
+    const el = containerRef.current;
+    if (!el) return;
+    const apply = () => {
+      const width = Math.max(200, Math.floor(el.clientWidth));
+      const height = Math.max(200, Math.floor(el.clientHeight));
+      setSize({ width, height });
+      const view = store.getState().view;
+      if (view.width !== width || view.height !== height) store.setState({ view: { ...view, width, height } });
+    };
+    apply();
+    if (typeof ResizeObserver === 'undefined') return;
+    const ro = new ResizeObserver(apply);
+    ro.observe(el);
+    return () => ro.disconnect();
+  }, [store]);
+
+  // Redraw on change, without re-rendering React.
+  useEffect(() => {
+    theme.current = readPlanTheme();
+    const rebuild = () => {
+      const s = store.getState();
+      geometry.current = buildStaticGeometry(s.plan, s.levelId, design.getSnapshot());
+    };
+    rebuild();
+    staticLayer.current?.batchDraw();
+    overlayLayer.current?.batchDraw();
+    let last = store.getState();
+    const unsubStore = store.subscribe((s) => {
+      const prev = last;
+      last = s;
+      if (s.plan !== prev.plan || s.levelId !== prev.levelId) {
+        rebuild();
+        staticLayer.current?.batchDraw();
+      } else if (s.view !== prev.view) staticLayer.current?.batchDraw();
+      if (s.view !== prev.view || s.selection !== prev.selection || s.draft !== prev.draft || s.hover !== prev.hover || s.tool !== prev.tool || s.plan !== prev.plan) {
+        overlayLayer.current?.batchDraw();
+      }
+    });
+    const unsubDesign = design.subscribe(() => {
+      rebuild();
+      staticLayer.current?.batchDraw();
+    });
+    return () => {
+      unsubStore();
+      unsubDesign();
+    };
+  }, [store, design]);
+
+  // Wheel must be non-passive to keep the page from scrolling while zooming.
+  useEffect(() => {
+    const el = containerRef.current;
+    if (!el) return;
+    const onWheel = (e: WheelEvent) => {
+      e.preventDefault();
+      const r = el.getBoundingClientRect();
+      controller.wheel({ sx: e.clientX - r.left, sy: e.clientY - r.top, deltaY: e.deltaY, deltaX: e.deltaX, ctrl: e.ctrlKey });
+    };
+    el.addEventListener('wheel', onWheel, { passive: false });
+    return () => el.removeEventListener('wheel', onWheel);
+  }, [controller]);
+
+  const local = (e: React.PointerEvent | React.MouseEvent) => {
+    const r = containerRef.current!.getBoundingClientRect();
+    return { sx: e.clientX - r.left, sy: e.clientY - r.top, shift: e.shiftKey, button: e.button };
+  };
+
+  const cursor = panning ? 'grab' : tool === 'select' || readOnly ? 'default' : 'crosshair';
+
+  return (
+    <div
+      ref={containerRef}
+      data-testid="plan-canvas"
+      role="img"
+      aria-label={label}
+      tabIndex={0}
+      className="relative h-full w-full touch-none overflow-hidden bg-paper-raised outline-none select-none"
+      style={{ cursor }}
+      onPointerDown={(e) => {
+        containerRef.current?.focus();
+        (e.target as Element).setPointerCapture?.(e.pointerId);
+        controller.down(local(e));
+        setPanning(controller.panning);
+      }}
+      onPointerMove={(e) => {
+        controller.move(local(e));
+        tooltip.move(local(e));
+      }}
+      onPointerUp={(e) => {
+        controller.up(local(e));
+        setPanning(controller.panning);
+      }}
+      onPointerLeave={() => {
+        controller.leave();
+        tooltip.hide();
+      }}
+      onDoubleClick={() => controller.doubleClick()}
+      onContextMenu={(e) => e.preventDefault()}
+    >
+      <Stage width={size.width} height={size.height} listening={false}>
+        <Layer ref={staticLayer} listening={false}>
+          <Shape
+            listening={false}
+            perfectDrawEnabled={false}
+            sceneFunc={(ctx) => {
+              const g = geometry.current;
+              if (!g || !theme.current) return;
+              const view = store.getState().view;
+              const labelled = drawStatic(ctx._context, store.getState().plan, g, view, theme.current);
+              // Read-back for tests and tools: the view and how many members carry a printed size.
+              const el = containerRef.current;
+              if (el) {
+                el.dataset.viewScale = String(view.scale);
+                el.dataset.viewX = String(view.x);
+                el.dataset.viewY = String(view.y);
+                el.dataset.labelledMembers = String(labelled);
+                el.dataset.members = String(g.memberCount);
+              }
+            }}
+          />
+        </Layer>
+        <Layer ref={overlayLayer} listening={false}>
+          <Shape
+            listening={false}
+            perfectDrawEnabled={false}
+            sceneFunc={(ctx) => {
+              if (theme.current) drawOverlay(ctx._context, store.getState(), theme.current);
+            }}
+          />
+        </Layer>
+      </Stage>
+      <ScaleIndicator store={store} />
+      {tooltip.content ? (
+        <div
+          role="tooltip"
+          className="pointer-events-none absolute z-10 max-w-72 rounded-[3px] border border-ink bg-paper-raised px-2 py-1 text-xs text-ink shadow"
+          style={{ left: tooltip.content.x + 14, top: tooltip.content.y + 14 }}
+        >
+          {tooltip.content.text}
+        </div>
+      ) : null}
+    </div>
+  );
+}
+
+function ScaleIndicator({ store }: { store: EditorStore }) {
+  const scale = useStore(store, (s) => s.view.scale);
+  const ft = scaleBarLength(scale);
+  const px = ft * scale;
+  return (
+    <div data-testid="scale-indicator" className="pointer-events-none absolute bottom-3 left-3 flex flex-col gap-0.5 rounded-[2px] bg-paper-raised/85 px-1.5 py-1">
+      <div className="flex" style={{ width: px }}>
+        <div className="h-1.5 flex-1 border border-ink bg-ink" />
+        <div className="h-1.5 flex-1 border border-l-0 border-ink" />
+      </div>
+      <span className="figures font-mono text-[10px] text-ink">
+        {ft} ft · {scale >= 10 ? scale.toFixed(0) : scale.toFixed(1)} px/ft
+      </span>
+    </div>
+  );
+}
+
+/** A tooltip naming the member under the pointer: mark, size, ratio and status in words. */
+function useTooltip(store: EditorStore, design: LiveDesign, containerRef: React.RefObject<HTMLDivElement | null>) {
+  const [content, setContent] = useState<{ x: number; y: number; text: string } | null>(null);
+  useSyncExternalStore(design.subscribe, design.getSnapshot);
+  return {
+    content,
+    hide: () => setContent(null),
+    move: (p: { sx: number; sy: number }) => {
+      const s = store.getState();
+      if (!containerRef.current) return;
+      const hit = pickAt(s.plan, s.levelId, toPlan(s.view, p.sx, p.sy), 6 / s.view.scale, ['member']);
+      if (!hit) {
+        if (content) setContent(null);
+        return;
+      }
+      const snap = design.getSnapshot();
+      const m = s.plan.members.find((x) => x.id === hit.id)!;
+      const st = memberStatus(hit.id, snap.byId.get(hit.id), snap.result, snap.pending);
+      const ratio = st.ratio === null ? '' : ` · ratio ${st.util.printed}`;
+      const text = `${st.mark || m.id} ${m.kind} · ${st.size}${ratio} · ${st.words}`;
+      if (!content || content.text !== text || Math.abs(content.x - p.sx) > 2 || Math.abs(content.y - p.sy) > 2) setContent({ x: p.sx, y: p.sy, text });
+    },
+  };
+}

@@ -1,0 +1,61 @@
+/**
+ * The committed drawing of one level, prepared once per plan/design change and cached:
+ * members grouped into one path per (kind, utilisation band) so thousands of members stroke
+ * in a handful of calls. Paths are in plan feet; the view transform is applied when drawn.
+ */
+import type { Plan } from '../../../../shared/schemas/plan.schema';
+import type { LiveDesignSnapshot } from '../design/live-design';
+import { memberStatus, type MemberStatus } from '../members/member-status';
+import type { UtilisationBand } from '../../../lib/utilisation';
+import type { PlanPoint } from '../store/editor.types';
+
+export interface MemberLabel {
+  id: string;
+  kind: 'girder' | 'beam';
+  start: PlanPoint;
+  end: PlanPoint;
+  status: MemberStatus;
+}
+
+export interface StaticGeometry {
+  members: { kind: 'girder' | 'beam'; band: UtilisationBand; path: Path2D; count: number }[];
+  labels: MemberLabel[];
+  decks: { id: string; polygon: PlanPoint[]; spanDirection: 'x' | 'y'; zoneIndex: number; zoneName: string }[];
+  openings: { id: string; polygon: PlanPoint[] }[];
+  columns: PlanPoint[];
+  pointLoads: { id: string; at: PlanPoint; text: string }[];
+  lineLoads: { id: string; start: PlanPoint; end: PlanPoint; text: string }[];
+  memberCount: number;
+}
+
+const fmt = (v: number) => (Math.round(v * 100) / 100).toString();
+
+export function buildStaticGeometry(plan: Plan, levelId: string, design: LiveDesignSnapshot): StaticGeometry {
+  const groups = new Map<string, { kind: 'girder' | 'beam'; band: UtilisationBand; path: Path2D; count: number }>();
+  const labels: MemberLabel[] = [];
+  for (const m of plan.members) {
+    if (m.level !== levelId) continue;
+    const status = memberStatus(m.id, design.byId.get(m.id), design.result, design.pending);
+    const band = status.util.band;
+    const key = `${m.kind}:${band}`;
+    let g = groups.get(key);
+    if (!g) groups.set(key, (g = { kind: m.kind, band, path: new Path2D(), count: 0 }));
+    g.path.moveTo(m.start[0], m.start[1]);
+    g.path.lineTo(m.end[0], m.end[1]);
+    g.count++;
+    labels.push({ id: m.id, kind: m.kind, start: m.start, end: m.end, status });
+  }
+  const zoneIndex = new Map(plan.zones.map((z, i) => [z.id, i]));
+  // Beams first so girders draw over them.
+  const members = [...groups.values()].sort((a, b) => (a.kind === b.kind ? 0 : a.kind === 'beam' ? -1 : 1));
+  return {
+    members,
+    labels,
+    decks: plan.decks.filter((d) => d.level === levelId).map((d) => ({ id: d.id, polygon: d.polygon, spanDirection: d.spanDirection, zoneIndex: zoneIndex.get(d.zone) ?? -1, zoneName: plan.zones.find((z) => z.id === d.zone)?.name ?? d.zone })),
+    openings: plan.openings.filter((o) => o.level === levelId).map((o) => ({ id: o.id, polygon: o.polygon })),
+    columns: plan.columns.filter((c) => c.levels.includes(levelId)).map((c) => [c.x_ft, c.y_ft] as PlanPoint),
+    pointLoads: plan.pointLoads.filter((p) => p.level === levelId).map((p) => ({ id: p.id, at: [p.x_ft, p.y_ft] as PlanPoint, text: `${fmt(p.D_kip)}D + ${fmt(p.L_kip)}L k` })),
+    lineLoads: plan.lineLoads.filter((w) => w.level === levelId).map((w) => ({ id: w.id, start: w.start, end: w.end, text: `${fmt(w.D_klf)}D + ${fmt(w.L_klf)}L klf` })),
+    memberCount: labels.length,
+  };
+}

@@ -1,0 +1,264 @@
+import { useEffect, useRef, useState, useSyncExternalStore, type ReactNode } from 'react';
+import { useStore } from 'zustand';
+import type { SchemeMember, SchemeResult } from '../../../../shared/engine/index';
+import type { Plan, PlanMember } from '../../../../shared/schemas/plan.schema';
+import { Button } from '../../../components/ui/button.ui';
+import { EngineerCaution } from '../../../components/ui/engineer-caution.ui';
+import { ACTIONS, actionForKey, dispatch, keyOf, type ActionId } from '../actions/action-registry';
+import { savePlan } from '../api/save-plan.api';
+import { PlanCanvas } from '../canvas/plan-canvas.component';
+import { LiveDesign } from '../design/live-design';
+import { MemberList } from '../members/member-list.component';
+import { createEditorStore, type EditorStore } from '../store/editor.store';
+import { PlanAutosave, type AutosaveSnapshot } from '../sync/plan-autosave';
+import { createToolController } from '../tools/tool-controller';
+import { ConflictBanner } from './conflict-banner.component';
+import { LevelBar } from './level-bar.component';
+import { PlanToolbar } from './plan-toolbar.component';
+import { SelectionInspector } from './selection-inspector.component';
+import { ToolOptionsBar } from './tool-options.component';
+
+export interface MemberSheetSlotArgs {
+  member: SchemeMember;
+  planMember: PlanMember;
+  plan: Plan;
+  result: SchemeResult;
+  canEdit: boolean;
+  lockShape: (shape: string | null) => void;
+  setConstraints: (c: { maxDepth_in: number | null; minDepth_in: number | null; allowedNominalDepths: number[] | null }) => void;
+  close: () => void;
+}
+
+export interface DesignBasisSlotArgs {
+  designBasis: Plan['designBasis'];
+  canEdit: boolean;
+  submit: (next: Plan['designBasis']) => void;
+}
+
+export interface PlanEditorProps {
+  schemeId: string;
+  schemeName: string;
+  plan: Plan;
+  revision: number;
+  canEdit: boolean;
+  initialLevelId?: string | null;
+  onLevelChange?: (levelId: string) => void;
+  onSaved?: (revision: number, plan: Plan) => void;
+  /** The Member sheet for one selected member (composed by the page). */
+  renderMemberSheet?: (args: MemberSheetSlotArgs) => ReactNode;
+  /** The Design basis form (composed by the page). */
+  renderDesignBasis?: (args: DesignBasisSlotArgs) => ReactNode;
+  /** Underlay controls (composed by the page). */
+  underlay?: ReactNode;
+  /** Save function (tests pass their own); defaults to PUT /api/schemes/:id/plan. */
+  save?: typeof savePlan;
+}
+
+function isTyping(target: EventTarget | null): boolean {
+  const el = target as HTMLElement | null;
+  return !!el && (el.tagName === 'INPUT' || el.tagName === 'SELECT' || el.tagName === 'TEXTAREA' || el.isContentEditable);
+}
+
+/** The Plan: level bar, tools, canvas, member list and the selected member's sheet. */
+export function PlanEditor(props: PlanEditorProps) {
+  const { schemeId, canEdit } = props;
+  const propsRef = useRef(props);
+  propsRef.current = props;
+  const [store] = useState(() => createEditorStore({ plan: props.plan, levelId: props.initialLevelId ?? undefined, readOnly: !canEdit }));
+  const [design] = useState(() => new LiveDesign());
+  const [controller] = useState(() => createToolController(store));
+  const [autosave] = useState(
+    () =>
+      new PlanAutosave(store, props.revision, {
+        save: (revision, plan) => (propsRef.current.save ?? savePlan)(schemeId, revision, plan),
+        onSaved: (revision, plan) => propsRef.current.onSaved?.(revision, plan),
+        storage: typeof localStorage === 'undefined' ? null : localStorage,
+        storageKey: `baywright.plan-draft.${schemeId}`,
+      }),
+  );
+  const rootRef = useRef<HTMLDivElement>(null);
+  const levelId = useStore(store, (s) => s.levelId);
+  const notice = useStore(store, (s) => s.notice);
+  const selection = useStore(store, (s) => s.selection);
+  const plan = useStore(store, (s) => s.plan);
+  const canUndo = useStore(store.temporal, (t) => t.pastStates.length > 0);
+  const canRedo = useStore(store.temporal, (t) => t.futureStates.length > 0);
+  const saveState = useSyncExternalStore(autosave.subscribe, autosave.getSnapshot);
+  const designState = useSyncExternalStore(design.subscribe, design.getSnapshot);
+  const [recovered, setRecovered] = useState(() => autosave.readLocalDraft());
+  const [showBasis, setShowBasis] = useState(false);
+
+  // Design after every change of the plan; publish the edit → sizes time for tests and the status line.
+  useEffect(() => {
+    design.onMeasured = (ms) => {
+      rootRef.current?.setAttribute('data-edit-to-sizes-ms', ms.toFixed(1));
+      rootRef.current?.setAttribute('data-design-count', String((Number(rootRef.current.getAttribute('data-design-count')) || 0) + 1));
+      console.info(`[plan] edit → sizes on screen: ${ms.toFixed(1)} ms (engine ${design.getSnapshot().lastEngineMs?.toFixed(1)} ms)`);
+    };
+    design.request(store.getState().plan);
+    let previous = store.getState().plan;
+    const unsub = store.subscribe((s) => {
+      if (s.plan === previous) return;
+      previous = s.plan;
+      design.request(s.plan);
+    });
+    autosave.start();
+    return () => {
+      unsub();
+      autosave.stop();
+      design.dispose();
+    };
+  }, [store, design, autosave]);
+
+  useEffect(() => {
+    propsRef.current.onLevelChange?.(levelId);
+  }, [levelId]);
+
+  // Fit the level once the canvas has its size.
+  useEffect(() => {
+    const id = requestAnimationFrame(() => dispatch(store, 'view.fit'));
+    return () => cancelAnimationFrame(id);
+  }, [store, levelId]);
+
+  const onKeyDown = (e: React.KeyboardEvent) => {
+    if (isTyping(e.target)) return;
+    if (e.key === ' ') {
+      controller.setSpace(true);
+      e.preventDefault();
+      return;
+    }
+    if (e.key === 'Enter') {
+      controller.commitDraft();
+      return;
+    }
+    const id = actionForKey(keyOf(e));
+    if (!id) return;
+    const a = ACTIONS[id];
+    if (a.edits && !canEdit) return;
+    e.preventDefault();
+    dispatch(store, id as 'tool.select');
+  };
+
+  const selectedMember = selection.length === 1 ? plan.members.find((m) => m.id === selection[0] && m.level === levelId) : undefined;
+  const schemeMember = selectedMember ? designState.byId.get(selectedMember.id) : undefined;
+  const levelName = plan.levels.find((l) => l.id === levelId)?.name ?? 'no level';
+
+  return (
+    <div
+      ref={rootRef}
+      data-testid="plan-editor"
+      data-read-only={!canEdit || undefined}
+      className="flex flex-col border-2 border-ink bg-paper-raised"
+      onKeyDown={onKeyDown}
+      onKeyUp={(e) => e.key === ' ' && controller.setSpace(false)}
+    >
+      <div className="flex flex-wrap items-center justify-between gap-3 border-b border-ink bg-paper px-3 py-2">
+        <LevelBar store={store} canEdit={canEdit} />
+        <div className="flex flex-wrap items-center gap-1">
+          {canEdit ? (
+            <>
+              <ActionButton store={store} id="edit.undo" disabled={!canUndo} />
+              <ActionButton store={store} id="edit.redo" disabled={!canRedo} />
+              <span className="mx-1 h-5 w-px bg-line" aria-hidden />
+            </>
+          ) : null}
+          <ActionButton store={store} id="view.zoomOut" text="−" />
+          <ActionButton store={store} id="view.zoomIn" text="+" />
+          <ActionButton store={store} id="view.fit" />
+          {props.renderDesignBasis ? (
+            <Button variant="quiet" className="h-8 text-xs" aria-expanded={showBasis} onClick={() => setShowBasis((v) => !v)}>
+              Design basis
+            </Button>
+          ) : null}
+        </div>
+      </div>
+      {saveState.conflict ? <ConflictBanner conflict={saveState.conflict} onKeepMine={() => void autosave.keepMine()} onTakeTheirs={() => autosave.takeTheirs()} /> : null}
+      {recovered && canEdit ? (
+        <div role="alert" className="flex flex-wrap items-center gap-3 border-b-2 border-notice bg-notice-wash px-4 py-2 text-sm">
+          <span className="flex-1">Changes to this scheme from {new Date(recovered.keptAt).toLocaleString()} were kept on this device but not saved.</span>
+          <Button variant="primary" className="h-8 text-xs" onClick={() => (store.setState({ plan: recovered.plan }), setRecovered(null))}>
+            Restore them
+          </Button>
+          <Button variant="secondary" className="h-8 text-xs" onClick={() => (autosave.discardLocalDraft(), setRecovered(null))}>
+            Discard
+          </Button>
+        </div>
+      ) : null}
+      {showBasis && props.renderDesignBasis ? (
+        <div className="border-b border-ink bg-paper px-4 py-3">
+          {props.renderDesignBasis({ designBasis: plan.designBasis, canEdit, submit: (designBasis) => dispatch(store, 'plan.setDesignBasis', { designBasis }) })}
+        </div>
+      ) : null}
+      {canEdit ? <ToolOptionsBar store={store} /> : null}
+      {props.underlay ? <div className="border-b border-ink bg-paper px-3 py-1.5">{props.underlay}</div> : null}
+      <div className="flex min-h-0" style={{ height: 'min(72vh, 760px)' }}>
+        {canEdit ? <PlanToolbar store={store} /> : null}
+        <div className="relative min-w-0 flex-1">
+          <PlanCanvas store={store} design={design} controller={controller} label={`Plan of ${levelName}, ${props.schemeName}`} />
+        </div>
+        <aside className="flex w-[26rem] shrink-0 flex-col border-l border-ink bg-paper-raised" aria-label="Members and selection">
+          <MemberList store={store} design={design} />
+          <SelectionInspector store={store} canEdit={canEdit} />
+        </aside>
+      </div>
+      <div className="flex flex-wrap items-center justify-between gap-3 border-t border-ink bg-paper px-3 py-1.5 text-xs">
+        <p role="status" aria-live="polite" className={notice?.tone === 'error' ? 'text-danger' : 'text-ink-soft'} data-testid="plan-notice">
+          {notice?.text ?? (canEdit ? '' : 'Read only: your role can view this plan but not change it.')}
+        </p>
+        <div className="flex items-center gap-4 text-ink-soft">
+          <span data-testid="design-status">
+            {designState.pending ? 'Designing…' : designState.error ? `Design stopped: ${designState.error}` : designState.result ? `${designState.result.members.length} members sized` : ''}
+            {designState.lastEditToSizesMs !== null ? <span className="figures font-mono"> · {designState.lastEditToSizesMs.toFixed(0)} ms</span> : null}
+          </span>
+          <SaveStatus state={saveState} />
+        </div>
+      </div>
+      {selectedMember && schemeMember && designState.result && props.renderMemberSheet ? (
+        <div className="border-t-2 border-ink" data-testid="member-sheet-slot">
+          {props.renderMemberSheet({
+            member: schemeMember,
+            planMember: selectedMember,
+            plan,
+            result: designState.result,
+            canEdit,
+            lockShape: (shape) => dispatch(store, 'member.setShape', { id: selectedMember.id, shape }),
+            setConstraints: (c) => dispatch(store, 'member.setConstraints', { id: selectedMember.id, ...c }),
+            close: () => dispatch(store, 'selection.set', { ids: [] }),
+          })}
+        </div>
+      ) : null}
+      {saveState.status === 'invalid' ? (
+        <div role="alert" className="border-t border-danger bg-danger-wash px-3 py-2 text-xs text-danger">
+          {saveState.message} {saveState.problems.slice(0, 5).join(' ')}
+        </div>
+      ) : null}
+      <EngineerCaution className="border-t border-line px-3 py-2" />
+    </div>
+  );
+}
+
+function ActionButton({ store, id, disabled, text }: { store: EditorStore; id: ActionId; disabled?: boolean; text?: string }) {
+  const a = ACTIONS[id];
+  return (
+    <Button variant="quiet" className="h-8 px-2.5 text-xs" disabled={disabled} title={`${a.label} (${a.shortcut})`} aria-label={a.label} aria-keyshortcuts={a.shortcut} onClick={() => dispatch(store, id as 'view.fit')}>
+      {text ?? a.label}
+    </Button>
+  );
+}
+
+function SaveStatus({ state }: { state: AutosaveSnapshot }) {
+  const text: Record<AutosaveSnapshot['status'], string> = {
+    saved: `Saved · revision ${state.revision}`,
+    pending: 'Unsaved changes · saving shortly',
+    saving: 'Saving…',
+    conflict: 'Not saved: someone else saved first',
+    invalid: 'Not saved: the server refused the plan',
+    offline: `Not saved: ${state.message ?? 'server unreachable'} Retrying.`,
+    readonly: 'Read only',
+  };
+  return (
+    <span data-testid="save-status" data-status={state.status} className={state.status === 'conflict' || state.status === 'invalid' || state.status === 'offline' ? 'text-danger' : ''}>
+      {text[state.status]}
+    </span>
+  );
+}

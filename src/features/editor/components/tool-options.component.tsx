@@ -1,0 +1,264 @@
+import { useId, useState, type ReactNode } from 'react';
+import { useStore } from 'zustand';
+import { Button } from '../../../components/ui/button.ui';
+import { dispatch } from '../actions/action-registry';
+import type { EditorStore } from '../store/editor.store';
+import type { ToolOptions } from '../store/editor.types';
+import { parseGridSpacings } from '../tools/grid-spacings.parser';
+import { ZONE_PRESETS } from '../tools/zone-presets';
+
+const HINTS: Partial<Record<string, string>> = {
+  select: 'Click to select, Shift-click to add, drag on empty paper for a box. Drag a selected member’s end square to move it.',
+  girder: 'Click the start, then the end; it snaps to columns, grid intersections and members. Keeps drawing from the last end; Esc stops.',
+  beam: 'Click the start, then the end; it snaps to columns, grid intersections, member ends and points along members. Esc stops.',
+  column: 'Click a grid intersection (or anywhere) to place a column through every level.',
+  opening: 'Click two opposite corners.',
+  measure: 'Click two points to measure between them.',
+  delete: 'Click an element to delete it (Undo brings it back).',
+  lineLoad: 'Click the start and end of the line load.',
+  pointLoad: 'Click where the load sits.',
+};
+
+const INPUT = 'h-8 w-20 rounded-[3px] border border-line bg-paper-raised px-2 text-xs text-ink figures font-mono focus:border-accent focus:outline-none';
+const SELECT = 'h-8 rounded-[3px] border border-line bg-paper-raised px-1.5 text-xs text-ink focus:border-accent focus:outline-none';
+
+function Field({ label, children }: { label: string; children: (id: string) => ReactNode }) {
+  const id = useId();
+  return (
+    <span className="flex items-center gap-1.5 text-xs">
+      <label htmlFor={id} className="text-ink-soft">
+        {label}
+      </label>
+      {children(id)}
+    </span>
+  );
+}
+
+function NumberField({ label, value, onValue, step = 'any', min = 0 }: { label: string; value: number; onValue: (v: number) => void; step?: string; min?: number }) {
+  const [text, setText] = useState(String(value));
+  return (
+    <Field label={label}>
+      {(id) => (
+        <input
+          id={id}
+          className={INPUT}
+          inputMode="decimal"
+          value={text}
+          step={step}
+          onChange={(e) => {
+            setText(e.target.value);
+            const v = Number(e.target.value);
+            if (e.target.value.trim() !== '' && Number.isFinite(v) && v >= min) onValue(v);
+          }}
+          aria-invalid={!(Number.isFinite(Number(text)) && Number(text) >= min) || undefined}
+        />
+      )}
+    </Field>
+  );
+}
+
+/** The options of the active tool, under the level bar. */
+export function ToolOptionsBar({ store }: { store: EditorStore }) {
+  const tool = useStore(store, (s) => s.tool);
+  const options = useStore(store, (s) => s.options);
+  const zones = useStore(store, (s) => s.plan.zones);
+  const set = (patch: Partial<ToolOptions>) => store.setState({ options: { ...store.getState().options, ...patch } });
+
+  let body: ReactNode = HINTS[tool] ? <p className="text-xs text-ink-soft">{HINTS[tool]}</p> : null;
+  if (tool === 'grid') body = <GridOptions store={store} axis={options.gridAxis} onAxis={(gridAxis) => set({ gridAxis })} />;
+  if (tool === 'column') {
+    body = (
+      <>
+        <Button variant="secondary" className="h-8 text-xs" onClick={() => dispatch(store, 'column.allIntersections')}>
+          Columns at all intersections
+        </Button>
+        <p className="text-xs text-ink-soft">{HINTS.column}</p>
+      </>
+    );
+  }
+  if (tool === 'infill') {
+    body = (
+      <>
+        <Field label="Beams run">
+          {(id) => (
+            <select id={id} className={SELECT} value={options.infillDirection} onChange={(e) => set({ infillDirection: e.target.value as ToolOptions['infillDirection'] })}>
+              <option value="auto">between the girders</option>
+              <option value="y">north–south</option>
+              <option value="x">east–west</option>
+            </select>
+          )}
+        </Field>
+        <Field label="By">
+          {(id) => (
+            <select id={id} className={SELECT} value={options.infillMode} onChange={(e) => set({ infillMode: e.target.value as ToolOptions['infillMode'] })}>
+              <option value="spacing">spacing</option>
+              <option value="count">count</option>
+            </select>
+          )}
+        </Field>
+        {options.infillMode === 'spacing' ? (
+          <NumberField key="s" label="Max spacing, ft" value={options.infillSpacing_ft} onValue={(v) => v > 0 && set({ infillSpacing_ft: v })} />
+        ) : (
+          <NumberField key="c" label="Beams per bay" value={options.infillCount} onValue={(v) => Number.isInteger(v) && v >= 1 && set({ infillCount: v })} min={1} />
+        )}
+        <p className="text-xs text-ink-soft">Click a bay to fill it; clicking again replaces its beams.</p>
+      </>
+    );
+  }
+  if (tool === 'deck') {
+    body = (
+      <>
+        <Field label="Draw">
+          {(id) => (
+            <select id={id} className={SELECT} value={options.deckMode} onChange={(e) => set({ deckMode: e.target.value as ToolOptions['deckMode'] })}>
+              <option value="bay">a bay (click inside)</option>
+              <option value="polygon">an outline (click corners)</option>
+            </select>
+          )}
+        </Field>
+        <Field label="Deck spans">
+          {(id) => (
+            <select id={id} className={SELECT} value={options.deckSpan} onChange={(e) => set({ deckSpan: e.target.value as ToolOptions['deckSpan'] })}>
+              <option value="auto">across the beams</option>
+              <option value="x">east–west</option>
+              <option value="y">north–south</option>
+            </select>
+          )}
+        </Field>
+        <ZoneSelect store={store} label="Load zone" />
+        {zones.length === 0 ? <p className="text-xs text-danger">Add a load zone with the Zone tool first.</p> : null}
+      </>
+    );
+  }
+  if (tool === 'zone') body = <ZoneOptions store={store} />;
+  if (tool === 'pointLoad') {
+    body = (
+      <>
+        <NumberField label="Dead, kip" value={options.pointLoad.D_kip} onValue={(D_kip) => set({ pointLoad: { ...store.getState().options.pointLoad, D_kip } })} />
+        <NumberField label="Live, kip" value={options.pointLoad.L_kip} onValue={(L_kip) => set({ pointLoad: { ...store.getState().options.pointLoad, L_kip } })} />
+        <p className="text-xs text-ink-soft">{HINTS.pointLoad}</p>
+      </>
+    );
+  }
+  if (tool === 'lineLoad') {
+    body = (
+      <>
+        <NumberField label="Dead, klf" value={options.lineLoad.D_klf} onValue={(D_klf) => set({ lineLoad: { ...store.getState().options.lineLoad, D_klf } })} />
+        <NumberField label="Live, klf" value={options.lineLoad.L_klf} onValue={(L_klf) => set({ lineLoad: { ...store.getState().options.lineLoad, L_klf } })} />
+        <p className="text-xs text-ink-soft">{HINTS.lineLoad}</p>
+      </>
+    );
+  }
+  return (
+    <div className="flex min-h-11 flex-wrap items-center gap-x-4 gap-y-2 border-b border-ink bg-paper px-3 py-1.5" aria-label="Tool options" role="group">
+      {body}
+    </div>
+  );
+}
+
+function GridOptions({ store, axis, onAxis }: { store: EditorStore; axis: 'x' | 'y'; onAxis: (a: 'x' | 'y') => void }) {
+  const [xText, setXText] = useState('');
+  const [yText, setYText] = useState('');
+  const [errors, setErrors] = useState<{ x?: string; y?: string }>({});
+  const xId = useId();
+  const yId = useId();
+  const apply = (e: React.FormEvent) => {
+    e.preventDefault();
+    const x = xText.trim() ? parseGridSpacings(xText) : null;
+    const y = yText.trim() ? parseGridSpacings(yText) : null;
+    const next = { x: x && !x.ok ? x.error : undefined, y: y && !y.ok ? y.error : undefined };
+    if (!x && !y) next.x = 'Enter spacings for at least one direction, for example 3@30.';
+    setErrors(next);
+    if (next.x || next.y) return;
+    dispatch(store, 'grid.fromSpacings', { x: x && x.ok ? x.spacings_ft : null, y: y && y.ok ? y.spacings_ft : null });
+  };
+  return (
+    <form className="flex flex-wrap items-start gap-x-3 gap-y-1" onSubmit={apply} aria-label="Grid from spacings">
+      <div className="flex flex-col">
+        <span className="flex items-center gap-1.5 text-xs">
+          <label htmlFor={xId} className="text-ink-soft">
+            Bays 1, 2, 3 … (east–west), ft
+          </label>
+          <input id={xId} className={`${INPUT} w-32`} placeholder="3@30, 2@28" value={xText} onChange={(e) => setXText(e.target.value)} aria-invalid={!!errors.x || undefined} aria-describedby={errors.x ? `${xId}-e` : undefined} />
+        </span>
+        {errors.x ? <span id={`${xId}-e`} className="text-xs text-danger">{errors.x}</span> : null}
+      </div>
+      <div className="flex flex-col">
+        <span className="flex items-center gap-1.5 text-xs">
+          <label htmlFor={yId} className="text-ink-soft">
+            Bays A, B, C … (north–south), ft
+          </label>
+          <input id={yId} className={`${INPUT} w-32`} placeholder="2@36" value={yText} onChange={(e) => setYText(e.target.value)} aria-invalid={!!errors.y || undefined} aria-describedby={errors.y ? `${yId}-e` : undefined} />
+        </span>
+        {errors.y ? <span id={`${yId}-e`} className="text-xs text-danger">{errors.y}</span> : null}
+      </div>
+      <Button type="submit" variant="secondary" className="h-8 text-xs">
+        Grid from spacings
+      </Button>
+      <Field label="Click adds">
+        {(id) => (
+          <select id={id} className={SELECT} value={axis} onChange={(e) => onAxis(e.target.value as 'x' | 'y')}>
+            <option value="x">a numbered line (north–south)</option>
+            <option value="y">a lettered line (east–west)</option>
+          </select>
+        )}
+      </Field>
+    </form>
+  );
+}
+
+function ZoneSelect({ store, label }: { store: EditorStore; label: string }) {
+  const zones = useStore(store, (s) => s.plan.zones);
+  const zoneId = useStore(store, (s) => s.options.zoneId);
+  return (
+    <Field label={label}>
+      {(id) => (
+        <select id={id} className={SELECT} value={zoneId} onChange={(e) => store.setState({ options: { ...store.getState().options, zoneId: e.target.value } })}>
+          {zones.length === 0 ? <option value="">none yet</option> : null}
+          {zones.map((z) => (
+            <option key={z.id} value={z.id}>
+              {z.name} — {z.live_psf || z.roofLive_psf} psf live
+            </option>
+          ))}
+        </select>
+      )}
+    </Field>
+  );
+}
+
+function ZoneOptions({ store }: { store: EditorStore }) {
+  const [key, setKey] = useState(ZONE_PRESETS[0].key);
+  const preset = ZONE_PRESETS.find((p) => p.key === key)!;
+  const [values, setValues] = useState(preset.zone);
+  const choose = (k: string) => {
+    setKey(k);
+    setValues(ZONE_PRESETS.find((p) => p.key === k)!.zone);
+  };
+  const num = (field: 'live_psf' | 'partition_psf' | 'superimposedDead_psf' | 'dead_psf' | 'roofLive_psf', label: string) => (
+    <NumberField key={`${key}-${field}`} label={label} value={values[field]} onValue={(v) => setValues((old) => ({ ...old, [field]: v }))} />
+  );
+  return (
+    <>
+      <Field label="Occupancy">
+        {(id) => (
+          <select id={id} className={SELECT} value={key} onChange={(e) => choose(e.target.value)}>
+            {ZONE_PRESETS.map((p) => (
+              <option key={p.key} value={p.key}>
+                {p.label}
+              </option>
+            ))}
+          </select>
+        )}
+      </Field>
+      {key === 'roof' ? num('roofLive_psf', 'Roof live, psf') : num('live_psf', 'Live, psf')}
+      {num('partition_psf', 'Partitions, psf')}
+      {num('superimposedDead_psf', 'Superimposed dead, psf')}
+      {num('dead_psf', 'Slab and deck, psf')}
+      <Button variant="secondary" className="h-8 text-xs" onClick={() => dispatch(store, 'zone.add', { zone: values })}>
+        Use this zone
+      </Button>
+      <ZoneSelect store={store} label="Paint with" />
+      <p className="w-full text-[11px] text-ink-faint">{preset.source}. Click a deck area to give it the zone.</p>
+    </>
+  );
+}

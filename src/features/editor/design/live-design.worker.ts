@@ -1,0 +1,20 @@
+// Designs the scheme off the main thread so drawing stays smooth. Keeps the last result so
+// designScheme can reuse unchanged member designs (its `previous` option).
+import { designScheme, type SchemeResult } from '../../../../shared/engine/index';
+import type { Plan } from '../../../../shared/schemas/plan.schema';
+import type { DesignReply, DesignRequest } from './live-design.types';
+
+const scope = self as unknown as { onmessage: ((e: MessageEvent<DesignRequest>) => void) | null; postMessage(message: DesignReply): void };
+let previous: SchemeResult | undefined;
+
+scope.onmessage = (e) => {
+  const { seq, plan } = e.data;
+  const t0 = performance.now();
+  try {
+    const result = designScheme(plan as Plan, { previous });
+    previous = result;
+    scope.postMessage({ seq, result, engineMs: performance.now() - t0 });
+  } catch (err) {
+    scope.postMessage({ seq, error: err instanceof Error ? err.message : String(err), engineMs: performance.now() - t0 });
+  }
+};

@@ -1,0 +1,123 @@
+import { useEffect, useMemo, useRef, useSyncExternalStore } from 'react';
+import { useStore } from 'zustand';
+import { dispatch } from '../actions/action-registry';
+import type { LiveDesign } from '../design/live-design';
+import type { EditorStore } from '../store/editor.store';
+import { memberStatus, type MemberStatus } from './member-status';
+
+type Row = { id: string; kind: 'girder' | 'beam'; span_ft: number; status: MemberStatus };
+
+const naturalMark = (a: string, b: string) => a.localeCompare(b, undefined, { numeric: true });
+
+/**
+ * Every member of the level as a table (mark, size, ratio, status in words), for reading back
+ * what the canvas shows and for screen readers. Selecting a row selects the member on the
+ * canvas and the other way round.
+ */
+export function MemberList({ store, design }: { store: EditorStore; design: LiveDesign }) {
+  const plan = useStore(store, (s) => s.plan);
+  const levelId = useStore(store, (s) => s.levelId);
+  const selection = useStore(store, (s) => s.selection);
+  const snap = useSyncExternalStore(design.subscribe, design.getSnapshot);
+  const bodyRef = useRef<HTMLTableSectionElement>(null);
+
+  const rows: Row[] = useMemo(() => {
+    const out: Row[] = [];
+    for (const m of plan.members) {
+      if (m.level !== levelId) continue;
+      const sm = snap.byId.get(m.id);
+      out.push({ id: m.id, kind: m.kind, span_ft: sm?.span_ft ?? Math.hypot(m.end[0] - m.start[0], m.end[1] - m.start[1]), status: memberStatus(m.id, sm, snap.result, snap.pending) });
+    }
+    return out.sort((a, b) => (a.kind === b.kind ? naturalMark(a.status.mark || a.id, b.status.mark || b.id) : a.kind === 'girder' ? -1 : 1));
+  }, [plan, levelId, snap]);
+
+  const selected = useMemo(() => new Set(selection), [selection]);
+  useEffect(() => {
+    if (selection.length !== 1) return;
+    const row = bodyRef.current?.querySelector<HTMLElement>(`[data-member-id="${CSS.escape(selection[0])}"]`);
+    row?.scrollIntoView?.({ block: 'nearest' });
+  }, [selection]);
+
+  const over = rows.filter((r) => r.status.state === 'fails').length;
+  const notDesigned = rows.filter((r) => r.status.state === 'not-designed').length;
+
+  return (
+    <section aria-labelledby="member-list-heading" className="flex min-h-0 flex-col">
+      <div className="flex items-baseline justify-between gap-2 border-b border-ink px-3 py-2">
+        <h3 id="member-list-heading" className="label-caps">
+          Members
+        </h3>
+        <p className="text-xs text-ink-soft" data-testid="member-summary">
+          {rows.length} on this level
+          {over ? <span className="text-danger"> · {over} over</span> : null}
+          {notDesigned ? <span className="text-danger"> · {notDesigned} not designed</span> : null}
+          {snap.pending ? ' · designing…' : ''}
+        </p>
+      </div>
+      <div className="min-h-0 flex-1 overflow-auto">
+        <table className="w-full border-collapse text-xs" aria-describedby="member-list-heading">
+          <thead className="sticky top-0 bg-paper-raised">
+            <tr className="border-b border-line text-left">
+              <th scope="col" className="px-2 py-1.5 font-medium">Mark</th>
+              <th scope="col" className="px-2 py-1.5 font-medium">Member</th>
+              <th scope="col" className="px-2 py-1.5 font-medium">Size</th>
+              <th scope="col" className="px-2 py-1.5 text-right font-medium">Ratio</th>
+              <th scope="col" className="px-2 py-1.5 font-medium">Status</th>
+            </tr>
+          </thead>
+          <tbody ref={bodyRef}>
+            {rows.length === 0 ? (
+              <tr>
+                <td colSpan={5} className="px-3 py-6 text-center text-ink-soft">
+                  No girders or beams on this level yet.
+                </td>
+              </tr>
+            ) : null}
+            {rows.map((r) => {
+              const isSelected = selected.has(r.id);
+              const s = r.status;
+              return (
+                <tr
+                  key={r.id}
+                  data-member-id={r.id}
+                  data-selected={isSelected || undefined}
+                  className={`cursor-pointer border-b border-line/60 ${isSelected ? 'bg-accent-wash' : 'hover:bg-paper-sunk'}`}
+                  onClick={(e) => dispatch(store, 'selection.set', { ids: [r.id], add: e.shiftKey })}
+                >
+                  <td className="px-2 py-1">
+                    <button
+                      type="button"
+                      aria-pressed={isSelected}
+                      className={`figures font-mono ${isSelected ? 'font-semibold text-accent' : 'text-ink'}`}
+                      aria-label={`Select ${s.mark || r.id}`}
+                      onClick={(e) => {
+                        e.stopPropagation();
+                        dispatch(store, 'selection.set', { ids: [r.id], add: e.shiftKey });
+                      }}
+                    >
+                      {s.mark || r.id}
+                    </button>
+                  </td>
+                  <td className="px-2 py-1 text-ink-soft">
+                    {r.kind} <span className="figures font-mono">{r.span_ft.toFixed(1)} ft</span>
+                  </td>
+                  <td className="figures px-2 py-1 font-mono">{s.size}</td>
+                  <td className="px-2 py-1 text-right">
+                    {s.ratio === null ? (
+                      <span className="text-ink-faint">—</span>
+                    ) : (
+                      <span className="figures inline-block rounded-[3px] px-1.5 font-mono" style={{ backgroundColor: s.util.colour, color: s.util.inkColour }}>
+                        {s.util.printed}
+                      </span>
+                    )}
+                  </td>
+                  <td className={`px-2 py-1 ${s.state === 'fails' || s.state === 'not-designed' ? 'text-danger' : 'text-ink-soft'}`}>{s.words}</td>
+                </tr>
+              );
+            })}
+          </tbody>
+        </table>
+      </div>
+    </section>
+  );
+}

@@ -1,0 +1,53 @@
+// The words, size and ratio shown for a member in the list, on the canvas and in tooltips.
+import type { SchemeMember, SchemeResult } from '../../../../shared/engine/index';
+import { utilisation, type Utilisation } from '../../../lib/utilisation';
+
+export interface MemberStatus {
+  mark: string;
+  size: string;
+  ratio: number | null;
+  util: Utilisation;
+  /** Plain words: "Passes — flexure governs", "Over — live-load deflection governs", "Not designed — …". */
+  words: string;
+  /** Short reason for the canvas label when the member fails or was not designed. */
+  shortReason: string | null;
+  state: 'designing' | 'passes' | 'fails' | 'not-designed';
+}
+
+const GOVERNING_WORDS: Record<string, string> = {
+  flexure: 'flexure',
+  shear: 'shear',
+  deflectionLive: 'live-load deflection',
+  deflectionTotal: 'total-load deflection',
+};
+
+export function governingWords(governing: string | null | undefined): string {
+  return governing ? (GOVERNING_WORDS[governing] ?? governing) : 'no check';
+}
+
+export function memberStatus(id: string, member: SchemeMember | undefined, result: SchemeResult | null, pending: boolean): MemberStatus {
+  if (!result || (!member && pending)) {
+    return { mark: '', size: '…', ratio: null, util: utilisation(Number.NaN), words: 'Designing…', shortReason: null, state: 'designing' };
+  }
+  const problem = result.problems.find((p) => p.elementId === id && p.severity === 'error');
+  if (!member || !member.design) {
+    const reason = cleanReason(problem?.message ?? 'the engine could not design it', id);
+    return { mark: member?.mark ?? '', size: member?.shape ?? '—', ratio: null, util: utilisation(Number.NaN), words: `Not designed — ${reason}`, shortReason: shorten(reason), state: 'not-designed' };
+  }
+  const ratio = member.ratio ?? member.design.ratio;
+  const util = utilisation(ratio);
+  if (member.passes) {
+    return { mark: member.mark, size: member.shape ?? '—', ratio, util, words: `Passes — ${governingWords(member.governing)} governs`, shortReason: null, state: 'passes' };
+  }
+  const reason = member.design.failure ? cleanReason(member.design.failure, id) : `${governingWords(member.governing)} governs`;
+  return { mark: member.mark, size: member.shape ?? '—', ratio, util, words: `Over — ${reason}`, shortReason: shorten(reason), state: 'fails' };
+}
+
+/** Drop the "Member m7: " prefix the engine puts on plan problems. */
+function cleanReason(message: string, id: string): string {
+  return message.replace(new RegExp(`^Member ${id.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}:?\\s*`), '').replace(/^could not be designed — /, '');
+}
+
+function shorten(text: string, max = 48): string {
+  return text.length <= max ? text : `${text.slice(0, max - 1)}…`;
+}
