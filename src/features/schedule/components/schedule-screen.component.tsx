@@ -1,0 +1,170 @@
+import { useCallback, useState, type ReactNode } from 'react';
+import { Button, buttonClasses } from '../../../components/ui/button.ui';
+import { EmptyState } from '../../../components/ui/empty-state.ui';
+import { EngineerCaution } from '../../../components/ui/engineer-caution.ui';
+import { FormAlert } from '../../../components/ui/form-alert.ui';
+import { Loading } from '../../../components/ui/loading.ui';
+import { isApiError } from '../../../lib/api-client';
+import { UnitsSwitch, useUnits } from '../../../lib/units-context';
+import { useEditMarks, useRenumberMarks } from '../api/edit-marks.api';
+import { exportLinks, useSchedule } from '../api/get-schedule.api';
+import { ScheduleTable } from './schedule-table.component';
+
+export interface SchemeChoice {
+  id: string;
+  name: string;
+  status: string;
+}
+
+/** The chosen scheme by default, else the first. */
+export function defaultSchemeId(schemes: readonly SchemeChoice[]): string {
+  return (schemes.find((s) => s.status === 'chosen') ?? schemes[0])?.id ?? '';
+}
+
+export interface ScheduleScreenProps {
+  schemes: SchemeChoice[];
+  mayEditMarks: boolean;
+  /** The on-screen plan sheet (drawn by the plan-sheet feature; the route passes it in). */
+  renderSheet?: (schemeId: string, levels: { id: string; name: string }[]) => ReactNode;
+}
+
+/** Schedule: marks, sizes, end reactions, camber and studs of a scheme, with its exports. */
+export function ScheduleScreen({ schemes, mayEditMarks, renderSheet }: ScheduleScreenProps) {
+  const [schemeId, setSchemeId] = useState(() => defaultSchemeId(schemes));
+  const [showSheet, setShowSheet] = useState(false);
+  const [keepManual, setKeepManual] = useState(true);
+  const [notice, setNotice] = useState<string | null>(null);
+  const { system } = useUnits();
+  const schedule = useSchedule(schemeId);
+  const editMarks = useEditMarks(schemeId);
+  const renumber = useRenumberMarks(schemeId);
+  const revision = schedule.data?.scheme.revision;
+
+  const saveMark = useCallback(
+    async (memberId: string, mark: string | null) => {
+      if (revision === undefined) return;
+      setNotice(null);
+      try {
+        await editMarks.mutateAsync({ revision, marks: [{ memberId, mark }] });
+        setNotice(mark ? `Mark ${mark} saved for member ${memberId}.` : `Member ${memberId} is marked by the rule again.`);
+      } catch (err) {
+        setNotice(isApiError(err) ? err.message : 'The mark could not be saved.');
+      }
+    },
+    [editMarks, revision],
+  );
+
+  if (schemes.length === 0) {
+    return (
+      <EmptyState title="No members to schedule">
+        The Schedule lists every member’s mark, size, end reactions, camber and studs. It fills in when a scheme has
+        framing on its Plan.
+      </EmptyState>
+    );
+  }
+  const links = exportLinks(schemeId);
+  const view = schedule.data;
+
+  return (
+    <div className="flex flex-col gap-4">
+      <div className="flex flex-wrap items-end justify-between gap-3">
+        <label className="flex flex-col gap-1 text-sm">
+          <span className="label-caps">Scheme</span>
+          <select
+            className="h-9 min-w-64 rounded-[3px] border border-ink/60 bg-paper px-2"
+            value={schemeId}
+            onChange={(e) => {
+              setSchemeId(e.target.value);
+              setNotice(null);
+            }}
+          >
+            {schemes.map((s) => (
+              <option key={s.id} value={s.id}>
+                {s.name}
+                {s.status === 'chosen' ? ' (chosen)' : ''}
+              </option>
+            ))}
+          </select>
+        </label>
+        <div className="flex flex-wrap items-center gap-2">
+          <UnitsSwitch />
+          <a className={buttonClasses('secondary')} href={links.csv} download>
+            Download CSV
+          </a>
+          <a className={buttonClasses('secondary')} href={links.pdf} download>
+            Download plan sheet (PDF)
+          </a>
+          {renderSheet ? (
+            <Button variant={showSheet ? 'primary' : 'secondary'} aria-pressed={showSheet} onClick={() => setShowSheet((v) => !v)}>
+              {showSheet ? 'Hide plan sheet' : 'View plan sheet'}
+            </Button>
+          ) : null}
+        </div>
+      </div>
+
+      {schedule.isPending ? (
+        <Loading label="Reading the design…" />
+      ) : schedule.isError ? (
+        <FormAlert>The schedule could not be loaded: {schedule.error.message}</FormAlert>
+      ) : view ? (
+        <>
+          <div className="flex flex-wrap items-baseline justify-between gap-2 text-sm text-ink-soft">
+            <p>
+              Revision <span className="figures font-mono text-ink">{view.scheme.revision}</span> · design basis{' '}
+              <strong className="text-ink">{view.basis.method}</strong>. End reactions are unfactored D and L (L reduced
+              where allowed); <strong className="text-ink">{view.basis.method === 'LRFD' ? 'Factored' : 'ASD D+L'}</strong> is{' '}
+              {view.basis.method === 'LRFD'
+                ? '1.2D+1.6L for floors (ASCE 7-16 §2.3.1; roof live and snow combinations where present, largest governs).'
+                : 'D+L for floors (ASCE 7-16 §2.4.1; roof live and snow combinations where present, largest governs).'}
+            </p>
+          </div>
+          <p className="rounded-[3px] border border-notice/40 bg-notice-wash px-3 py-2 text-sm text-notice">{view.compositeNote}</p>
+          {view.problems.length > 0 ? (
+            <FormAlert>
+              {view.problems.length} design problem{view.problems.length === 1 ? '' : 's'}: {view.problems[0].message}
+            </FormAlert>
+          ) : null}
+          {mayEditMarks ? (
+            <div className="flex flex-wrap items-center gap-3 text-sm">
+              <Button
+                variant="secondary"
+                pending={renumber.isPending}
+                onClick={async () => {
+                  setNotice(null);
+                  try {
+                    const r = await renumber.mutateAsync({ keepManual });
+                    setNotice(r.changed ? `Marks renumbered (revision ${r.revision}).` : 'Marks already follow the rule.');
+                  } catch (err) {
+                    setNotice(isApiError(err) ? err.message : 'Marks could not be renumbered.');
+                  }
+                }}
+              >
+                Renumber marks
+              </Button>
+              <label className="flex items-center gap-2">
+                <input type="checkbox" checked={keepManual} onChange={(e) => setKeepManual(e.target.checked)} />
+                Keep marks set by hand
+              </label>
+            </div>
+          ) : null}
+          {notice ? (
+            <p role="status" className="text-sm text-ink">
+              {notice}
+            </p>
+          ) : null}
+          {showSheet && renderSheet ? renderSheet(schemeId, view.levels) : null}
+          <ScheduleTable
+            rows={view.rows}
+            levels={view.levels}
+            basis={view.basis}
+            units={system}
+            mayEditMarks={mayEditMarks}
+            onSaveMark={saveMark}
+            savingMark={editMarks.isPending}
+          />
+          <EngineerCaution />
+        </>
+      ) : null}
+    </div>
+  );
+}

@@ -1,0 +1,91 @@
+import { readFileSync } from 'node:fs';
+import { resolve } from 'node:path';
+import { render, screen, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { describe, expect, it } from 'vitest';
+import { ScheduleTable } from '../../src/features/schedule/components/schedule-table.component';
+import { defaultSchemeId } from '../../src/features/schedule/components/schedule-screen.component';
+import { designScheme } from '../../shared/engine/index';
+import { scheduleBasis, scheduleRows } from '../../shared/drafting/schedule.drafting';
+import { parsePlanFile, type Plan } from '../../shared/schemas/plan.schema';
+
+const plan: Plan = parsePlanFile(JSON.parse(readFileSync(resolve(__dirname, '../fixtures/plans/two-bay.plan.json'), 'utf8'))).plan!;
+// A second level (copy of L2 as L3) so the level filter and grouping have two levels to tell apart.
+const twoLevels: Plan = {
+  ...plan,
+  levels: [...plan.levels, { id: 'L3', name: 'Level 3', elevation_ft: 28 }],
+  columns: plan.columns.map((c) => ({ ...c, levels: ['L2', 'L3'] })),
+  members: [...plan.members, ...plan.members.map((m) => ({ ...m, id: `${m.id}-3`, level: 'L3' }))],
+  decks: [...plan.decks, ...plan.decks.map((d) => ({ ...d, id: `${d.id}-3`, level: 'L3' }))],
+  pointLoads: [],
+  lineLoads: [],
+  openings: [],
+};
+const design = designScheme(twoLevels);
+const rows = scheduleRows(design, twoLevels);
+const levels = twoLevels.levels.map((l) => ({ id: l.id, name: l.name }));
+
+function renderTable(mayEditMarks = false) {
+  return render(<ScheduleTable rows={rows} levels={levels} basis={scheduleBasis('LRFD')} units="US" mayEditMarks={mayEditMarks} />);
+}
+
+const bodyRows = () => within(screen.getByRole('table', { name: 'Member schedule' })).getAllByRole('row').filter((r) => r.hasAttribute('data-member'));
+
+describe('ScheduleTable', () => {
+  it('when shown, then every member has a row with its mark and size, and camber and studs columns are present', () => {
+    renderTable();
+    expect(bodyRows()).toHaveLength(22);
+    expect(screen.getByRole('columnheader', { name: /Camber/ })).toBeInTheDocument();
+    expect(screen.getByRole('columnheader', { name: 'Studs' })).toBeInTheDocument();
+    expect(screen.getByText((_, el) => el?.tagName === 'P' && el.textContent === '22 of 22 members')).toBeInTheDocument();
+  });
+
+  it('when filtered by text, level and kind, then only matching members remain', async () => {
+    const user = userEvent.setup();
+    renderTable();
+    await user.type(screen.getByRole('searchbox'), '3G');
+    expect(bodyRows().map((r) => r.getAttribute('data-member'))).toEqual(expect.arrayContaining(['gA12-3', 'gB12-3']));
+    expect(bodyRows().every((r) => r.getAttribute('data-member')!.endsWith('-3'))).toBe(true);
+    expect(bodyRows()).toHaveLength(4);
+    await user.clear(screen.getByRole('searchbox'));
+    await user.selectOptions(screen.getByRole('combobox', { name: 'Level' }), 'L2');
+    await user.selectOptions(screen.getByRole('combobox', { name: 'Kind' }), 'beam');
+    const ids = bodyRows().map((r) => r.getAttribute('data-member'));
+    expect(ids.sort()).toEqual(['b1', 'b2', 'b3', 'b4', 'b5', 'b6', 'b7']);
+  });
+
+  it('when grouped by level, then each level heads its own members; by kind, girders and beams', async () => {
+    const user = userEvent.setup();
+    renderTable();
+    await user.selectOptions(screen.getByRole('combobox', { name: 'Group by' }), 'level');
+    let groups = screen.getAllByTestId('schedule-group');
+    expect(groups.map((g) => g.textContent)).toEqual(['Level 211 members', 'Level 311 members']);
+    await user.selectOptions(screen.getByRole('combobox', { name: 'Group by' }), 'kind');
+    groups = screen.getAllByTestId('schedule-group');
+    expect(groups.map((g) => g.textContent)).toEqual(expect.arrayContaining(['Girders8 members', 'Beams14 members']));
+    expect(bodyRows()).toHaveLength(22);
+  });
+
+  it('when sorted by span, then the shortest span comes first', async () => {
+    const user = userEvent.setup();
+    renderTable();
+    await user.click(screen.getByRole('button', { name: /Span \(ft\)/ }));
+    const first = bodyRows()[0].getAttribute('data-member')!;
+    expect(rows.find((r) => r.memberId === first)!.span_ft).toBe(Math.min(...rows.map((r) => r.span_ft)));
+  });
+
+  it('when the reader may not edit marks, then there is no edit control; when they may, there is one per member', () => {
+    const { unmount } = renderTable(false);
+    expect(screen.queryByRole('button', { name: /Edit mark/ })).toBeNull();
+    unmount();
+    renderTable(true);
+    expect(screen.getAllByRole('button', { name: /Edit mark/ })).toHaveLength(22);
+  });
+});
+
+describe('defaultSchemeId', () => {
+  it('when a scheme is chosen, then it is the default; otherwise the first', () => {
+    expect(defaultSchemeId([{ id: 'a', name: 'A', status: 'draft' }, { id: 'b', name: 'B', status: 'chosen' }])).toBe('b');
+    expect(defaultSchemeId([{ id: 'a', name: 'A', status: 'draft' }, { id: 'b', name: 'B', status: 'in_review' }])).toBe('a');
+  });
+});
