@@ -30,7 +30,7 @@ export const demoBuildingStep: SeedStep = {
         const plan = buildDemoBuildingPlan({ name: demo.name, beamSpacing_ft: demo.beamSpacing_ft });
         schemeId = (await createScheme(ctx, projectId, { name: demo.name, plan })).id;
       }
-      if ((await db.models.DesignRun.count({ where: { schemeId } })) === 0) await designSchemeNow(ctx, schemeId);
+      if ((await db.models.DesignRun.count({ where: { schemeId } })) === 0) await designSchemeNow(ctx, schemeId, { trigger: 'seed' });
       schemeIds.push(schemeId);
     }
     state.demoSchemeIds = schemeIds;

@@ -5,6 +5,7 @@ import { AppError } from '../errors/app-error';
 import type { DesignRunAttributes, DesignRunCreation } from '../models/design-run.model';
 import type { Db } from '../models/models';
 import { findOwnScheme, readPlan, type SchemeServiceContext } from './plan-store.service';
+import { recordSchemeAudit, SCHEME_AUDIT_ACTIONS } from './scheme-audit.service';
 
 // Design runs: the scheme's current plan through the engine (designScheme, the `calc plan`
 // output), stored against the revision it was computed from. A run is stale when the
@@ -118,8 +119,18 @@ export async function storeDesignRun(
   );
 }
 
+/**
+ * Why a design ran, for the audit log: asked for (POST /design), because a stale or missing
+ * design was read (schedule, tonnage, marks), or by the demo seed.
+ */
+export type DesignTrigger = 'requested' | 'on_read' | 'seed';
+
 /** POST /api/schemes/:id/design: designs the current plan and stores the run. */
-export async function designSchemeNow(ctx: SchemeServiceContext, schemeId: string): Promise<SchemeDesignView> {
+export async function designSchemeNow(
+  ctx: SchemeServiceContext,
+  schemeId: string,
+  options: { trigger?: DesignTrigger } = {},
+): Promise<SchemeDesignView> {
   const scheme = await findOwnScheme(ctx, schemeId);
   const attrs = scheme.get({ plain: true });
   const plan = await readPlan(ctx.db, attrs);
@@ -129,6 +140,21 @@ export async function designSchemeNow(ctx: SchemeServiceContext, schemeId: strin
     revision: attrs.revision,
     result,
     userId: ctx.actor.userId,
+  });
+  const stored = run.get({ plain: true });
+  await recordSchemeAudit(ctx, {
+    action: SCHEME_AUDIT_ACTIONS.designRun,
+    schemeId,
+    schemeName: attrs.name,
+    projectId: attrs.projectId,
+    detail: {
+      revision: attrs.revision,
+      designRunId: stored.id,
+      trigger: options.trigger ?? 'requested',
+      steelWeight_lb: stored.steelWeightLb,
+      pieces: stored.pieces,
+      failingMembers: stored.failingMembers,
+    },
   });
   // The scheme may have been saved while the engine ran: compare with the revision now.
   const now = await ctx.db.models.Scheme.findByPk(schemeId, { attributes: ['revision'] });
@@ -159,5 +185,5 @@ export async function getSchemeDesign(
   if (!options.designIfStale) {
     throw new AppError(404, 'not_designed', 'This scheme has not been designed yet.');
   }
-  return designSchemeNow(ctx, schemeId);
+  return designSchemeNow(ctx, schemeId, { trigger: 'on_read' });
 }

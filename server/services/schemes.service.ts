@@ -23,6 +23,7 @@ import {
   type SchemeRow,
   type SchemeServiceContext,
 } from './plan-store.service';
+import { recordSchemeAudit, SCHEME_AUDIT_ACTIONS } from './scheme-audit.service';
 import { latestDesignRuns, storeDesignRun, toDesignSummary, type DesignSummary } from './scheme-design.service';
 
 export type { SchemeServiceContext } from './plan-store.service';
@@ -188,7 +189,15 @@ export async function createScheme(
   }
   const name = (input.name ?? plan.name.trim()).slice(0, 200) || 'Imported scheme';
   plan = { ...plan, name };
-  const row = await insertScheme(ctx, projectId, plan, input.plan !== undefined ? 'Imported from a plan file' : 'New scheme');
+  const imported = input.plan !== undefined;
+  const row = await insertScheme(ctx, projectId, plan, imported ? 'Imported from a plan file' : 'New scheme');
+  await recordSchemeAudit(ctx, {
+    action: imported ? SCHEME_AUDIT_ACTIONS.imported : SCHEME_AUDIT_ACTIONS.created,
+    schemeId: row.getDataValue('id'),
+    schemeName: name,
+    projectId,
+    detail: imported ? { revision: 1, repairs: repairs.length } : { revision: 1 },
+  });
   const detail = await toDetail(ctx, row);
   return { ...detail, repairs, problems: [...warnings, ...topologyProblems(plan)] };
 }
@@ -254,6 +263,13 @@ export async function saveSchemePlan(
       userId: ctx.actor.userId,
       note: input.note,
       expectedRevision: input.revision,
+    });
+    await recordSchemeAudit(ctx, {
+      action: SCHEME_AUDIT_ACTIONS.planRevised,
+      schemeId,
+      schemeName: scheme.getDataValue('name'),
+      projectId: scheme.getDataValue('projectId'),
+      detail: { revision, previousRevision: input.revision, ...(input.note ? { note: input.note } : {}) },
     });
     return { revision, repairs, problems: [...warnings, ...topologyProblems(plan)] };
   } catch (err) {
@@ -327,6 +343,19 @@ export async function cloneScheme(
     }
     return created;
   });
+  await recordSchemeAudit(ctx, {
+    action: SCHEME_AUDIT_ACTIONS.cloned,
+    schemeId: row.getDataValue('id'),
+    schemeName: name,
+    projectId: src.projectId,
+    detail: {
+      revision: 1,
+      sourceSchemeId: schemeId,
+      source: src.name,
+      sourceRevision: src.revision,
+      designCopied: run !== null,
+    },
+  });
   return toDetail(ctx, row);
 }
 
@@ -340,15 +369,41 @@ export async function updateScheme(
   const changes: Partial<SchemeAttributes> = { updatedBy: ctx.actor.userId };
   if (patch.name !== undefined) changes.name = patch.name;
   if (patch.archived !== undefined) changes.archived = patch.archived;
+  // A copy: get({ plain: true }) may hand back the live dataValues that update() changes.
+  const before = { ...scheme.get({ plain: true }) };
   await scheme.update(changes);
+  const about = { schemeId, projectId: before.projectId };
+  if (patch.name !== undefined && patch.name !== before.name) {
+    await recordSchemeAudit(ctx, {
+      ...about,
+      action: SCHEME_AUDIT_ACTIONS.renamed,
+      schemeName: patch.name,
+      detail: { from: before.name, to: patch.name },
+    });
+  }
+  if (patch.archived !== undefined && patch.archived !== Boolean(before.archived)) {
+    await recordSchemeAudit(ctx, {
+      ...about,
+      action: patch.archived ? SCHEME_AUDIT_ACTIONS.archived : SCHEME_AUDIT_ACTIONS.unarchived,
+      schemeName: scheme.getDataValue('name'),
+    });
+  }
   const [summary] = await toSummaries(ctx, [scheme.get({ plain: true })]);
   return summary;
 }
 
 export async function deleteScheme(ctx: SchemeServiceContext, schemeId: string): Promise<void> {
   const scheme = await findOwnScheme(ctx, schemeId);
+  const { name, projectId, revision } = scheme.get({ plain: true });
   // Element rows, revisions and design runs go with it (ON DELETE CASCADE, 0003).
   await scheme.destroy();
+  await recordSchemeAudit(ctx, {
+    action: SCHEME_AUDIT_ACTIONS.deleted,
+    schemeId,
+    schemeName: name,
+    projectId,
+    detail: { revision },
+  });
 }
 
 export interface RevisionEntry {
@@ -396,11 +451,18 @@ export async function restoreRevision(
   const { plan } = acceptPlan(typeof snapshot === 'string' ? JSON.parse(snapshot) : snapshot);
   const expectedRevision = scheme.getDataValue('revision');
   try {
-    await commitPlanRevision(ctx.db, scheme, {
+    const next = await commitPlanRevision(ctx.db, scheme, {
       plan,
       userId: ctx.actor.userId,
       note: `Restored revision ${revision}`,
       expectedRevision,
+    });
+    await recordSchemeAudit(ctx, {
+      action: SCHEME_AUDIT_ACTIONS.planRestored,
+      schemeId,
+      schemeName: scheme.getDataValue('name'),
+      projectId: scheme.getDataValue('projectId'),
+      detail: { revision: next, restoredFrom: revision, previousRevision: expectedRevision },
     });
   } catch (err) {
     if (err instanceof RevisionConflict) throw await conflictError(ctx, schemeId, expectedRevision);

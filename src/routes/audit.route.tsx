@@ -35,7 +35,7 @@ export default function AuditRoute() {
       <PageHeader
         eyebrow={session.firm.name}
         title="Audit log"
-        description="Who signed in, who was invited, whose role changed: the firm’s record, newest first."
+        description="Who signed in, who was invited, whose role changed, which schemes and plans were saved and designed: the firm’s record, newest first."
       />
       <TabNav label="Team sections" items={TABS} />
       <AuditBody />

@@ -10,6 +10,9 @@ const AREAS: { value: string; label: string }[] = [
   { value: 'invitation', label: 'Invitations' },
   { value: 'team', label: 'Team and roles' },
   { value: 'password', label: 'Passwords' },
+  { value: 'scheme', label: 'Schemes' },
+  { value: 'plan', label: 'Plan revisions' },
+  { value: 'design', label: 'Design runs' },
   ...Object.entries(AUDIT_ACTION_LABELS).map(([value, label]) => ({ value, label: `— ${label}` })),
 ];
 

@@ -9,7 +9,8 @@ const dateFormat = new Intl.DateTimeFormat(undefined, {
   second: '2-digit',
 });
 
-// Plain words for the actions recorded by accounts and the team; others show their name.
+// Plain words for the actions recorded by accounts, the team, schemes, plans and design
+// runs; others show their name.
 export const AUDIT_ACTION_LABELS: Record<string, string> = {
   'session.signed_in': 'Signed in',
   'session.sign_in_failed': 'Sign-in failed',
@@ -21,6 +22,16 @@ export const AUDIT_ACTION_LABELS: Record<string, string> = {
   'invitation.revoked': 'Invitation withdrawn',
   'password.reset_requested': 'Password link asked for',
   'password.reset': 'Password changed by link',
+  'scheme.created': 'Scheme created',
+  'scheme.imported': 'Scheme imported from a plan file',
+  'scheme.cloned': 'Scheme cloned',
+  'scheme.renamed': 'Scheme renamed',
+  'scheme.archived': 'Scheme archived',
+  'scheme.unarchived': 'Scheme taken out of the archive',
+  'scheme.deleted': 'Scheme deleted',
+  'plan.revised': 'Plan saved',
+  'plan.restored': 'Plan revision restored',
+  'design.run': 'Design run',
 };
 
 function describeDetail(event: AuditEvent): string {
