@@ -2,6 +2,7 @@ import { Link } from 'react-router-dom';
 import { PageHeader } from '../components/ui/page-header.ui';
 import { paths } from '../config/paths';
 import { useCurrentSession } from '../features/auth/hooks/use-current-session.hook';
+import { NotificationPreferencesSection } from '../features/notification-preferences/components/notification-preferences-form.component';
 import { canManageTeam, ROLE_LABELS, ROLE_SUMMARIES } from '../lib/permissions';
 
 export default function SettingsRoute() {
@@ -45,6 +46,8 @@ export default function SettingsRoute() {
             </div>
           ) : null}
         </section>
+        {/* Every role sets their own e-mail notifications. */}
+        <NotificationPreferencesSection />
       </div>
     </div>
   );
