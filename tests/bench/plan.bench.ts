@@ -1,26 +1,44 @@
 /**
  * Plan benchmarks (invented regular building of our own):
- * 1. 24 levels × ~418 members ≈ 10,000 members through takedown and design (target ≤ 1 s).
- * 2. one level of ~500 members re-designed after a one-member change, passing the previous
- *    result (target ≤ 50 ms).
+ * 1. 24 levels × ~418 members ≈ 10,000 members through takedown and design, measured from a
+ *    fresh process after start-up (module loading excluded, JIT cold) — target ≤ 1 s.
+ * 2. one level of ~600 members re-designed after a one-member change, passing the previous
+ *    result (steady state an editor sees; median of several changes) — target ≤ 50 ms.
+ * Each figure is printed as wall ms and CPU ms (user + system of this process). The machine's
+ * cores are shared, so wall time includes waiting for a core; pass/fail is judged on CPU time,
+ * the time the work itself takes on one core, and the wall verdict is printed beside it.
  */
+import { spawnSync } from 'node:child_process';
+import { fileURLToPath } from 'node:url';
 import { designScheme } from '../../shared/engine/scheme/design-scheme.scheme';
 import { runTakedown } from '../../shared/engine/takedown/gravity-takedown.takedown';
 import type { Plan, PlanMember } from '../../shared/schemas/plan.schema';
 
+export interface Timing {
+  wallMs: number;
+  cpuMs: number;
+}
+
 export interface PlanBenchFigures {
   members: number;
-  takedownSeconds: number;
-  coldDesignCpuSeconds: number;
-  redesignCpuMs: number;
-  coldDesignSeconds: number;
-  warmDesignSeconds: number;
+  /** First takedown + design of the building in a fresh process (JIT cold). */
+  cold: Timing;
+  /** Whether `cold` was measured in a fresh child process (else in this process, after other benches). */
+  coldInFreshProcess: boolean;
+  /** Takedown + design of the building again, same process (JIT warm). */
+  warm: Timing;
+  /** Takedown alone (default self weight), warm. */
+  takedown: Timing;
   passed: number;
   equilibriumErrorD: number;
   levelMembers: number;
-  redesignMs: number;
-  fullLevelDesignMs: number;
+  fullLevel: Timing;
+  /** Median over several one-member changes. */
+  redesign: Timing;
 }
+
+export const TARGET_BUILDING_MS = 1000;
+export const TARGET_REDESIGN_MS = 50;
 
 /**
  * A regular office building: bays of 30 ft in x and y, beams at 7.5 ft spanning y, girders along x,
@@ -79,67 +97,130 @@ export function regularBuildingPlan(levelsCount: number, baysX: number, baysY: n
   return plan;
 }
 
-const ms = (t0: number) => performance.now() - t0;
-/** CPU milliseconds of this process since `c0` (user + system): the one-core figure on a shared machine. */
-const cpuMs = (c0: NodeJS.CpuUsage) => {
-  const d = process.cpuUsage(c0);
-  return (d.user + d.system) / 1000;
+const cpuNow = () => {
+  const u = process.cpuUsage();
+  return (u.user + u.system) / 1000;
 };
 
+function timed<T>(run: () => T): { value: T; timing: Timing } {
+  const c0 = cpuNow();
+  const t0 = performance.now();
+  const value = run();
+  return { value, timing: { wallMs: performance.now() - t0, cpuMs: cpuNow() - c0 } };
+}
+
+const median = (xs: number[]) => {
+  const s = [...xs].sort((a, b) => a - b);
+  return s.length % 2 ? s[(s.length - 1) / 2] : (s[s.length / 2 - 1] + s[s.length / 2]) / 2;
+};
+
+const buildingPlan = () => regularBuildingPlan(24, 10, 8);
+
+/** Figure 1 in this process: the first design of the building here. */
+function coldBuilding(): { timing: Timing; members: number; passed: number; equilibriumErrorD: number } {
+  const building = buildingPlan();
+  const { value: r, timing } = timed(() => designScheme(building));
+  return {
+    timing,
+    members: r.members.length,
+    passed: r.members.filter((m) => m.passes).length,
+    equilibriumErrorD: Math.abs(r.equilibrium.D.applied_kip - r.equilibrium.D.reactions_kip),
+  };
+}
+
+/** Set in the child's environment: the child measures and never spawns again. */
+const CHILD_ENV = 'BAYWRIGHT_PLAN_BENCH_COLD_CHILD';
+
+/** Node flags to pass on (the TypeScript loader), without an inline script (-e/-p) that would run again. */
+function loaderFlags(): string[] {
+  const out: string[] = [];
+  const argv = process.execArgv;
+  for (let i = 0; i < argv.length; i++) {
+    const a = argv[i];
+    if (a === '-e' || a === '--eval' || a === '-p' || a === '--print') {
+      i++;
+      continue;
+    }
+    if (a.startsWith('--eval=') || a.startsWith('--print=') || a.startsWith('--cpu-prof')) continue;
+    out.push(a);
+  }
+  return out;
+}
+
+/** Figure 1 in a fresh process (same loader), so it is the first run after start-up. */
+function coldBuildingInFreshProcess(): ReturnType<typeof coldBuilding> | null {
+  if (process.env[CHILD_ENV]) return null;
+  const self = fileURLToPath(import.meta.url);
+  const child = spawnSync(process.execPath, [...loaderFlags(), self], {
+    encoding: 'utf8',
+    maxBuffer: 1 << 20,
+    timeout: 120_000,
+    env: { ...process.env, [CHILD_ENV]: '1' },
+  });
+  const line = child.status === 0 ? child.stdout.trim().split('\n').pop() : undefined;
+  if (!line) return null;
+  try {
+    return JSON.parse(line) as ReturnType<typeof coldBuilding>;
+  } catch {
+    return null;
+  }
+}
+
+const verdict = (t: Timing, targetMs: number) =>
+  `${t.cpuMs <= targetMs ? 'PASS' : 'FAIL'} on CPU (wall ${t.wallMs <= targetMs ? 'within' : 'over'} target)`;
+const fmt = (t: Timing) => `wall ${t.wallMs.toFixed(1)} ms, CPU ${t.cpuMs.toFixed(1)} ms`;
+
 export function runPlanBench(): PlanBenchFigures {
-  const building = regularBuildingPlan(24, 10, 8);
-  let t0 = performance.now();
-  const takedown = runTakedown(building);
-  const takedownSeconds = ms(t0) / 1000;
-  t0 = performance.now();
-  let c0 = process.cpuUsage();
-  const cold = designScheme(building);
-  const coldDesignSeconds = ms(t0) / 1000;
-  const coldDesignCpuSeconds = cpuMs(c0) / 1000;
-  t0 = performance.now();
-  const warm = designScheme(building);
-  const warmDesignSeconds = ms(t0) / 1000;
-  void warm;
+  const fresh = coldBuildingInFreshProcess();
+  const cold = fresh ?? coldBuilding();
+  const building = buildingPlan();
+  const warm = timed(() => designScheme(building)).timing;
+  const takedown = timed(() => runTakedown(building)).timing;
 
   const level = regularBuildingPlan(1, 12, 10);
   level.levels[0].roof = false;
   level.decks = [{ id: 'd', level: level.levels[0].id, polygon: [[0, 0], [360, 0], [360, 300], [0, 300]], spanDirection: 'x', zone: 'office' }];
-  let t1 = performance.now();
-  const first = designScheme(level);
-  const fullLevelDesignMs = ms(t1);
-  const changed = structuredClone(level);
-  const target = changed.members.find((m) => m.kind === 'beam' && m.id.endsWith('B13-4'))!;
-  target.shape = 'W21X50';
-  // warm the code path once on a different change so the figure is the steady state an editor sees
-  const warmup = structuredClone(level);
-  warmup.members.find((m) => m.id.endsWith('B21-6'))!.shape = 'W18X40';
-  designScheme(warmup, { previous: first, changedIds: [warmup.members.find((m) => m.id.endsWith('B21-6'))!.id] });
-  t1 = performance.now();
-  c0 = process.cpuUsage();
-  const again = designScheme(changed, { previous: first, changedIds: [target.id] });
-  const redesignMs = ms(t1);
-  const redesignCpuMs = cpuMs(c0);
+  const { value: first, timing: fullLevel } = timed(() => designScheme(level));
+  const redesignOnce = (memberSuffix: string, shape: string) => {
+    const changed = structuredClone(level);
+    const target = changed.members.find((m) => m.kind === 'beam' && m.id.endsWith(memberSuffix))!;
+    target.shape = shape;
+    return timed(() => designScheme(changed, { previous: first, changedIds: [target.id] }));
+  };
+  // Warm the code path once on a different change: the figure is the steady state an editor sees.
+  redesignOnce('B21-6', 'W18X40');
+  const runs = [
+    redesignOnce('B13-4', 'W21X50'),
+    redesignOnce('B30-2', 'W16X31'),
+    redesignOnce('B7-8', 'W24X55'),
+    redesignOnce('B40-5', 'W18X35'),
+    redesignOnce('B22-1', 'W21X44'),
+  ];
+  const redesign: Timing = { wallMs: median(runs.map((r) => r.timing.wallMs)), cpuMs: median(runs.map((r) => r.timing.cpuMs)) };
 
   const figures: PlanBenchFigures = {
-    members: cold.members.length,
-    takedownSeconds,
-    coldDesignSeconds,
-    coldDesignCpuSeconds,
-    redesignCpuMs,
-    warmDesignSeconds,
-    passed: cold.members.filter((m) => m.passes).length,
-    equilibriumErrorD: Math.abs(cold.equilibrium.D.applied_kip - cold.equilibrium.D.reactions_kip),
-    levelMembers: again.members.length,
-    redesignMs,
-    fullLevelDesignMs,
+    members: cold.members,
+    cold: cold.timing,
+    coldInFreshProcess: fresh !== null,
+    warm,
+    takedown,
+    passed: cold.passed,
+    equilibriumErrorD: cold.equilibriumErrorD,
+    levelMembers: runs[0].value.members.length,
+    fullLevel,
+    redesign,
   };
-  void takedown;
   process.stdout.write(
-    `plan (24 levels): ${figures.members} members; takedown alone ${figures.takedownSeconds.toFixed(3)} s; ` +
-      `takedown + design ${figures.coldDesignSeconds.toFixed(3)} s cold (CPU ${figures.coldDesignCpuSeconds.toFixed(3)} s), ${figures.warmDesignSeconds.toFixed(3)} s second run (target ≤ 1 s); ` +
-      `${figures.passed} pass; |ΣD applied − ΣD reactions| = ${figures.equilibriumErrorD.toExponential(2)} kip\n` +
-      `plan (one level): ${figures.levelMembers} members; full design ${figures.fullLevelDesignMs.toFixed(1)} ms; ` +
-      `re-design after one member change ${figures.redesignMs.toFixed(1)} ms (CPU ${figures.redesignCpuMs.toFixed(1)} ms; target ≤ 50 ms)\n`,
+    `plan (24 levels): ${figures.members} members, ${figures.passed} pass; |ΣD applied − ΣD reactions| = ${figures.equilibriumErrorD.toExponential(2)} kip\n` +
+      `  takedown + design, first run ${figures.coldInFreshProcess ? 'in a fresh process' : 'in this process'}: ${fmt(figures.cold)}; target ≤ ${TARGET_BUILDING_MS} ms: ${verdict(figures.cold, TARGET_BUILDING_MS)}\n` +
+      `  takedown + design, second run: ${fmt(figures.warm)}; target ≤ ${TARGET_BUILDING_MS} ms: ${verdict(figures.warm, TARGET_BUILDING_MS)}\n` +
+      `  takedown alone (locked-shape self weight): ${fmt(figures.takedown)} (no target)\n` +
+      `plan (one level): ${figures.levelMembers} members; full design ${fmt(figures.fullLevel)} (no target)\n` +
+      `  re-design after a one-member change (median of ${runs.length}): ${fmt(figures.redesign)}; target ≤ ${TARGET_REDESIGN_MS} ms: ${verdict(figures.redesign, TARGET_REDESIGN_MS)}\n`,
   );
   return figures;
+}
+
+if (process.env[CHILD_ENV] === '1' && process.argv[1] && fileURLToPath(import.meta.url) === process.argv[1]) {
+  process.stdout.write(`${JSON.stringify(coldBuilding())}\n`);
 }
