@@ -46,6 +46,7 @@ export const appRoutes: RouteObject[] = [
           },
           { path: paths.settings.path, lazy: page(() => import('../routes/settings.route')) },
           { path: paths.team.path, lazy: page(() => import('../routes/team.route')) },
+          { path: paths.unitPrices.path, lazy: page(() => import('../routes/unit-prices.route')) },
           { path: paths.outbox.path, lazy: page(() => import('../routes/outbox.route')) },
           { path: paths.audit.path, lazy: page(() => import('../routes/audit.route')) },
           { path: '*', lazy: page(() => import('../routes/not-found.route')) },

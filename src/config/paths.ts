@@ -46,6 +46,7 @@ export const paths = {
   },
   settings: { path: '/settings', href: () => '/settings' },
   team: { path: '/settings/team', href: () => '/settings/team' },
+  unitPrices: { path: '/settings/unit-prices', href: () => '/settings/unit-prices' },
   outbox: { path: '/settings/team/outbox', href: () => '/settings/team/outbox' },
   audit: { path: '/settings/team/audit', href: () => '/settings/team/audit' },
   invitationAccept: {
