@@ -250,7 +250,7 @@ export function ComparisonView({
 
       {base && shown.length >= 2 ? <Differences base={base} others={shown.filter((s) => s !== base)} /> : null}
 
-      <div className="grid gap-4 sm:grid-cols-2 xl:grid-cols-4">
+      <div className={`grid gap-4 sm:grid-cols-2 ${shown.length >= 4 ? 'xl:grid-cols-4' : shown.length === 3 ? 'lg:grid-cols-3' : ''}`}>
         {shown.map((s) => {
           const marks: string[] = [];
           if (s === base && shown.length > 1) marks.push('baseline');
