@@ -133,7 +133,7 @@ export function comparisonCsv(c: Comparison): string {
   const p = c.prices.prices;
   lines.push(
     p
-      ? `# Unit prices${p.example ? ' (invented example, not a quotation)' : ''}: $${p.steel_usd_per_ton}/ton fabricated and erected; $${p.connection_usd_each} per connection. Not yet priced: ${NOT_YET_PRICED.join(', ')}.`
+      ? `# Unit prices${p.example ? ' (invented example, not a quotation)' : ''}: $${p.steel_usd_per_ton.toLocaleString('en-US')}/ton fabricated and erected; $${p.connection_usd_each.toLocaleString('en-US')} per connection. Not yet priced: ${NOT_YET_PRICED.join(', ')}.`
       : '# No unit prices set: costs are not estimated.',
   );
   lines.push(CSV_HEADER.join(','));
@@ -148,7 +148,8 @@ export function comparisonCsv(c: Comparison): string {
     for (const l of s.byLevel ?? []) row('level', l.levelName, l);
     for (const k of s.byKind ?? []) row('kind', k.kind, k);
   }
-  return `${lines.join('\r\n')}\r\n`;
+  // The byte order mark lets spreadsheet programs read the UTF-8 names (—, ², …) correctly.
+  return `\uFEFF${lines.join('\r\n')}\r\n`;
 }
 
 /** "harrow-quay-clinic-tonnage-2025-03-14" */
