@@ -137,32 +137,60 @@ export function buildDeckContexts(plan: Plan, topology: FramingTopology): { deck
 
 const widthText = (w1: number, w2: number) => (Math.abs(w1 - w2) < 0.005 ? `${w1.toFixed(1)} ft` : `${w1.toFixed(1)}–${w2.toFixed(1)} ft`);
 
+/** Constant-width strips repeat the same few widths: their load sources, one per pressure, by width. */
+type SourcesByWidth = Map<number, string[]>;
+
+function stripSources(ctx: DeckContext, pressures: readonly ZonePressure[], w1: number, w2: number, cache: SourcesByWidth): string[] {
+  const cached = w1 === w2 ? cache.get(w1) : undefined;
+  if (cached) return cached;
+  const source = `deck ${ctx.deck.id} zone ${ctx.zone.id}, tributary ${widthText(w1, w2)}`;
+  const out: string[] = [];
+  for (const p of pressures) out.push(`${source}: ${p.label}`);
+  if (w1 === w2) cache.set(w1, out);
+  return out;
+}
+
+/** True when a line load from w1 to w2 is written as a partial uniform one (equal within rounding). */
+const isUniform = (w1: number, w2: number) => Math.abs(w1 - w2) <= 1e-12 * Math.max(1, Math.abs(w1));
+
 /** Member loads from one deck's strips: per zone pressure, a line load over each strip. */
 export function deckStripLoads(ctx: DeckContext, sink: (memberId: string, load: TakedownLoad) => void, areaSink: (memberId: string, load: AreaLoad) => void): void {
   const pressures = zonePressures(ctx.zone, ctx.roof);
   const anyReducible = pressures.some((p) => p.reducible);
+  const sourcesByWidth: SourcesByWidth = new Map();
   for (const strip of ctx.tributary.strips) {
     const axis = ctx.axes.get(strip.memberId)!;
-    const clamp = (s: number) => Math.min(axis.span_ft, Math.max(0, s));
-    let s1 = clamp(axis.sign * (strip.v1_ft - axis.vStart_ft));
-    let s2 = clamp(axis.sign * (strip.v2_ft - axis.vStart_ft));
+    const span = axis.span_ft;
+    let s1 = Math.min(span, Math.max(0, axis.sign * (strip.v1_ft - axis.vStart_ft)));
+    let s2 = Math.min(span, Math.max(0, axis.sign * (strip.v2_ft - axis.vStart_ft)));
     let w1 = strip.width1_ft;
     let w2 = strip.width2_ft;
     if (s2 < s1) {
-      [s1, s2] = [s2, s1];
-      [w1, w2] = [w2, w1];
+      const s = s1; s1 = s2; s2 = s;
+      const w = w1; w1 = w2; w2 = w;
     }
     if (s2 - s1 <= 1e-9) continue;
-    const source = `deck ${ctx.deck.id} zone ${ctx.zone.id}, tributary ${widthText(w1, w2)}`;
-    for (const p of pressures) {
-      sink(strip.memberId, { ...distribution(w1 * p.psf / 1000, w2 * p.psf / 1000, s1, s2), case: p.case, source: `${source}: ${p.label}`, ...(p.reducible ? { reducible: true } : {}) });
+    const sources = stripSources(ctx, pressures, w1, w2, sourcesByWidth);
+    for (let i = 0; i < pressures.length; i++) {
+      const p = pressures[i];
+      const a = (w1 * p.psf) / 1000;
+      const b = (w2 * p.psf) / 1000;
+      let load: TakedownLoad;
+      if (isUniform(a, b)) {
+        load = p.reducible
+          ? { kind: 'partial', w_klf: a, from_ft: s1, to_ft: s2, case: p.case, source: sources[i], reducible: true }
+          : { kind: 'partial', w_klf: a, from_ft: s1, to_ft: s2, case: p.case, source: sources[i] };
+      } else {
+        load = p.reducible
+          ? { kind: 'linear', w1_klf: a, w2_klf: b, from_ft: s1, to_ft: s2, case: p.case, source: sources[i], reducible: true }
+          : { kind: 'linear', w1_klf: a, w2_klf: b, from_ft: s1, to_ft: s2, case: p.case, source: sources[i] };
+      }
+      sink(strip.memberId, load);
     }
-    areaSink(strip.memberId, { ...distribution(w1, w2, s1, s2), of: 'all' });
-    if (anyReducible) areaSink(strip.memberId, { ...distribution(w1, w2, s1, s2), of: 'reducibleLive' });
+    const uniformWidth = isUniform(w1, w2);
+    areaSink(strip.memberId, uniformWidth ? { kind: 'partial', w_klf: w1, from_ft: s1, to_ft: s2, of: 'all' } : { kind: 'linear', w1_klf: w1, w2_klf: w2, from_ft: s1, to_ft: s2, of: 'all' });
+    if (anyReducible) {
+      areaSink(strip.memberId, uniformWidth ? { kind: 'partial', w_klf: w1, from_ft: s1, to_ft: s2, of: 'reducibleLive' } : { kind: 'linear', w1_klf: w1, w2_klf: w2, from_ft: s1, to_ft: s2, of: 'reducibleLive' });
+    }
   }
-}
-
-function distribution(w1: number, w2: number, from_ft: number, to_ft: number) {
-  if (Math.abs(w1 - w2) <= 1e-12 * Math.max(1, Math.abs(w1))) return { kind: 'partial' as const, w_klf: w1, from_ft, to_ft };
-  return { kind: 'linear' as const, w1_klf: w1, w2_klf: w2, from_ft, to_ft };
 }

@@ -13,12 +13,12 @@
 import type { Plan, PlanMember } from '../../schemas/plan.schema';
 import type { PlanProblem } from '../../schemas/plan-problem.schema';
 import { findWShape } from '../../catalog/w-shapes.catalog';
-import { buildFramingTopology, type EndSupport, type FramingTopology, type MemberEnd } from '../geometry/framing-topology.geometry';
+import { buildFramingTopology, type EndSupport, type FramingMember, type FramingTopology, type MemberEnd } from '../geometry/framing-topology.geometry';
 import { buildDeckContexts, deckStripLoads, zonePressures, type DeckContext } from '../loads/deck-loads.loads';
 import { placeLineLoads, placePointLoads, zeroCaseTotals, type CaseTotals } from '../loads/placed-loads.loads';
 import { kllTable4_7_1, liveLoadReductionFactor } from '../loads/live-load-reduction.loads';
 import { LOAD_CASES, mergeContiguousLoads, type AreaLoad, type LoadCase, type TakedownLoad } from './member-load.takedown';
-import { simpleSpanReactions } from './simple-span-statics.takedown';
+import { lastMomentAboutStartKipFt, resultantKip, simpleSpanReactions } from './simple-span-statics.takedown';
 import { deriveMemberBracing, type Bracing } from './member-bracing.takedown';
 import { stackColumns, type ColumnReceipt, type ColumnTakedown } from './column-stack.takedown';
 
@@ -103,6 +103,9 @@ const emptyReaction = (supportedBy: string | null): EndReaction => ({
   supportedBy,
 });
 
+/** Placeholder while a member is being taken down (replaced before runTakedown returns; never mutated). */
+const PENDING_REACTIONS: Record<MemberEnd, EndReaction> = Object.freeze({ start: Object.freeze(emptyReaction(null)), end: Object.freeze(emptyReaction(null)) });
+
 export function lockedShapeWeightPlf(member: PlanMember): number {
   return member.shape ? findWShape(member.shape)?.W_plf ?? 0 : 0;
 }
@@ -114,40 +117,91 @@ export function loadTotalsByCase(loads: readonly TakedownLoad[], spanFt: number)
   return totals;
 }
 
-/** End reactions per case of a member (unreduced), and the area passed to each end. */
-export function memberEndReactions(m: Pick<MemberTakedown, 'loads' | 'areaLoads' | 'span_ft' | 'supports'>): Record<MemberEnd, EndReaction> {
-  const supportId = (s: EndSupport) => (s.kind === 'none' ? null : s.id);
-  const out = { start: emptyReaction(supportId(m.supports.start)), end: emptyReaction(supportId(m.supports.end)) };
-  for (const c of LOAD_CASES) {
-    const r = simpleSpanReactions(m.loads.filter((l) => l.case === c), m.span_ft);
-    out.start[`${c}_kip`] = r.start;
-    out.end[`${c}_kip`] = r.end;
+/**
+ * Running sums of resultants and moments about the start, per case and for the area carried,
+ * filled in one pass over a member's loads (each sum sees its loads in list order, so the
+ * result equals summing each case's list separately).
+ */
+class EndSums {
+  tD = 0; mD = 0; tL = 0; mL = 0; tLr = 0; mLr = 0; tS = 0; mS = 0; tRed = 0; mRed = 0;
+  tArea = 0; mArea = 0; tRedArea = 0; mRedArea = 0;
+
+  reset(): void {
+    this.tD = 0; this.mD = 0; this.tL = 0; this.mL = 0; this.tLr = 0; this.mLr = 0; this.tS = 0; this.mS = 0; this.tRed = 0; this.mRed = 0;
+    this.tArea = 0; this.mArea = 0; this.tRedArea = 0; this.mRedArea = 0;
   }
-  const red = simpleSpanReactions(m.loads.filter((l) => l.case === 'L' && l.reducible), m.span_ft);
-  out.start.Lreducible_kip = red.start;
-  out.end.Lreducible_kip = red.end;
-  const all = simpleSpanReactions(m.areaLoads.filter((a) => a.of === 'all'), m.span_ft);
-  const redArea = simpleSpanReactions(m.areaLoads.filter((a) => a.of === 'reducibleLive'), m.span_ft);
-  out.start.area_ft2 = all.start;
-  out.end.area_ft2 = all.end;
-  out.start.reducibleArea_ft2 = redArea.start;
-  out.end.reducibleArea_ft2 = redArea.end;
-  return out;
+
+  addLoads(loads: readonly TakedownLoad[], spanFt: number): void {
+    for (let i = 0; i < loads.length; i++) {
+      const l = loads[i];
+      const t = resultantKip(l, spanFt);
+      const m = lastMomentAboutStartKipFt;
+      switch (l.case) {
+        case 'D': this.tD += t; this.mD += m; break;
+        case 'L':
+          this.tL += t; this.mL += m;
+          if (l.reducible) { this.tRed += t; this.mRed += m; }
+          break;
+        case 'Lr': this.tLr += t; this.mLr += m; break;
+        case 'S': this.tS += t; this.mS += m; break;
+      }
+    }
+  }
+
+  /** Adds the area loads; returns the 'all' area total after the first `directCount` of them. */
+  addAreas(areas: readonly AreaLoad[], spanFt: number, directCount: number): number {
+    let direct = 0;
+    for (let i = 0; i < areas.length; i++) {
+      if (i === directCount) direct = this.tArea;
+      const a = areas[i];
+      const t = resultantKip(a, spanFt);
+      if (a.of === 'all') { this.tArea += t; this.mArea += lastMomentAboutStartKipFt; }
+      else { this.tRedArea += t; this.mRedArea += lastMomentAboutStartKipFt; }
+    }
+    return directCount >= areas.length ? this.tArea : direct;
+  }
+
+  /** Both ends' reactions: end = ΣM/L, start = ΣP − end. */
+  reactions(spanFt: number, startSupport: string | null, endSupport: string | null): Record<MemberEnd, EndReaction> {
+    const eD = this.mD / spanFt, eL = this.mL / spanFt, eLr = this.mLr / spanFt, eS = this.mS / spanFt, eRed = this.mRed / spanFt;
+    const eArea = this.mArea / spanFt, eRedArea = this.mRedArea / spanFt;
+    return {
+      start: {
+        D_kip: this.tD - eD, L_kip: this.tL - eL, Lreducible_kip: this.tRed - eRed, Lr_kip: this.tLr - eLr, S_kip: this.tS - eS,
+        area_ft2: this.tArea - eArea, reducibleArea_ft2: this.tRedArea - eRedArea, supportedBy: startSupport,
+      },
+      end: { D_kip: eD, L_kip: eL, Lreducible_kip: eRed, Lr_kip: eLr, S_kip: eS, area_ft2: eArea, reducibleArea_ft2: eRedArea, supportedBy: endSupport },
+    };
+  }
 }
 
-/** A member's reaction delivered to its supporter as point loads at the connection. */
-export function reactionAsPointLoads(from: MemberTakedown, r: EndReaction, x_ft: number): { loads: TakedownLoad[]; areas: AreaLoad[] } {
-  const source = `${from.kind} ${from.id} reaction`;
-  const loads: TakedownLoad[] = [];
+const supportIdOf = (s: EndSupport) => (s.kind === 'none' ? null : s.id);
+
+/** End reactions per case of a member (unreduced), and the area passed to each end. */
+export function memberEndReactions(m: Pick<MemberTakedown, 'loads' | 'areaLoads' | 'span_ft' | 'supports'>): Record<MemberEnd, EndReaction> {
+  const sums = new EndSums();
+  sums.addLoads(m.loads, m.span_ft);
+  sums.addAreas(m.areaLoads, m.span_ft, m.areaLoads.length);
+  return sums.reactions(m.span_ft, supportIdOf(m.supports.start), supportIdOf(m.supports.end));
+}
+
+/** Push a member's reaction onto its supporter's lists as point loads at the connection. */
+function deliverReaction(source: string, r: EndReaction, x_ft: number, loads: TakedownLoad[], areas: AreaLoad[]): void {
   if (r.D_kip !== 0) loads.push({ case: 'D', kind: 'point', P_kip: r.D_kip, x_ft, source });
   if (r.Lreducible_kip !== 0) loads.push({ case: 'L', kind: 'point', P_kip: r.Lreducible_kip, x_ft, source: `${source} (reducible live)`, reducible: true });
   const nonReducible = r.L_kip - r.Lreducible_kip;
   if (Math.abs(nonReducible) > 1e-12) loads.push({ case: 'L', kind: 'point', P_kip: nonReducible, x_ft, source: `${source} (live, not reducible)` });
   if (r.Lr_kip !== 0) loads.push({ case: 'Lr', kind: 'point', P_kip: r.Lr_kip, x_ft, source });
   if (r.S_kip !== 0) loads.push({ case: 'S', kind: 'point', P_kip: r.S_kip, x_ft, source });
-  const areas: AreaLoad[] = [];
   if (r.area_ft2 !== 0) areas.push({ kind: 'point', P_kip: r.area_ft2, x_ft, of: 'all' });
   if (r.reducibleArea_ft2 !== 0) areas.push({ kind: 'point', P_kip: r.reducibleArea_ft2, x_ft, of: 'reducibleLive' });
+}
+
+/** A member's reaction delivered to its supporter as point loads at the connection. */
+export function reactionAsPointLoads(from: MemberTakedown, r: EndReaction, x_ft: number): { loads: TakedownLoad[]; areas: AreaLoad[] } {
+  const loads: TakedownLoad[] = [];
+  const areas: AreaLoad[] = [];
+  deliverReaction(`${from.kind} ${from.id} reaction`, r, x_ft, loads, areas);
   return { loads, areas };
 }
 
@@ -170,21 +224,42 @@ function deckAppliedLoads(decks: readonly DeckContext[]): { applied: CaseTotals;
   return { applied, byLevel, total };
 }
 
+/** Loads gathered for one member before its turn. */
+interface Gathered {
+  loads: TakedownLoad[];
+  areas: AreaLoad[];
+  /** How many of `areas` came from deck strips (the rest are delivered reactions). */
+  deckAreaCount: number;
+}
+
+const sameLoadKind = (a: TakedownLoad, b: TakedownLoad) => a.case === b.case && a.source === b.source && !!a.reducible === !!b.reducible;
+const sameAreaKind = (a: AreaLoad, b: AreaLoad) => a.of === b.of;
+const ascending = (a: number, b: number) => a - b;
+
+/** Positions where other members frame in, strictly inside the span (as listed, and distinct ascending). */
+function framingPointsOf(fm: FramingMember): { listed: number[]; distinct: number[] } {
+  const listed: number[] = [];
+  for (let i = 0; i < fm.carries.length; i++) {
+    const x = fm.carries[i].position_ft;
+    if (x > 1e-6 && x < fm.span_ft - 1e-6) listed.push(x);
+  }
+  if (listed.length === 0) return { listed, distinct: [] };
+  return { listed, distinct: [...new Set(listed)].sort(ascending) };
+}
+
+const NO_COVERAGE: [number, number][] = [];
+
 export function runTakedown(plan: Plan, options: TakedownOptions = {}): TakedownResult {
   const topology = options.topology ?? buildFramingTopology(plan);
   const problems: PlanProblem[] = [...topology.problems];
   const { decks, problems: deckProblems } = buildDeckContexts(plan, topology);
   problems.push(...deckProblems);
 
-  const loadsOf = new Map<string, TakedownLoad[]>();
-  const areasOf = new Map<string, AreaLoad[]>();
-  for (const id of topology.members.keys()) {
-    loadsOf.set(id, []);
-    areasOf.set(id, []);
-  }
+  const gathered = new Map<string, Gathered>();
+  for (const id of topology.members.keys()) gathered.set(id, { loads: [], areas: [], deckAreaCount: 0 });
   const receipts: ColumnReceipt[] = [];
-  const memberSink = (id: string, load: TakedownLoad) => loadsOf.get(id)!.push(load);
-  const areaSink = (id: string, load: AreaLoad) => areasOf.get(id)!.push(load);
+  const memberSink = (id: string, load: TakedownLoad) => void gathered.get(id)!.loads.push(load);
+  const areaSink = (id: string, load: AreaLoad) => void gathered.get(id)!.areas.push(load);
   const sinks = {
     member: memberSink,
     column: (columnId: string, level: string, c: LoadCase, kip: number, source: string) =>
@@ -192,10 +267,11 @@ export function runTakedown(plan: Plan, options: TakedownOptions = {}): Takedown
   };
 
   for (const ctx of decks) deckStripLoads(ctx, memberSink, areaSink);
-  for (const [id, list] of loadsOf) {
+  for (const [id, g] of gathered) {
     const span = topology.members.get(id)!.span_ft;
-    loadsOf.set(id, mergeContiguousLoads(list, span, (a, b) => a.case === b.case && a.source === b.source && !!a.reducible === !!b.reducible));
-    areasOf.set(id, mergeContiguousLoads(areasOf.get(id)!, span, (a, b) => a.of === b.of));
+    g.loads = mergeContiguousLoads(g.loads, span, sameLoadKind);
+    g.areas = mergeContiguousLoads(g.areas, span, sameAreaKind);
+    g.deckAreaCount = g.areas.length;
   }
   const points = placePointLoads(plan, topology, decks, sinks);
   const lines = placeLineLoads(plan, topology, decks, sinks);
@@ -207,67 +283,75 @@ export function runTakedown(plan: Plan, options: TakedownOptions = {}): Takedown
 
   const overhang = new Set<string>();
   const deckCoverage = new Map<string, [number, number][]>();
-  const deckDirectArea = new Map<string, number>();
   for (const ctx of decks) {
     ctx.tributary.overhangMemberIds.forEach((id) => overhang.add(id));
     for (const [id, ranges] of ctx.tributary.bearing_v) {
       const axis = ctx.axes.get(id)!;
-      const list = deckCoverage.get(id) ?? [];
+      let list = deckCoverage.get(id);
+      if (!list) deckCoverage.set(id, (list = []));
       for (const [v1, v2] of ranges) list.push([axis.sign * (v1 - axis.vStart_ft), axis.sign * (v2 - axis.vStart_ft)]);
-      deckCoverage.set(id, list);
     }
-  }
-  for (const [id, areas] of areasOf) {
-    const fm = topology.members.get(id)!;
-    deckDirectArea.set(id, simpleSpanReactions(areas.filter((a) => a.of === 'all'), fm.span_ft).total);
   }
 
   const members = new Map<string, MemberTakedown>();
   const llrOn = plan.designBasis.liveLoadReduction;
+  const sums = new EndSums();
   for (const id of topology.order) {
     const fm = topology.members.get(id)!;
-    const loads = loadsOf.get(id)!;
-    const areaLoads = areasOf.get(id)!;
-    const all = simpleSpanReactions(areaLoads.filter((a) => a.of === 'all'), fm.span_ft).total;
-    const reducibleArea = simpleSpanReactions(areaLoads.filter((a) => a.of === 'reducibleLive'), fm.span_ft).total;
+    const g = gathered.get(id)!;
+    const loads = g.loads;
+    const areaLoads = g.areas;
+    const span = fm.span_ft;
+    sums.reset();
+    const deckDirectArea = sums.addAreas(areaLoads, span, g.deckAreaCount);
+    const all = sums.tArea;
+    const reducibleArea = sums.tRedArea;
     const carriesOverhang = overhang.has(id);
     const KLL = memberKll(carriesOverhang);
-    const framingPoints_ft = fm.carries.map((c) => c.position_ft).filter((x) => x > 1e-6 && x < fm.span_ft - 1e-6);
+    const framing = framingPointsOf(fm);
     const mt: MemberTakedown = {
       id,
       member: fm.member,
       level: fm.level,
       kind: fm.member.kind,
-      span_ft: fm.span_ft,
+      span_ft: span,
       loads,
       areaLoads,
       selfWeight_plf: 0,
-      tributaryWidth_ft: (deckDirectArea.get(id) ?? 0) / fm.span_ft,
+      tributaryWidth_ft: deckDirectArea / span,
       tributaryArea_ft2: all,
       reducibleArea_ft2: reducibleArea,
       KLL,
       liveReductionFactor: llrOn ? liveLoadReductionFactor(KLL, reducibleArea, 1) : 1,
       carriesOverhang,
-      bracing: deriveMemberBracing(fm.member, fm.span_ft, deckCoverage.get(id) ?? [], framingPoints_ft),
-      framingPoints_ft: [...new Set(framingPoints_ft)].sort((a, b) => a - b),
+      bracing: deriveMemberBracing(fm.member, span, deckCoverage.get(id) ?? NO_COVERAGE, framing.listed),
+      framingPoints_ft: framing.distinct,
       supports: fm.supports,
-      reactions: { start: emptyReaction(null), end: emptyReaction(null) },
+      reactions: PENDING_REACTIONS,
     };
+    sums.addLoads(loads, span);
     const plf = options.selfWeight ? options.selfWeight(mt) : lockedShapeWeightPlf(fm.member);
     mt.selfWeight_plf = plf;
-    if (plf > 0) loads.push({ case: 'D', kind: 'uniform', w_klf: plf / 1000, source: `self weight ${plf} plf` });
-    applied.D += (plf / 1000) * fm.span_ft;
-    mt.reactions = memberEndReactions(mt);
+    if (plf > 0) {
+      const selfWeight: TakedownLoad = { case: 'D', kind: 'uniform', w_klf: plf / 1000, source: `self weight ${plf} plf` };
+      loads.push(selfWeight);
+      sums.tD += resultantKip(selfWeight, span);
+      sums.mD += lastMomentAboutStartKipFt;
+    }
+    applied.D += (plf / 1000) * span;
+    const reactions = sums.reactions(span, supportIdOf(fm.supports.start), supportIdOf(fm.supports.end));
+    mt.reactions = reactions;
     members.set(id, mt);
 
-    for (const end of ['start', 'end'] as const) {
+    let source: string | null = null;
+    for (let e = 0; e < 2; e++) {
+      const end: MemberEnd = e === 0 ? 'start' : 'end';
       const support = fm.supports[end];
-      const r = mt.reactions[end];
+      const r = reactions[end];
       if (support.kind === 'member') {
-        if (!topology.members.has(support.id)) continue;
-        const delivered = reactionAsPointLoads(mt, r, support.position_ft);
-        loadsOf.get(support.id)!.push(...delivered.loads);
-        areasOf.get(support.id)!.push(...delivered.areas);
+        const target = gathered.get(support.id);
+        if (!target || !topology.members.has(support.id)) continue;
+        deliverReaction((source ??= `${mt.kind} ${id} reaction`), r, support.position_ft, target.loads, target.areas);
       } else if (support.kind === 'column') {
         receipts.push({
           columnId: support.id,

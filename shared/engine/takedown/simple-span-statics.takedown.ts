@@ -5,39 +5,53 @@
  */
 import type { LoadDistribution } from './member-load.takedown';
 
-/** Resultant (kip) and its moment about the start (kip-ft) of one load on a span of spanFt. */
-export function loadResultant(load: LoadDistribution, spanFt: number): { total: number; momentAboutStart: number } {
+/**
+ * Moment about the start of the load last passed to `resultantKip` (kip-ft). A module slot
+ * rather than a returned object: the takedown calls this for every load of every member.
+ */
+export let lastMomentAboutStartKipFt = 0;
+
+/** Resultant (kip) of one load on a span of spanFt; its moment about the start goes to `lastMomentAboutStartKipFt`. */
+export function resultantKip(load: LoadDistribution, spanFt: number): number {
   switch (load.kind) {
-    case 'uniform':
-      return { total: load.w_klf * spanFt, momentAboutStart: (load.w_klf * spanFt * spanFt) / 2 };
+    case 'uniform': {
+      const total = load.w_klf * spanFt;
+      lastMomentAboutStartKipFt = (load.w_klf * spanFt * spanFt) / 2;
+      return total;
+    }
     case 'partial': {
       const length = load.to_ft - load.from_ft;
       const total = load.w_klf * length;
-      return { total, momentAboutStart: total * (load.from_ft + length / 2) };
+      lastMomentAboutStartKipFt = total * (load.from_ft + length / 2);
+      return total;
     }
     case 'linear': {
       // ∫ w(x) dx and ∫ w(x)·x dx for w linear from w1 at a to w2 at b.
       const a = load.from_ft;
       const b = load.to_ft;
       const length = b - a;
-      return {
-        total: ((load.w1_klf + load.w2_klf) / 2) * length,
-        momentAboutStart: (length * (load.w1_klf * (2 * a + b) + load.w2_klf * (a + 2 * b))) / 6,
-      };
+      lastMomentAboutStartKipFt = (length * (load.w1_klf * (2 * a + b) + load.w2_klf * (a + 2 * b))) / 6;
+      return ((load.w1_klf + load.w2_klf) / 2) * length;
     }
     case 'point':
-      return { total: load.P_kip, momentAboutStart: load.P_kip * load.x_ft };
+      lastMomentAboutStartKipFt = load.P_kip * load.x_ft;
+      return load.P_kip;
   }
+}
+
+/** Resultant (kip) and its moment about the start (kip-ft) of one load on a span of spanFt. */
+export function loadResultant(load: LoadDistribution, spanFt: number): { total: number; momentAboutStart: number } {
+  const total = resultantKip(load, spanFt);
+  return { total, momentAboutStart: lastMomentAboutStartKipFt };
 }
 
 /** End reactions of a simple span, kip (up positive), from ΣM about each end. */
 export function simpleSpanReactions(loads: readonly LoadDistribution[], spanFt: number): { start: number; end: number; total: number } {
   let total = 0;
   let moment = 0;
-  for (const load of loads) {
-    const r = loadResultant(load, spanFt);
-    total += r.total;
-    moment += r.momentAboutStart;
+  for (let i = 0; i < loads.length; i++) {
+    total += resultantKip(loads[i], spanFt);
+    moment += lastMomentAboutStartKipFt;
   }
   const end = moment / spanFt;
   return { start: total - end, end, total };
