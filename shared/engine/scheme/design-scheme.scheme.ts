@@ -15,8 +15,9 @@ import { designMember } from '../sizing/member-design';
 import { MemberInputError } from '../sizing/member-input.validation';
 import type { MemberDesignInput, MemberDesignResult } from '../sizing/member-design.types';
 import type { MemberLoad } from '../analysis/member-load.types';
-import { buildFramingTopology } from '../geometry/framing-topology.geometry';
-import { lockedShapeWeightPlf, reducedLiveKip, runTakedown, type MemberTakedown, type TakedownResult } from '../takedown/gravity-takedown.takedown';
+import type { TakedownLoad } from '../takedown/member-load.takedown';
+import { buildFramingTopology, type FramingTopology } from '../geometry/framing-topology.geometry';
+import { lockedShapeWeightPlf, reducedLiveKip, runTakedown, type EndReaction, type MemberTakedown, type TakedownResult } from '../takedown/gravity-takedown.takedown';
 import type { Bracing } from '../takedown/member-bracing.takedown';
 import { assignMarks } from './member-marks.scheme';
 
@@ -111,50 +112,55 @@ export interface SchemeResult {
 export const SCHEME_CAUTION =
   'Baywright results must be checked by a licensed engineer before use; local codes and the engineer of record govern.';
 
-/** Design cache carried (non-enumerable, so never serialised) on each result. */
-const CACHE = Symbol('baywright.designCache');
-type DesignCache = Map<string, MemberDesignResult | { error: string[] }>;
-interface CacheView {
-  get(key: string): MemberDesignResult | { error: string[] } | undefined;
-  set(key: string, value: MemberDesignResult | { error: string[] }): void;
-}
-function cacheOf(result: SchemeResult | undefined): DesignCache {
-  return (result as unknown as { [CACHE]?: DesignCache } | undefined)?.[CACHE] ?? new Map();
-}
+type DesignEntry = MemberDesignResult | { error: string[] };
+
+/** The takedown's self-weight load (a uniform dead load; the kind test first spares the text test). */
+const isSelfWeight = (l: TakedownLoad) => l.kind === 'uniform' && l.case === 'D' && l.source.startsWith('self weight');
 
 /** The loads a member is designed for: reducible live × its reduction factor (ASCE 7-16 Eq. 4.7-1). */
 export function designLoads(mt: MemberTakedown): MemberLoad[] {
   const f = mt.liveReductionFactor;
   const out: MemberLoad[] = [];
-  for (const l of mt.loads) {
-    if (l.source.startsWith('self weight')) continue; // the sizing engine adds self weight itself
-    const { reducible, ...load } = l;
-    if (!reducible || f === 1) {
-      out.push(load as MemberLoad);
+  let note: string | null = null;
+  const loads = mt.loads;
+  for (let i = 0; i < loads.length; i++) {
+    const l = loads[i];
+    if (isSelfWeight(l)) continue; // the sizing engine adds self weight itself
+    if (l.reducible === undefined) {
+      // Nothing to drop or scale: the takedown's own object (never mutated after the takedown).
+      out.push(l as MemberLoad);
       continue;
     }
-    const note = ` × ${f.toFixed(3)} (ASCE 7-16 Eq. 4.7-1)`;
-    switch (load.kind) {
-      case 'uniform':
-      case 'partial':
-        out.push({ ...load, w_klf: load.w_klf * f, source: load.source + note });
-        break;
-      case 'linear':
-        out.push({ ...load, w1_klf: load.w1_klf * f, w2_klf: load.w2_klf * f, source: load.source + note });
-        break;
-      case 'point':
-        out.push({ ...load, P_kip: load.P_kip * f, source: load.source + note });
-        break;
+    // Same keys in the same order, without `reducible`; reducible live scaled by the factor.
+    const copy: Record<string, unknown> = {};
+    for (const k in l) if (k !== 'reducible') copy[k] = (l as unknown as Record<string, unknown>)[k];
+    if (l.reducible && f !== 1) {
+      note ??= ` × ${f.toFixed(3)} (ASCE 7-16 Eq. 4.7-1)`;
+      switch (l.kind) {
+        case 'uniform':
+        case 'partial':
+          copy.w_klf = l.w_klf * f;
+          break;
+        case 'linear':
+          copy.w1_klf = l.w1_klf * f;
+          copy.w2_klf = l.w2_klf * f;
+          break;
+        case 'point':
+          copy.P_kip = l.P_kip * f;
+          break;
+      }
+      copy.source = l.source + note;
     }
+    out.push(copy as unknown as MemberLoad);
   }
   return out;
 }
 
-export function memberDesignInput(plan: Plan, mt: MemberTakedown, forcedShape: string | null): MemberDesignInput {
+export function memberDesignInput(plan: Plan, mt: MemberTakedown, forcedShape: string | null, loads: MemberLoad[] = designLoads(mt)): MemberDesignInput {
   const m = mt.member;
   return {
     span_ft: mt.span_ft,
-    loads: designLoads(mt),
+    loads,
     bracing: mt.bracing,
     method: plan.designBasis.method,
     Fy_ksi: plan.designBasis.Fy_ksi,
@@ -168,26 +174,132 @@ export function memberDesignInput(plan: Plan, mt: MemberTakedown, forcedShape: s
   };
 }
 
-/** Key of the design input: positions and magnitudes rounded far below any engineering meaning. */
-function inputKey(input: MemberDesignInput): string {
-  const n = (v: number) => Math.round(v * 1e9) / 1e9;
-  const loads = input.loads.map((l) => {
-    switch (l.kind) {
-      case 'uniform':
-        return `${l.case}u${n(l.w_klf)}`;
-      case 'partial':
-        return `${l.case}p${n(l.w_klf)},${n(l.from_ft)},${n(l.to_ft)}`;
-      case 'linear':
-        return `${l.case}l${n(l.w1_klf)},${n(l.w2_klf)},${n(l.from_ft)},${n(l.to_ft)}`;
-      case 'point':
-        return `${l.case}P${n(l.P_kip)},${n(l.x_ft)}`;
+/** Rounding of the design key: positions and magnitudes far below any engineering meaning. */
+const n9 = (v: number) => Math.round(v * 1e9) / 1e9;
+const LOAD_CASE_CODE = { D: 0, L: 1, Lr: 2, S: 3 } as const;
+/** Stands for null / absent in a key slot (never a value the slots can hold). */
+const ABSENT = -0.5e300;
+
+/**
+ * Memo of member designs within a run and across re-designs: the design is a pure function of
+ * its input, so members whose inputs agree (to the rounding above) share one design. The key
+ * is a list of numbers (span, bracing, basis, constraints, every load's case, kind, magnitudes
+ * and positions, rounded) plus the locked shape; it is hashed, and equal hashes are confirmed
+ * number by number, so no two different inputs share a design.
+ */
+class DesignTable {
+  private readonly buckets = new Map<number, { nums: Float64Array; shape: string; value: DesignEntry }[]>();
+  size = 0;
+
+  /** The key being looked up: scratch[0 … length) and the locked shape, with its hash. */
+  private static scratch = new Float64Array(256);
+  private static length = 0;
+  private static shape = '';
+  private static hash = 0;
+
+  private static push(v: number): void {
+    if (DesignTable.length === DesignTable.scratch.length) {
+      const grown = new Float64Array(DesignTable.scratch.length * 2);
+      grown.set(DesignTable.scratch);
+      DesignTable.scratch = grown;
     }
-  });
-  return [
-    n(input.span_ft), typeof input.bracing === 'string' ? input.bracing : input.bracing.points_ft.map(n).join(','), input.method, input.Fy_ksi,
-    input.deflectionLimits.live, input.deflectionLimits.total, input.shape ?? '', input.maxDepth_in ?? '', input.minDepth_in ?? '',
-    (input.allowedNominalDepths ?? []).join(','), input.includeSelfWeight, input.Lb_override_ft ?? '', input.liveLoadFactorHalf ?? '', loads.join(';'),
-  ].join('|');
+    DesignTable.scratch[DesignTable.length++] = v;
+  }
+
+  /** Fills the scratch key for this input. */
+  static keyOf(plan: Plan, mt: MemberTakedown, shape: string | null, loads: readonly MemberLoad[]): void {
+    const push = DesignTable.push;
+    DesignTable.length = 0;
+    const m = mt.member;
+    const basis = plan.designBasis;
+    push(n9(mt.span_ft));
+    const b = mt.bracing;
+    if (b === 'continuous') push(0);
+    else if (b === 'none') push(1);
+    else {
+      push(2);
+      push(b.points_ft.length);
+      for (let i = 0; i < b.points_ft.length; i++) push(n9(b.points_ft[i]));
+    }
+    push(basis.method === 'LRFD' ? 0 : 1);
+    push(basis.Fy_ksi);
+    push(basis.deflectionLimits.live ?? ABSENT);
+    push(basis.deflectionLimits.total ?? ABSENT);
+    push(m.maxDepth_in ?? ABSENT);
+    push(m.minDepth_in ?? ABSENT);
+    const allowed = m.allowedNominalDepths ?? [];
+    push(allowed.length);
+    for (let i = 0; i < allowed.length; i++) push(allowed[i]);
+    push(m.Lb_override_ft ?? ABSENT);
+    push(loads.length);
+    for (let i = 0; i < loads.length; i++) {
+      const l = loads[i];
+      push(LOAD_CASE_CODE[l.case]);
+      switch (l.kind) {
+        case 'uniform':
+          push(0);
+          push(n9(l.w_klf));
+          break;
+        case 'partial':
+          push(1);
+          push(n9(l.w_klf));
+          push(n9(l.from_ft));
+          push(n9(l.to_ft));
+          break;
+        case 'linear':
+          push(2);
+          push(n9(l.w1_klf));
+          push(n9(l.w2_klf));
+          push(n9(l.from_ft));
+          push(n9(l.to_ft));
+          break;
+        case 'point':
+          push(3);
+          push(n9(l.P_kip));
+          push(n9(l.x_ft));
+          break;
+      }
+    }
+    const k = DesignTable.scratch;
+    let h = 0x811c9dc5 | 0;
+    for (let i = 0; i < DesignTable.length; i++) {
+      const v = k[i] * 1e9;
+      h = Math.imul(h ^ (v | 0), 0x01000193);
+      h = Math.imul(h ^ ((v / 4294967296) | 0), 0x01000193);
+    }
+    DesignTable.shape = shape ?? '';
+    DesignTable.hash = h;
+  }
+
+  /** The design for the scratch key, if memoised. */
+  get(): DesignEntry | undefined {
+    const list = this.buckets.get(DesignTable.hash);
+    if (!list) return undefined;
+    const k = DesignTable.scratch;
+    const n = DesignTable.length;
+    outer: for (const e of list) {
+      if (e.shape !== DesignTable.shape || e.nums.length !== n) continue;
+      // === on doubles: equal values, and 0 equals -0 (as the key's text did).
+      for (let i = 0; i < n; i++) if (e.nums[i] !== k[i]) continue outer;
+      return e.value;
+    }
+    return undefined;
+  }
+
+  /** Memoise a design under the scratch key. */
+  set(value: DesignEntry): void {
+    const entry = { nums: DesignTable.scratch.slice(0, DesignTable.length), shape: DesignTable.shape, value };
+    const list = this.buckets.get(DesignTable.hash);
+    if (list) list.push(entry);
+    else this.buckets.set(DesignTable.hash, [entry]);
+    this.size++;
+  }
+}
+
+/** Design memo carried (non-enumerable, so never serialised) on each result. */
+const CACHE = Symbol('baywright.designCache');
+function cacheOf(result: SchemeResult | undefined): DesignTable | null {
+  return (result as unknown as { [CACHE]?: DesignTable } | undefined)?.[CACHE] ?? null;
 }
 
 /** Group key: level, kind, span, bracing and the layout (case, kind, position) of the loads. */
@@ -200,55 +312,61 @@ function groupKey(mt: MemberTakedown): string {
   return [mt.level, mt.kind, mt.span_ft.toFixed(2), JSON.stringify(mt.bracing), mt.member.shape ?? '', layout].join('|');
 }
 
-function runDesignPass(
-  plan: Plan,
-  topology: ReturnType<typeof buildFramingTopology>,
-  cache: CacheView,
-  forced: Map<string, string>,
-  designs: Map<string, MemberDesignResult | { error: string[] }>,
-): TakedownResult {
-  return runTakedown(plan, {
-    topology,
-    selfWeight: (mt) => {
-      const input = memberDesignInput(plan, mt, forced.get(mt.id) ?? null);
-      const key = inputKey(input);
-      let result = cache.get(key);
-      if (!result) {
-        try {
-          result = designMember(input);
-        } catch (e) {
-          if (!(e instanceof MemberInputError)) throw e;
-          result = { error: [e.message, ...e.problems] };
-        }
-        cache.set(key, result);
+/** One design pass: the takedown with each member sized as it is reached. */
+class DesignPass {
+  readonly designs = new Map<string, DesignEntry>();
+  readonly loadsOf = new Map<string, MemberLoad[]>();
+
+  constructor(
+    private readonly plan: Plan,
+    private readonly table: DesignTable,
+    private readonly previous: DesignTable | null,
+    private readonly forced: Map<string, string>,
+  ) {}
+
+  /** The takedown's self-weight hook: size the member, return its weight (plf). */
+  readonly selfWeight = (mt: MemberTakedown): number => {
+    const loads = designLoads(mt);
+    this.loadsOf.set(mt.id, loads);
+    const shape = this.forced.get(mt.id) ?? mt.member.shape;
+    DesignTable.keyOf(this.plan, mt, shape, loads);
+    let result = this.table.get();
+    if (!result && this.previous) {
+      result = this.previous.get();
+      if (result) this.table.set(result);
+    }
+    if (!result) {
+      try {
+        result = designMember(memberDesignInput(this.plan, mt, this.forced.get(mt.id) ?? null, loads));
+      } catch (e) {
+        if (!(e instanceof MemberInputError)) throw e;
+        result = { error: [e.message, ...e.problems] };
       }
-      designs.set(mt.id, result);
-      return 'error' in result ? lockedShapeWeightPlf(mt.member) : result.weight_plf;
-    },
-  });
+      this.table.set(result);
+    }
+    this.designs.set(mt.id, result);
+    return 'error' in result ? lockedShapeWeightPlf(mt.member) : result.weight_plf;
+  };
+
+  run(topology: FramingTopology): TakedownResult {
+    return runTakedown(this.plan, { topology, selfWeight: this.selfWeight });
+  }
 }
 
 export function designScheme(plan: Plan, options: SchemeOptions = {}): SchemeResult {
   const topology = buildFramingTopology(plan);
-  const previousCache = cacheOf(options.previous);
-  // Read from this run's cache, then the previous one; keep only designs this run used.
-  const cache: DesignCache = new Map();
-  const combined: CacheView = {
-    get: (k) => {
-      const hit = cache.get(k) ?? previousCache.get(k);
-      if (hit) cache.set(k, hit);
-      return hit;
-    },
-    set: (k, v) => void cache.set(k, v),
-  };
+  // Read from this run's memo, then the previous one; keep only designs this run used.
+  const table = new DesignTable();
+  const previous = cacheOf(options.previous);
 
   const forced = new Map<string, string>();
-  let designs = new Map<string, MemberDesignResult | { error: string[] }>();
-  let takedown = runDesignPass(plan, topology, combined, forced, designs);
+  let pass = new DesignPass(plan, table, previous, forced);
+  let takedown = pass.run(topology);
 
   if (options.groupIdentical) {
     // Fixed point: a group's size changes its members' self weight, hence their supporters' loads.
     for (let iteration = 0; iteration < 10; iteration++) {
+      const designs = pass.designs;
       const groups = new Map<string, string[]>();
       for (const id of takedown.order) {
         const mt = takedown.members.get(id)!;
@@ -278,17 +396,43 @@ export function designScheme(plan: Plan, options: SchemeOptions = {}): SchemeRes
       if (same) break;
       forced.clear();
       nextForced.forEach((v, k) => forced.set(k, v));
-      designs = new Map();
-      takedown = runDesignPass(plan, topology, combined, forced, designs);
+      pass = new DesignPass(plan, table, previous, forced);
+      takedown = pass.run(topology);
     }
   }
 
-  const result = buildSchemeResult(plan, takedown, designs);
-  Object.defineProperty(result, CACHE, { value: cache, enumerable: false });
+  const result = buildSchemeResult(plan, takedown, pass.designs, pass.loadsOf);
+  Object.defineProperty(result, CACHE, { value: table, enumerable: false });
   return result;
 }
 
-function buildSchemeResult(plan: Plan, takedown: TakedownResult, designs: Map<string, MemberDesignResult | { error: string[] }>): SchemeResult {
+/** A reaction as the scheme reports it: live reduced by the member's own factor. */
+function schemeReactionEnd(r: EndReaction, factor: number): SchemeReactionEnd {
+  return {
+    D_kip: r.D_kip,
+    L_kip: reducedLiveKip(r, factor),
+    Lr_kip: r.Lr_kip,
+    S_kip: r.S_kip,
+    Lunreduced_kip: r.L_kip,
+    supportedBy: r.supportedBy,
+  };
+}
+
+/** The loads reported for a member: its design loads, then its self weight. */
+function reportedLoads(mt: MemberTakedown, designed: MemberLoad[] | undefined): MemberLoad[] {
+  const out = designed ? designed.slice() : designLoads(mt);
+  for (const l of mt.loads) {
+    if (!isSelfWeight(l)) continue;
+    if (l.reducible === undefined) out.push(l as MemberLoad);
+    else {
+      const { reducible: _r, ...rest } = l;
+      out.push(rest as MemberLoad);
+    }
+  }
+  return out;
+}
+
+function buildSchemeResult(plan: Plan, takedown: TakedownResult, designs: Map<string, DesignEntry>, loadsOf: Map<string, MemberLoad[]>): SchemeResult {
   const problems: PlanProblem[] = [...takedown.problems];
   const fileOrder = plan.members.filter((m) => takedown.members.has(m.id));
   const marks = assignMarks(
@@ -316,17 +460,6 @@ function buildSchemeResult(plan: Plan, takedown: TakedownResult, designs: Map<st
     } else if (design && !design.passes) {
       problems.push(planProblem('error', 'member-fails', `Member ${m.id}: ${design.failure ?? 'does not pass'}`, { elementId: m.id }));
     }
-    const end = (e: 'start' | 'end'): SchemeReactionEnd => {
-      const r = mt.reactions[e];
-      return {
-        D_kip: r.D_kip,
-        L_kip: reducedLiveKip(r, mt.liveReductionFactor),
-        Lr_kip: r.Lr_kip,
-        S_kip: r.S_kip,
-        Lunreduced_kip: r.L_kip,
-        supportedBy: r.supportedBy,
-      };
-    };
     return {
       id: m.id,
       mark: marks.get(m.id) ?? '',
@@ -347,25 +480,44 @@ function buildSchemeResult(plan: Plan, takedown: TakedownResult, designs: Map<st
       Mr_kipft: design ? design.Mr_kipft : null,
       Mc_kipft: design ? design.Mc_kipft : null,
       weight_plf: mt.selfWeight_plf,
-      reactions: { start: end('start'), end: end('end') },
-      loads: [...designLoads(mt), ...mt.loads.filter((l) => l.source.startsWith('self weight')).map(({ reducible: _r, ...l }) => l as MemberLoad)],
+      reactions: { start: schemeReactionEnd(mt.reactions.start, mt.liveReductionFactor), end: schemeReactionEnd(mt.reactions.end, mt.liveReductionFactor) },
+      loads: reportedLoads(mt, loadsOf.get(m.id)),
       bracing: mt.bracing,
       connections: 2 + mt.framingPoints_ft.length,
       design,
     };
   });
 
-  const weightOf = (s: SchemeMember) => s.weight_plf * s.span_ft;
-  const steelWeight_lb = members.reduce((sum, s) => sum + weightOf(s), 0);
+  // One pass; each sum sees its members in file order, as summing each filtered list would.
+  let steelWeight_lb = 0;
+  let girderWeight_lb = 0, girderPieces = 0, beamWeight_lb = 0, beamPieces = 0;
+  const levelSums = new Map<string, { steelWeight_lb: number; pieces: number }>();
+  for (const l of plan.levels) levelSums.set(l.id, { steelWeight_lb: 0, pieces: 0 });
+  for (const s of members) {
+    const w = s.weight_plf * s.span_ft;
+    steelWeight_lb += w;
+    const ls = levelSums.get(s.level);
+    if (ls) {
+      ls.steelWeight_lb += w;
+      ls.pieces++;
+    }
+    if (s.kind === 'girder') {
+      girderWeight_lb += w;
+      girderPieces++;
+    } else if (s.kind === 'beam') {
+      beamWeight_lb += w;
+      beamPieces++;
+    }
+  }
   const floorArea_ft2 = takedown.floorArea_ft2;
   const byLevel = plan.levels.map((l) => {
-    const here = members.filter((s) => s.level === l.id);
-    return { level: l.id, steelWeight_lb: here.reduce((sum, s) => sum + weightOf(s), 0), pieces: here.length, floorArea_ft2: takedown.byLevelFloorArea_ft2.get(l.id) ?? 0 };
+    const ls = levelSums.get(l.id)!;
+    return { level: l.id, steelWeight_lb: ls.steelWeight_lb, pieces: ls.pieces, floorArea_ft2: takedown.byLevelFloorArea_ft2.get(l.id) ?? 0 };
   });
-  const byKind = (['girder', 'beam'] as const).map((kind) => {
-    const here = members.filter((s) => s.kind === kind);
-    return { kind, steelWeight_lb: here.reduce((sum, s) => sum + weightOf(s), 0), pieces: here.length };
-  });
+  const byKind = [
+    { kind: 'girder' as const, steelWeight_lb: girderWeight_lb, pieces: girderPieces },
+    { kind: 'beam' as const, steelWeight_lb: beamWeight_lb, pieces: beamPieces },
+  ];
 
   return {
     name: plan.name,

@@ -61,7 +61,8 @@ export function assignMarks(members: readonly MarkInput[], levels: readonly Pick
   return marks;
 }
 
+const r = (v: number) => Math.round(v * 100) / 100;
+
 function planOrder(a: MarkInput, b: MarkInput): number {
-  const r = (v: number) => Math.round(v * 100) / 100;
   return r(a.midpoint[1]) - r(b.midpoint[1]) || r(a.midpoint[0]) - r(b.midpoint[0]) || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0);
 }

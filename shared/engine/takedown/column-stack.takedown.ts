@@ -9,7 +9,7 @@
  */
 import type { Plan } from '../../schemas/plan.schema';
 import { kllTable4_7_1, liveLoadReductionFactor } from '../loads/live-load-reduction.loads';
-import { LOAD_CASES, loadCombinations, type LoadCase } from '../loads/combinations';
+import { loadCombinations, type LoadCase } from '../loads/combinations';
 
 export interface ColumnReceipt {
   columnId: string;
@@ -48,16 +48,34 @@ export interface ColumnTakedown {
   levels: ColumnLevelTakedown[];
 }
 
+/** Combinations by method and cases present (loadCombinations copies its list on every call). */
+const combinationsByKey = new Map<string, ReturnType<typeof loadCombinations>>();
+
 /** Required axial strength: the largest gravity combination of ASCE 7-16 §2.3.1 (LRFD) or §2.4.1 (ASD), L factor 1.0. */
 export function columnRequiredAxialKip(method: 'LRFD' | 'ASD', D: number, L: number, Lr: number, S: number): { Pr_kip: number; combination: string } {
-  const values: Record<LoadCase, number> = { D, L, Lr, S };
-  const present = LOAD_CASES.filter((c) => values[c] !== 0);
-  let best = { Pr_kip: 0, combination: method === 'LRFD' ? '1.4D' : 'D' };
-  for (const combo of loadCombinations(method, present.length ? present : ['D'])) {
-    const p = LOAD_CASES.reduce((sum, c) => sum + combo.factors[c] * values[c], 0);
-    if (p > best.Pr_kip + 1e-12) best = { Pr_kip: p, combination: combo.name };
+  const present: LoadCase[] = [];
+  let key: string = method;
+  if (D !== 0) { present.push('D'); key += 'D'; }
+  if (L !== 0) { present.push('L'); key += 'L'; }
+  if (Lr !== 0) { present.push('Lr'); key += 'r'; }
+  if (S !== 0) { present.push('S'); key += 'S'; }
+  let combos = combinationsByKey.get(key);
+  if (!combos) {
+    combos = loadCombinations(method, present.length ? present : ['D']);
+    combinationsByKey.set(key, combos);
   }
-  return best;
+  let bestPr = 0;
+  let bestName = method === 'LRFD' ? '1.4D' : 'D';
+  for (const combo of combos) {
+    const f = combo.factors;
+    // Sum in LOAD_CASES order (D, L, Lr, S), from 0, as the clause lists them.
+    const p = 0 + f.D * D + f.L * L + f.Lr * Lr + f.S * S;
+    if (p > bestPr + 1e-12) {
+      bestPr = p;
+      bestName = combo.name;
+    }
+  }
+  return { Pr_kip: bestPr, combination: bestName };
 }
 
 export function stackColumns(plan: Plan, receipts: readonly ColumnReceipt[], liveLoadReduction: boolean): ColumnTakedown[] {
