@@ -1,9 +1,9 @@
 import { expect, type Locator, type Page } from '@playwright/test';
 
 /** The Plan canvas and a plan-feet → page-pixel converter read from its data attributes. */
-export async function planCanvas(page: Page) {
+export async function planCanvas(page: Page, timeout = 15_000) {
   const canvas = page.getByTestId('plan-canvas');
-  await expect(canvas).toHaveAttribute('data-view-scale', /\d/);
+  await expect(canvas).toHaveAttribute('data-view-scale', /\d/, { timeout });
   return canvas;
 }
 

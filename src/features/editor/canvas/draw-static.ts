@@ -205,7 +205,13 @@ function drawDeckArrow(ctx: CanvasRenderingContext2D, d: StaticGeometry['decks']
   ctx.font = `10px ${SANS}`;
   ctx.textAlign = 'center';
   ctx.textBaseline = 'bottom';
-  if (lenPx > 60) ctx.fillText(d.zoneName, 0, -7);
+  if (lenPx > 60) {
+    // A halo in the zone's tint keeps the name legible over beams.
+    ctx.lineWidth = 4;
+    ctx.strokeStyle = zoneTint(d.zoneIndex);
+    ctx.strokeText(d.zoneName, 0, -7);
+    ctx.fillText(d.zoneName, 0, -7);
+  }
   ctx.restore();
 }
 

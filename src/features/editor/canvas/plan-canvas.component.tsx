@@ -126,7 +126,7 @@ export function PlanCanvas({ store, design, controller, label }: Props) {
       }}
       onPointerMove={(e) => {
         controller.move(local(e));
-        tooltip.move(local(e));
+        if (!controller.panning && e.buttons === 0) tooltip.move(local(e));
       }}
       onPointerUp={(e) => {
         controller.up(local(e));
@@ -148,7 +148,10 @@ export function PlanCanvas({ store, design, controller, label }: Props) {
               const g = geometry.current;
               if (!g || !theme.current) return;
               const view = store.getState().view;
+              const t0 = performance.now();
               const labelled = drawStatic(ctx._context, store.getState().plan, g, view, theme.current);
+              // Performance probe: a test may set window.__planDrawProbe = [] to collect draw times.
+              (globalThis as { __planDrawProbe?: number[] }).__planDrawProbe?.push(performance.now() - t0);
               // Read-back for tests and tools: the view and how many members carry a printed size.
               const el = containerRef.current;
               if (el) {
@@ -190,7 +193,7 @@ function ScaleIndicator({ store }: { store: EditorStore }) {
   const ft = scaleBarLength(scale);
   const px = ft * scale;
   return (
-    <div data-testid="scale-indicator" className="pointer-events-none absolute bottom-3 left-3 flex flex-col gap-0.5 rounded-[2px] bg-paper-raised/85 px-1.5 py-1">
+    <div data-testid="scale-indicator" className="pointer-events-none absolute right-3 bottom-3 flex flex-col items-end gap-0.5 rounded-[2px] bg-paper-raised/85 px-1.5 py-1">
       <div className="flex" style={{ width: px }}>
         <div className="h-1.5 flex-1 border border-ink bg-ink" />
         <div className="h-1.5 flex-1 border border-l-0 border-ink" />

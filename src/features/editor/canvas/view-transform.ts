@@ -25,7 +25,10 @@ export function panBy(view: View, dx: number, dy: number): View {
 }
 
 /** The view that shows these plan bounds with a margin for grid bubbles. */
-export function fitView(view: View, bounds: Bounds | null, marginPx = 64): View {
+/** Room outside the drawing for grid bubbles and dimension strings. */
+export const FIT_MARGIN_PX = 104;
+
+export function fitView(view: View, bounds: Bounds | null, marginPx = FIT_MARGIN_PX): View {
   if (!bounds) return { ...view, scale: 8, x: marginPx, y: view.height - marginPx };
   const w = Math.max(bounds.maxX - bounds.minX, 1);
   const h = Math.max(bounds.maxY - bounds.minY, 1);

@@ -92,6 +92,7 @@ export function PlanEditor(props: PlanEditorProps) {
   useEffect(() => {
     design.onMeasured = (ms) => {
       rootRef.current?.setAttribute('data-edit-to-sizes-ms', ms.toFixed(1));
+      rootRef.current?.setAttribute('data-engine-ms', (design.getSnapshot().lastEngineMs ?? 0).toFixed(1));
       rootRef.current?.setAttribute('data-design-count', String((Number(rootRef.current.getAttribute('data-design-count')) || 0) + 1));
       console.info(`[plan] edit → sizes on screen: ${ms.toFixed(1)} ms (engine ${design.getSnapshot().lastEngineMs?.toFixed(1)} ms)`);
     };
@@ -214,7 +215,8 @@ export function PlanEditor(props: PlanEditorProps) {
         </div>
       </div>
       {selectedMember && schemeMember && designState.result && props.renderMemberSheet ? (
-        <div className="border-t-2 border-ink" data-testid="member-sheet-slot">
+        <div className="border-t-2 border-ink bg-paper px-4 py-4" data-testid="member-sheet-slot">
+          <div className="mx-auto max-w-5xl">
           {props.renderMemberSheet({
             member: schemeMember,
             planMember: selectedMember,
@@ -225,6 +227,7 @@ export function PlanEditor(props: PlanEditorProps) {
             setConstraints: (c) => dispatch(store, 'member.setConstraints', { id: selectedMember.id, ...c }),
             close: () => dispatch(store, 'selection.set', { ids: [] }),
           })}
+          </div>
         </div>
       ) : null}
       {saveState.status === 'invalid' ? (

@@ -64,8 +64,11 @@ export class LiveDesign {
     const seq = ++this.seq;
     this.editAt.set(seq, editedAt);
     this.queued = { seq, plan };
+    // With a worker, post at once so the design runs while React renders the edit;
+    // on the main thread, wait for the event handler to finish first.
+    if (this.worker && !this.busy) this.flush();
+    else if (this.timer === null) this.timer = setTimeout(() => this.flush(), 0);
     this.publish({ ...this.snapshot, pending: true });
-    if (this.timer === null) this.timer = setTimeout(() => this.flush(), 0);
   }
 
   private flush() {

@@ -98,8 +98,8 @@ export function MemberList({ store, design }: { store: EditorStore; design: Live
                       {s.mark || r.id}
                     </button>
                   </td>
-                  <td className="px-2 py-1 text-ink-soft">
-                    {r.kind} <span className="figures font-mono">{r.span_ft.toFixed(1)} ft</span>
+                  <td className="px-2 py-1 whitespace-nowrap text-ink-soft">
+                    {r.kind} <span className="figures font-mono">{r.span_ft.toFixed(1)}′</span>
                   </td>
                   <td className="figures px-2 py-1 font-mono">{s.size}</td>
                   <td className="px-2 py-1 text-right">

@@ -1,0 +1,142 @@
+import { mkdirSync, writeFileSync } from 'node:fs';
+import { expect, test, type Page } from '@playwright/test';
+import { signInAs } from './support/auth.helpers';
+import { clickPlan, generatedPlan, planCanvas } from './support/plan-canvas.helpers';
+
+const PERF_DIR = 'artifacts/perf';
+
+/** A scheme in the demo project holding this plan, made through the real API; returns its Plan URL. */
+async function schemeWithPlan(page: Page, plan: ReturnType<typeof generatedPlan>, name: string): Promise<string> {
+  const origin = new URL(page.url()).origin;
+  const headers = { Origin: origin };
+  const projects = (await (await page.request.get('/api/projects')).json()) as { projects: { id: string | number }[] };
+  const projectId = projects.projects[0].id;
+  const created = await page.request.post(`/api/projects/${projectId}/schemes`, { data: { name }, headers });
+  expect(created.status()).toBe(201);
+  const scheme = ((await created.json()) as { scheme: { id: string | number; revision: number } }).scheme;
+  const put = await page.request.put(`/api/schemes/${scheme.id}/plan`, { data: { revision: scheme.revision, plan }, headers });
+  expect(put.status(), await put.text()).toBe(200);
+  return `/projects/${projectId}/plan?scheme=${scheme.id}&level=L2`;
+}
+
+function percentile(sorted: number[], p: number): number {
+  if (sorted.length === 0) return NaN;
+  const i = Math.min(sorted.length - 1, Math.max(0, Math.ceil((p / 100) * sorted.length) - 1));
+  return sorted[i];
+}
+
+// Trace snapshots walk the whole DOM on every action and would be measured as long frames.
+test.use({ trace: 'off' });
+
+test.describe('plan performance', () => {
+  test('when a 5,000-member level is panned and zoomed, then frame times stay smooth', async ({ page }) => {
+    test.setTimeout(240_000);
+    await page.setViewportSize({ width: 1600, height: 1000 });
+    await signInAs(page, 'engineer@example.com');
+    const plan = generatedPlan(25, 25, 6);
+    const url = await schemeWithPlan(page, plan, `Pan test ${plan.members.length} members`);
+    await page.goto(url);
+    const canvas = await planCanvas(page, 120_000);
+    await expect(canvas).toHaveAttribute('data-members', String(plan.members.length));
+    // Let the first design of the whole level finish so the pan is measured on its own.
+    await expect(page.getByTestId('design-status')).toContainText(`${plan.members.length} members sized`, { timeout: 180_000 });
+
+    const box = (await canvas.boundingBox())!;
+    const cx = box.x + box.width / 2;
+    const cy = box.y + box.height / 2;
+    await page.evaluate(() => {
+      const w = window as unknown as { __frames: number[]; __run: boolean };
+      w.__frames = [];
+      w.__run = true;
+      (window as unknown as { __planDrawProbe: number[] }).__planDrawProbe = [];
+      let last = performance.now();
+      const tick = (t: number) => {
+        w.__frames.push(t - last);
+        last = t;
+        if (w.__run) requestAnimationFrame(tick);
+      };
+      requestAnimationFrame((t) => {
+        last = t;
+        requestAnimationFrame(tick);
+      });
+    });
+    // Scripted navigation: zoom in with the wheel, pan with space-drag and the middle button, zoom out.
+    await page.mouse.move(cx, cy);
+    for (let i = 0; i < 12; i++) {
+      await page.mouse.wheel(0, -120);
+      await page.waitForTimeout(16);
+    }
+    await canvas.focus();
+    await page.keyboard.down(' ');
+    for (const [dx, dy] of [[400, 0], [0, 300], [-400, 0], [0, -300]]) {
+      await page.mouse.move(cx, cy);
+      await page.mouse.down();
+      await page.mouse.move(cx + dx, cy + dy, { steps: 40 });
+      await page.mouse.up();
+    }
+    await page.keyboard.up(' ');
+    for (let i = 0; i < 12; i++) {
+      await page.mouse.wheel(0, 120);
+      await page.waitForTimeout(16);
+    }
+    await page.mouse.move(cx, cy);
+    await page.mouse.down({ button: 'middle' });
+    await page.mouse.move(cx - 300, cy - 200, { steps: 40 });
+    await page.mouse.up({ button: 'middle' });
+    const { frames, draws } = await page.evaluate(() => {
+      const w = window as unknown as { __frames: number[]; __run: boolean; __planDrawProbe: number[] };
+      w.__run = false;
+      return { frames: w.__frames.slice(1), draws: w.__planDrawProbe };
+    });
+    const drawSorted = [...draws].sort((a, b) => a - b);
+    const sorted = [...frames].sort((a, b) => a - b);
+    const result = {
+      members: plan.members.length,
+      frames: frames.length,
+      median_ms: Number(percentile(sorted, 50).toFixed(2)),
+      p95_ms: Number(percentile(sorted, 95).toFixed(2)),
+      max_ms: Number(sorted[sorted.length - 1].toFixed(2)),
+      staticDraws: draws.length,
+      staticDrawMedian_ms: Number(percentile(drawSorted, 50).toFixed(2)),
+      staticDrawP95_ms: Number(percentile(drawSorted, 95).toFixed(2)),
+      measuredAt: new Date().toISOString(),
+      note: 'requestAnimationFrame deltas in headless Chromium (--disable-gpu) during scripted wheel zoom, space-drag and middle-button pan',
+    };
+    mkdirSync(PERF_DIR, { recursive: true });
+    writeFileSync(`${PERF_DIR}/plan-pan.json`, `${JSON.stringify(result, null, 2)}\n`);
+    console.log(`[perf] plan pan/zoom, ${result.members} members: median ${result.median_ms} ms, p95 ${result.p95_ms} ms over ${result.frames} frames; static layer draw median ${result.staticDrawMedian_ms} ms, p95 ${result.staticDrawP95_ms} ms`);
+    // Generous bounds: shared 2-core machine. The true figures are in the JSON.
+    expect(result.frames).toBeGreaterThan(30);
+    expect(result.median_ms).toBeLessThan(50);
+  });
+
+  test('when a point load is added on a 500-member level, then the new sizes are on screen quickly', async ({ page }) => {
+    test.setTimeout(180_000);
+    await page.setViewportSize({ width: 1600, height: 1000 });
+    await signInAs(page, 'engineer@example.com');
+    const plan = generatedPlan(10, 10, 3);
+    const url = await schemeWithPlan(page, plan, `Edit test ${plan.members.length} members`);
+    await page.goto(url);
+    const canvas = await planCanvas(page);
+    const editor = page.getByTestId('plan-editor');
+    await expect(page.getByTestId('design-status')).toContainText(`${plan.members.length} members sized`, { timeout: 60_000 });
+    await expect(editor).toHaveAttribute('data-design-count', /\d+/);
+    await canvas.focus();
+    await page.keyboard.press('p');
+    const times: number[] = [];
+    const engine: number[] = [];
+    for (let i = 0; i < 6; i++) {
+      const before = Number(await editor.getAttribute('data-design-count'));
+      await clickPlan(page, canvas, 7.5 + 30 * i, 15 + 30 * (i % 3));
+      await expect(editor).toHaveAttribute('data-design-count', String(before + 1), { timeout: 30_000 });
+      times.push(Number(await editor.getAttribute('data-edit-to-sizes-ms')));
+      engine.push(Number(await editor.getAttribute('data-engine-ms')));
+    }
+    const sorted = [...times].sort((a, b) => a - b);
+    const result = { members: plan.members.length, edits: times.length, editToSizes_ms: times, median_ms: percentile(sorted, 50), engine_ms: engine, engineMedian_ms: percentile([...engine].sort((a, b) => a - b), 50), max_ms: sorted[sorted.length - 1], target_ms: 300, measuredAt: new Date().toISOString() };
+    mkdirSync(PERF_DIR, { recursive: true });
+    writeFileSync(`${PERF_DIR}/plan-edit-to-sizes.json`, `${JSON.stringify(result, null, 2)}\n`);
+    console.log(`[perf] edit → sizes on screen, ${result.members} members: median ${result.median_ms.toFixed(0)} ms (each: ${times.map((t) => t.toFixed(0)).join(', ')}; engine alone median ${result.engineMedian_ms.toFixed(0)} ms)`);
+    expect(result.median_ms).toBeLessThan(3000);
+  });
+});
