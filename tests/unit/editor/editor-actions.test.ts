@@ -112,3 +112,13 @@ describe('editor actions and undo', () => {
     expect(new Set(keys).size).toBe(keys.length);
   });
 });
+
+describe('grid from spacings on an existing grid', () => {
+  it('when the spacings change, then the lines keep their ids and move, extra lines go', () => {
+    // Fixture x lines g1, g2, g3 at 0, 30, 60 ft.
+    const store = createEditorStore({ plan: twoBayPlan() });
+    dispatch(store, 'grid.fromSpacings', { x: [25], y: null });
+    const xs = (store.getState().plan.grids ?? []).filter((g) => g.axis === 'x');
+    expect(xs.map((g) => [g.id, g.label, g.offset_ft])).toEqual([['g1', '1', 0], ['g2', '2', 25]]);
+  });
+});

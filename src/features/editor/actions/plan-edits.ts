@@ -34,8 +34,14 @@ function relabel(grids: PlanGrid[]): PlanGrid[] {
 export function setGridFromSpacings(plan: Plan, axis: 'x' | 'y', spacings_ft: readonly number[], origin_ft = 0): Plan {
   const taken = usedIds(plan);
   const kept = (plan.grids ?? []).filter((g) => g.axis !== axis);
-  const added = offsetsFromSpacings(spacings_ft, origin_ft).map((offset_ft) => ({ id: nextId(plan, `grid-${axis}`, taken), axis, label: '', offset_ft }));
-  return { ...plan, grids: relabel([...kept, ...added]) };
+  // Existing lines keep their ids in order (the grid moved rather than was replaced).
+  const existing = (plan.grids ?? []).filter((g) => g.axis === axis).sort((a, b) => a.offset_ft - b.offset_ft);
+  const lines = offsetsFromSpacings(spacings_ft, origin_ft).map((offset_ft, i): PlanGrid => {
+    const old = existing[i];
+    if (old) return old.offset_ft === offset_ft ? old : { ...old, offset_ft };
+    return { id: nextId(plan, `grid-${axis}`, taken), axis, label: '', offset_ft };
+  });
+  return { ...plan, grids: relabel([...kept, ...lines]) };
 }
 
 export function addGridLine(plan: Plan, axis: 'x' | 'y', offset_ft: number): Plan {

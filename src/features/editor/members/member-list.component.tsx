@@ -34,7 +34,8 @@ export function MemberList({ store, design }: { store: EditorStore; design: Live
   const selected = useMemo(() => new Set(selection), [selection]);
   useEffect(() => {
     if (selection.length !== 1) return;
-    const row = bodyRef.current?.querySelector<HTMLElement>(`[data-member-id="${CSS.escape(selection[0])}"]`);
+    const id = typeof CSS !== 'undefined' && CSS.escape ? CSS.escape(selection[0]) : selection[0].replace(/["\\]/g, '\\$&');
+    const row = bodyRef.current?.querySelector<HTMLElement>(`[data-member-id="${id}"]`);
     row?.scrollIntoView?.({ block: 'nearest' });
   }, [selection]);
 
