@@ -18,7 +18,7 @@ describe('autosave with revisions', () => {
 
   it('when several edits come quickly, then one PUT is sent 600 ms after the last, with the base revision', async () => {
     const store = createEditorStore({ plan: twoBayPlan() });
-    const save = vi.fn(async (): Promise<SavePlanOutcome> => ({ kind: 'saved', revision: 8, repairs: [] }));
+    const save = vi.fn(async (_revision: number, _plan: Plan): Promise<SavePlanOutcome> => ({ kind: 'saved', revision: 8, repairs: [] }));
     const storage = memoryStorage();
     const autosave = new PlanAutosave(store, 7, { save, storage, storageKey: 'k' });
     autosave.start();
@@ -32,7 +32,7 @@ describe('autosave with revisions', () => {
     await vi.advanceTimersByTimeAsync(1);
     expect(save).toHaveBeenCalledTimes(1);
     expect(save.mock.calls[0][0]).toBe(7);
-    expect((save.mock.calls[0][1] as Plan).members).toHaveLength(13);
+    expect(save.mock.calls[0][1].members).toHaveLength(13);
     expect(autosave.snapshot).toMatchObject({ status: 'saved', revision: 8 });
     // Saved: the copy kept on this device is dropped.
     expect(storage.data.has('k')).toBe(false);
