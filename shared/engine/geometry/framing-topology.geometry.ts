@@ -64,20 +64,19 @@ export function memberSpanFt(m: Pick<PlanMember, 'start' | 'end'>): number {
 
 /** Collinear with an overlap longer than the tolerance (a duplicate is the full-overlap case). */
 export function membersOverlapFt(a: FramingMember, b: FramingMember): number {
-  const offA = projectPointOnLine(b.start, a).offset;
-  const offB = projectPointOnLine(b.end, a).offset;
-  if (Math.abs(offA) > SUPPORT_TOLERANCE_FT || Math.abs(offB) > SUPPORT_TOLERANCE_FT) return 0;
-  const s1 = projectPointOnLine(b.start, a).along;
-  const s2 = projectPointOnLine(b.end, a).along;
+  const ux = a.direction[0];
+  const uy = a.direction[1];
+  const dxA = b.start[0] - a.start[0];
+  const dyA = b.start[1] - a.start[1];
+  if (Math.abs(-dxA * uy + dyA * ux) > SUPPORT_TOLERANCE_FT) return 0;
+  const dxB = b.end[0] - a.start[0];
+  const dyB = b.end[1] - a.start[1];
+  if (Math.abs(-dxB * uy + dyB * ux) > SUPPORT_TOLERANCE_FT) return 0;
+  const s1 = dxA * ux + dyA * uy;
+  const s2 = dxB * ux + dyB * uy;
   const lo = Math.max(0, Math.min(s1, s2));
   const hi = Math.min(a.span_ft, Math.max(s1, s2));
   return hi - lo;
-}
-
-function projectPointOnLine(p: Point, m: FramingMember): { along: number; offset: number } {
-  const dx = p[0] - m.start[0];
-  const dy = p[1] - m.start[1];
-  return { along: dx * m.direction[0] + dy * m.direction[1], offset: -dx * m.direction[1] + dy * m.direction[0] };
 }
 
 /**
@@ -90,25 +89,35 @@ export function findEndSupport(
   columnsAtLevel: readonly { id: string; at: Point }[],
   membersNear: readonly FramingMember[],
 ): EndSupport {
-  const columns = columnsAtLevel.filter((c) => distanceFt(c.at, p) <= SUPPORT_TOLERANCE_FT).sort((a, b) => (a.id < b.id ? -1 : 1));
-  if (columns.length > 0) return { kind: 'column', id: columns[0].id };
-  const hits: { m: FramingMember; interior: boolean; position_ft: number }[] = [];
-  for (const m of membersNear) {
+  // The column with the least id among those at p.
+  let column: { id: string } | null = null;
+  for (let i = 0; i < columnsAtLevel.length; i++) {
+    const c = columnsAtLevel[i];
+    if (distanceFt(c.at, p) <= SUPPORT_TOLERANCE_FT && (column === null || c.id < column.id)) column = c;
+  }
+  if (column !== null) return { kind: 'column', id: column.id };
+  // Interior before end, girder before beam, then least id; the first listed wins a full tie.
+  let best: FramingMember | null = null;
+  let bestInterior = false;
+  let bestPosition = 0;
+  for (let i = 0; i < membersNear.length; i++) {
+    const m = membersNear[i];
     if (m.id === self.id) continue;
     const { distanceFt: d, t } = projectPointOnSegment(p, m.start, m.end);
     if (d > SUPPORT_TOLERANCE_FT) continue;
     const position_ft = t * m.span_ft;
     const interior = position_ft > SUPPORT_TOLERANCE_FT && position_ft < m.span_ft - SUPPORT_TOLERANCE_FT;
-    hits.push({ m, interior, position_ft });
+    const better =
+      best === null ||
+      (interior !== bestInterior ? interior : m.member.kind !== best.member.kind ? m.member.kind === 'girder' : m.id < best.id);
+    if (better) {
+      best = m;
+      bestInterior = interior;
+      bestPosition = position_ft;
+    }
   }
-  if (hits.length === 0) return { kind: 'none' };
-  hits.sort((a, b) => {
-    if (a.interior !== b.interior) return a.interior ? -1 : 1;
-    if (a.m.member.kind !== b.m.member.kind) return a.m.member.kind === 'girder' ? -1 : 1;
-    return a.m.id < b.m.id ? -1 : a.m.id > b.m.id ? 1 : 0;
-  });
-  const best = hits[0];
-  return { kind: 'member', id: best.m.id, position_ft: best.position_ft };
+  if (best === null) return { kind: 'none' };
+  return { kind: 'member', id: best.id, position_ft: bestPosition };
 }
 
 /** The member a point lies on (within the tolerance): interior first, girders before beams, then by id. */
@@ -126,6 +135,8 @@ export function memberAtPoint(p: Point, candidates: readonly FramingMember[]): {
   }
   return best && { member: best.member, position_ft: best.position_ft };
 }
+
+const overlapsMember = (candidate: FramingMember, fm: FramingMember) => membersOverlapFt(candidate, fm) > SUPPORT_TOLERANCE_FT;
 
 /** Build the framing topology of a plan and list its problems, each naming the element. */
 export function buildFramingTopology(plan: Plan): FramingTopology {
@@ -160,12 +171,14 @@ export function buildFramingTopology(plan: Plan): FramingTopology {
     let index = indexByLevel.get(m.level);
     if (!index) indexByLevel.set(m.level, (index = new SegmentGridIndex<FramingMember>(INDEX_CELL_FT)));
     // Duplicates and overlaps: the later member (file order) is left out.
-    for (const other of index.inBox(
+    const other = index.firstInBox(
       [Math.min(m.start[0], m.end[0]) - SUPPORT_TOLERANCE_FT, Math.min(m.start[1], m.end[1]) - SUPPORT_TOLERANCE_FT],
       [Math.max(m.start[0], m.end[0]) + SUPPORT_TOLERANCE_FT, Math.max(m.start[1], m.end[1]) + SUPPORT_TOLERANCE_FT],
-    )) {
+      overlapsMember,
+      fm,
+    );
+    if (other !== null) {
       const overlap = membersOverlapFt(other, fm);
-      if (overlap <= SUPPORT_TOLERANCE_FT) continue;
       const duplicate =
         (distanceFt(other.start, fm.start) <= SUPPORT_TOLERANCE_FT && distanceFt(other.end, fm.end) <= SUPPORT_TOLERANCE_FT) ||
         (distanceFt(other.start, fm.end) <= SUPPORT_TOLERANCE_FT && distanceFt(other.end, fm.start) <= SUPPORT_TOLERANCE_FT);
@@ -196,7 +209,7 @@ export function buildFramingTopology(plan: Plan): FramingTopology {
     columnIndexByLevel.set(level, idx);
   }
 
-  const memberIndexInFile = new Map(plan.members.map((m, i) => [m.id, i]));
+  let memberIndexInFile: Map<string, number> | null = null; // only for problem paths
   for (const fm of members.values()) {
     const index = indexByLevel.get(fm.level)!;
     const columnIndex = columnIndexByLevel.get(fm.level);
@@ -210,7 +223,7 @@ export function buildFramingTopology(plan: Plan): FramingTopology {
         problems.push(
           planProblem('error', 'member-end-unsupported', `Member ${fm.id}: ${end} ${fmt(p)} lands on no column, member or wall at level ${fm.level}`, {
             elementId: fm.id,
-            path: `members[${memberIndexInFile.get(fm.id)}].${end}`,
+            path: `members[${(memberIndexInFile ??= new Map(plan.members.map((m, i) => [m.id, i]))).get(fm.id)}].${end}`,
           }),
         );
       }
@@ -234,24 +247,37 @@ export function buildFramingTopology(plan: Plan): FramingTopology {
 /** Kahn's algorithm on "carries": a member comes after every member that bears on it. Ties by id. */
 export function orderBySupport(members: Map<string, FramingMember>): { order: string[]; cyclic: Set<string> } {
   const pending = new Map<string, number>();
-  for (const fm of members.values()) pending.set(fm.id, fm.carries.length);
-  const ready = [...members.values()].filter((fm) => fm.carries.length === 0).map((fm) => fm.id).sort();
+  const ready: string[] = [];
+  for (const fm of members.values()) {
+    pending.set(fm.id, fm.carries.length);
+    if (fm.carries.length === 0) ready.push(fm.id);
+  }
+  ready.sort();
   const order: string[] = [];
   for (let i = 0; i < ready.length; i++) {
     const id = ready[i];
     order.push(id);
     const fm = members.get(id)!;
-    const supporters = new Set<string>();
-    for (const end of ['start', 'end'] as const) {
-      const s = fm.supports[end];
-      if (s.kind === 'member') {
-        const left = pending.get(s.id)! - 1;
-        pending.set(s.id, left);
-        if (left === 0) supporters.add(s.id);
-      }
+    // Supporters that became ready, distinct, in id order.
+    let first: string | null = null;
+    let second: string | null = null;
+    for (let e = 0; e < 2; e++) {
+      const s = e === 0 ? fm.supports.start : fm.supports.end;
+      if (s.kind !== 'member') continue;
+      const left = pending.get(s.id)! - 1;
+      pending.set(s.id, left);
+      if (left !== 0) continue;
+      if (first === null) first = s.id;
+      else if (s.id !== first) second = s.id;
     }
-    ready.push(...[...supporters].sort());
+    if (first !== null && second !== null && second < first) {
+      ready.push(second, first);
+    } else {
+      if (first !== null) ready.push(first);
+      if (second !== null) ready.push(second);
+    }
   }
+  if (order.length === members.size) return { order, cyclic: new Set() };
   const placed = new Set(order);
   const cyclic = new Set([...members.keys()].filter((id) => !placed.has(id)));
   return { order, cyclic };

@@ -18,7 +18,7 @@ import { buildDeckContexts, deckStripLoads, zonePressures, type DeckContext } fr
 import { placeLineLoads, placePointLoads, zeroCaseTotals, type CaseTotals } from '../loads/placed-loads.loads';
 import { kllTable4_7_1, liveLoadReductionFactor } from '../loads/live-load-reduction.loads';
 import { LOAD_CASES, mergeContiguousLoads, type AreaLoad, type LoadCase, type TakedownLoad } from './member-load.takedown';
-import { lastMomentAboutStartKipFt, resultantKip, simpleSpanReactions } from './simple-span-statics.takedown';
+import { lastResultant, resultantKip, simpleSpanReactions } from './simple-span-statics.takedown';
 import { deriveMemberBracing, type Bracing } from './member-bracing.takedown';
 import { stackColumns, type ColumnReceipt, type ColumnTakedown } from './column-stack.takedown';
 
@@ -135,7 +135,7 @@ class EndSums {
     for (let i = 0; i < loads.length; i++) {
       const l = loads[i];
       const t = resultantKip(l, spanFt);
-      const m = lastMomentAboutStartKipFt;
+      const m = lastResultant.momentAboutStartKipFt;
       switch (l.case) {
         case 'D': this.tD += t; this.mD += m; break;
         case 'L':
@@ -155,8 +155,8 @@ class EndSums {
       if (i === directCount) direct = this.tArea;
       const a = areas[i];
       const t = resultantKip(a, spanFt);
-      if (a.of === 'all') { this.tArea += t; this.mArea += lastMomentAboutStartKipFt; }
-      else { this.tRedArea += t; this.mRedArea += lastMomentAboutStartKipFt; }
+      if (a.of === 'all') { this.tArea += t; this.mArea += lastResultant.momentAboutStartKipFt; }
+      else { this.tRedArea += t; this.mRedArea += lastResultant.momentAboutStartKipFt; }
     }
     return directCount >= areas.length ? this.tArea : direct;
   }
@@ -336,7 +336,7 @@ export function runTakedown(plan: Plan, options: TakedownOptions = {}): Takedown
       const selfWeight: TakedownLoad = { case: 'D', kind: 'uniform', w_klf: plf / 1000, source: `self weight ${plf} plf` };
       loads.push(selfWeight);
       sums.tD += resultantKip(selfWeight, span);
-      sums.mD += lastMomentAboutStartKipFt;
+      sums.mD += lastResultant.momentAboutStartKipFt;
     }
     applied.D += (plf / 1000) * span;
     const reactions = sums.reactions(span, supportIdOf(fm.supports.start), supportIdOf(fm.supports.end));

@@ -6,23 +6,23 @@
 import type { LoadDistribution } from './member-load.takedown';
 
 /**
- * Moment about the start of the load last passed to `resultantKip` (kip-ft). A module slot
+ * Moment about the start of the load last passed to `resultantKip` (kip-ft). A shared slot
  * rather than a returned object: the takedown calls this for every load of every member.
  */
-export let lastMomentAboutStartKipFt = 0;
+export const lastResultant = { momentAboutStartKipFt: 0 };
 
-/** Resultant (kip) of one load on a span of spanFt; its moment about the start goes to `lastMomentAboutStartKipFt`. */
+/** Resultant (kip) of one load on a span of spanFt; its moment about the start goes to `lastResultant`. */
 export function resultantKip(load: LoadDistribution, spanFt: number): number {
   switch (load.kind) {
     case 'uniform': {
       const total = load.w_klf * spanFt;
-      lastMomentAboutStartKipFt = (load.w_klf * spanFt * spanFt) / 2;
+      lastResultant.momentAboutStartKipFt = (load.w_klf * spanFt * spanFt) / 2;
       return total;
     }
     case 'partial': {
       const length = load.to_ft - load.from_ft;
       const total = load.w_klf * length;
-      lastMomentAboutStartKipFt = total * (load.from_ft + length / 2);
+      lastResultant.momentAboutStartKipFt = total * (load.from_ft + length / 2);
       return total;
     }
     case 'linear': {
@@ -30,11 +30,11 @@ export function resultantKip(load: LoadDistribution, spanFt: number): number {
       const a = load.from_ft;
       const b = load.to_ft;
       const length = b - a;
-      lastMomentAboutStartKipFt = (length * (load.w1_klf * (2 * a + b) + load.w2_klf * (a + 2 * b))) / 6;
+      lastResultant.momentAboutStartKipFt = (length * (load.w1_klf * (2 * a + b) + load.w2_klf * (a + 2 * b))) / 6;
       return ((load.w1_klf + load.w2_klf) / 2) * length;
     }
     case 'point':
-      lastMomentAboutStartKipFt = load.P_kip * load.x_ft;
+      lastResultant.momentAboutStartKipFt = load.P_kip * load.x_ft;
       return load.P_kip;
   }
 }
@@ -42,7 +42,7 @@ export function resultantKip(load: LoadDistribution, spanFt: number): number {
 /** Resultant (kip) and its moment about the start (kip-ft) of one load on a span of spanFt. */
 export function loadResultant(load: LoadDistribution, spanFt: number): { total: number; momentAboutStart: number } {
   const total = resultantKip(load, spanFt);
-  return { total, momentAboutStart: lastMomentAboutStartKipFt };
+  return { total, momentAboutStart: lastResultant.momentAboutStartKipFt };
 }
 
 /** End reactions of a simple span, kip (up positive), from ΣM about each end. */
@@ -51,7 +51,7 @@ export function simpleSpanReactions(loads: readonly LoadDistribution[], spanFt: 
   let moment = 0;
   for (let i = 0; i < loads.length; i++) {
     total += resultantKip(loads[i], spanFt);
-    moment += lastMomentAboutStartKipFt;
+    moment += lastResultant.momentAboutStartKipFt;
   }
   const end = moment / spanFt;
   return { start: total - end, end, total };
