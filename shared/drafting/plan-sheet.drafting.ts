@@ -372,9 +372,27 @@ function deckSymbol(
       break;
     }
   }
-  // A third of the way across the deck, clear of the member labels at mid-length.
+  // Across the span: within the bay between the members that run along the span (girders),
+  // 30% of the way across it, clear of the mid-length labels of the members it spans to.
   const acrossValues = deck.polygon.map((p) => p[across]);
-  const acrossAt = c[across] - (Math.max(...acrossValues) - Math.min(...acrossValues)) * 0.18;
+  const acrossLo = Math.min(...acrossValues);
+  const acrossHi = Math.max(...acrossValues);
+  const lines = [
+    acrossLo,
+    acrossHi,
+    ...members.filter((m) => Math.abs(m.start[across] - m.end[across]) <= 0.01).map((m) => m.start[across]),
+  ]
+    .filter((v) => v >= acrossLo - 0.01 && v <= acrossHi + 0.01)
+    .sort((a, b) => a - b);
+  let bayLo = acrossLo;
+  let bayHi = acrossHi;
+  for (let i = 0; i + 1 < lines.length; i++) {
+    if (lines[i + 1] - lines[i] > 0.01 && c[across] >= lines[i] && c[across] <= lines[i + 1]) {
+      [bayLo, bayHi] = [lines[i], lines[i + 1]];
+      break;
+    }
+  }
+  const acrossAt = bayLo + (bayHi - bayLo) * 0.3;
   const at = along === 0 ? [mid, acrossAt] : [acrossAt, mid];
   const half = Math.min(0.55 * PT_PER_IN, (spanFt * k * 0.7) / 2);
   const x = sx(at[0]);
@@ -402,10 +420,12 @@ function deckSymbol(
   };
   head(x2, y2, dx, dy);
   head(x1, y1, -dx, -dy);
-  const label = zoneName ? `DECK · ${zoneName.toUpperCase()}` : 'DECK';
+  // Horizontal label: beside a vertical arrow (mid-bay, clear of member labels), above a horizontal one.
+  const name = zoneName ? zoneName.toUpperCase() : '';
+  const label = name ? `DECK · ${name.length > 26 ? `${name.slice(0, 25)}…` : name}` : 'DECK';
   out.push(along === 0
     ? { type: 'text', x, y: y - 4, text: label, size: 5.5, font: 'sans', anchor: 'middle' }
-    : { type: 'text', x: x - 4, y, text: label, size: 5.5, font: 'sans', anchor: 'middle', rotate: -90 });
+    : { type: 'text', x: x + 5, y: y + 2, text: label, size: 5.5, font: 'sans', anchor: 'start' });
 }
 
 function drawingTitle(out: SheetPrimitive[], levelName: string, scale: ArchitecturalScale, elevationFt: number | null, sheetName: string): void {

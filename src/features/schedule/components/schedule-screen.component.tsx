@@ -1,4 +1,4 @@
-import { useCallback, useState, type ReactNode } from 'react';
+import { useCallback, useRef, useState, type ReactNode } from 'react';
 import { Button, buttonClasses } from '../../../components/ui/button.ui';
 import { EmptyState } from '../../../components/ui/empty-state.ui';
 import { EngineerCaution } from '../../../components/ui/engineer-caution.ui';
@@ -40,19 +40,20 @@ export function ScheduleScreen({ schemes, mayEditMarks, renderSheet }: ScheduleS
   const renumber = useRenumberMarks(schemeId);
   const revision = schedule.data?.scheme.revision;
 
-  const saveMark = useCallback(
-    async (memberId: string, mark: string | null) => {
-      if (revision === undefined) return;
-      setNotice(null);
-      try {
-        await editMarks.mutateAsync({ revision, marks: [{ memberId, mark }] });
-        setNotice(mark ? `Mark ${mark} saved for member ${memberId}.` : `Member ${memberId} is marked by the rule again.`);
-      } catch (err) {
-        setNotice(isApiError(err) ? err.message : 'The mark could not be saved.');
-      }
-    },
-    [editMarks, revision],
-  );
+  // The table's columns hold this callback: keep it stable so they are not rebuilt on every render.
+  const latest = useRef({ editMarks, revision });
+  latest.current = { editMarks, revision };
+  const saveMark = useCallback(async (memberId: string, mark: string | null) => {
+    const { editMarks: edit, revision: rev } = latest.current;
+    if (rev === undefined) return;
+    setNotice(null);
+    try {
+      await edit.mutateAsync({ revision: rev, marks: [{ memberId, mark }] });
+      setNotice(mark ? `Mark ${mark} saved for member ${memberId}.` : `Member ${memberId} is marked by the rule again.`);
+    } catch (err) {
+      setNotice(isApiError(err) ? err.message : 'The mark could not be saved.');
+    }
+  }, []);
 
   if (schemes.length === 0) {
     return (

@@ -148,11 +148,12 @@ export function ScheduleTable({ rows, levels, basis, units, mayEditMarks, onSave
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [units, basis.method, mayEditMarks, onSaveMark, savingMark, showLr]);
 
-  const columnFilters: ColumnFiltersState = [
-    ...(levelFilter ? [{ id: 'level', value: levelFilter }] : []),
-    ...(kindFilter ? [{ id: 'kind', value: kindFilter }] : []),
-  ];
-  const grouping: GroupingState = groupBy === 'none' ? [] : [groupBy];
+  // Stable state objects: new arrays each render would recompute the row models every render.
+  const columnFilters = useMemo<ColumnFiltersState>(
+    () => [...(levelFilter ? [{ id: 'level', value: levelFilter }] : []), ...(kindFilter ? [{ id: 'kind', value: kindFilter }] : [])],
+    [levelFilter, kindFilter],
+  );
+  const grouping = useMemo<GroupingState>(() => (groupBy === 'none' ? [] : [groupBy]), [groupBy]);
 
   const table = useReactTable({
     data: rows,
@@ -172,6 +173,9 @@ export function ScheduleTable({ rows, levels, basis, units, mayEditMarks, onSave
     getGroupedRowModel: getGroupedRowModel(),
     getExpandedRowModel: getExpandedRowModel(),
     groupedColumnMode: false,
+    // Groups are always open; nothing for the table to reset when rows change.
+    autoResetExpanded: false,
+    autoResetPageIndex: false,
     // Every column sorts ascending on the first click (numbers too).
     sortDescFirst: false,
   });

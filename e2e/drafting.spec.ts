@@ -1,0 +1,63 @@
+import { readFileSync } from 'node:fs';
+import { expect, test } from '@playwright/test';
+import { SCREENSHOT_DIR, signInAs } from './support/auth.helpers';
+
+// The drafter's afternoon: open the demo project's Schedule, filter it, download the CSV and
+// the plan sheet, review the sheet on screen. Marks are the only thing a drafter may change.
+
+test.setTimeout(150_000);
+
+test('a drafter filters the schedule, downloads the CSV and the plan sheet, and edits nothing but marks', async ({ page }) => {
+  await signInAs(page, 'drafter@example.com');
+  await page.getByRole('table').getByRole('link').first().click();
+  await page.getByRole('link', { name: 'Schedule' }).click();
+
+  const table = page.getByRole('table', { name: 'Member schedule' });
+  await expect(table).toBeVisible({ timeout: 30_000 });
+  await expect(page.getByText('licensed engineer').first()).toBeVisible();
+  await expect(page.getByText(/composite design is not in Baywright yet/)).toBeVisible();
+  const count = page.getByText(/^\d+ of \d+ members$/);
+  const total = Number((await count.textContent())!.split(' of ')[1].split(' ')[0]);
+  expect(total).toBeGreaterThan(20);
+
+  // Filter: girders on the first level only.
+  const levelSelect = page.getByRole('combobox', { name: 'Level' });
+  const firstLevel = await levelSelect.locator('option').nth(1).getAttribute('value');
+  await levelSelect.selectOption(firstLevel!);
+  await page.getByRole('combobox', { name: 'Kind' }).selectOption('girder');
+  const shown = Number((await count.textContent())!.split(' of ')[0]);
+  expect(shown).toBeGreaterThan(0);
+  expect(shown).toBeLessThan(total);
+  await expect(table.locator('tbody tr[data-member]')).toHaveCount(shown);
+  await page.getByRole('combobox', { name: 'Group by' }).selectOption('kind');
+  await expect(page.getByTestId('schedule-group')).toHaveCount(1);
+  await page.screenshot({ path: `${SCREENSHOT_DIR}/schedule.png`, fullPage: true });
+
+  // Marks are the drafter's only edit; nothing to change geometry, loads, sizes or schemes.
+  await expect(page.getByRole('button', { name: /^Edit mark of member / }).first()).toBeVisible();
+  await expect(page.getByRole('button', { name: 'Renumber marks' })).toBeVisible();
+  await expect(page.getByRole('button', { name: /lock|design now|save plan|delete|new scheme/i })).toHaveCount(0);
+
+  // CSV download.
+  const [csv] = await Promise.all([page.waitForEvent('download'), page.getByRole('link', { name: 'Download CSV' }).click()]);
+  expect(csv.suggestedFilename()).toMatch(/^[a-z0-9-]+-schedule-r\d+\.csv$/);
+  const csvText = readFileSync((await csv.path())!, 'utf8');
+  expect(csvText.split('\r\n')[0]).toMatch(/^level,level_name,mark,member_id,kind,size,count_same_mark,span_ft,/);
+  expect(csvText.split('\r\n').filter(Boolean)).toHaveLength(total + 1);
+
+  // Plan sheet PDF download.
+  const [pdf] = await Promise.all([page.waitForEvent('download'), page.getByRole('link', { name: 'Download plan sheet (PDF)' }).click()]);
+  expect(pdf.suggestedFilename()).toMatch(/^[a-z0-9-]+-plan-sheet-r\d+\.pdf$/);
+  expect(readFileSync((await pdf.path())!).subarray(0, 5).toString('latin1')).toBe('%PDF-');
+
+  // The same sheet on screen.
+  await page.getByRole('button', { name: 'View plan sheet' }).click();
+  const sheet = page.getByTestId('plan-sheet-svg');
+  await expect(sheet).toBeVisible({ timeout: 30_000 });
+  await expect(sheet.getByText('CAUTION')).toBeVisible();
+  await sheet.screenshot({ path: `${SCREENSHOT_DIR}/plan-sheet-svg.png` });
+
+  // The Schemes tab offers the drafter no scheme writes either.
+  await page.getByRole('link', { name: 'Schemes' }).click();
+  await expect(page.getByRole('button', { name: /new scheme|import/i })).toHaveCount(0);
+});
