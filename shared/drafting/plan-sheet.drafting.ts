@@ -422,7 +422,11 @@ function deckSymbol(
   head(x1, y1, -dx, -dy);
   // Horizontal label: beside a vertical arrow (mid-bay, clear of member labels), above a horizontal one.
   const name = zoneName ? zoneName.toUpperCase() : '';
-  const label = name ? `DECK · ${name.length > 26 ? `${name.slice(0, 25)}…` : name}` : 'DECK';
+  // Room for the label: the rest of the bay beside a vertical arrow (less the girder's own
+  // label), or the span between supports above a horizontal one; the zone name is dropped when it does not fit.
+  const room = along === 0 ? spanFt * k * 0.9 : (bayHi - acrossAt) * k - 5 - 12;
+  const full = name ? `DECK · ${name.length > 26 ? `${name.slice(0, 25)}…` : name}` : 'DECK';
+  const label = estimateTextWidth(full, 5.5, 'sans') <= room ? full : 'DECK';
   out.push(along === 0
     ? { type: 'text', x, y: y - 4, text: label, size: 5.5, font: 'sans', anchor: 'middle' }
     : { type: 'text', x: x + 5, y: y + 2, text: label, size: 5.5, font: 'sans', anchor: 'start' });
