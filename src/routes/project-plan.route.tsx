@@ -15,6 +15,9 @@ import { PlanEditor } from '../features/editor/components/plan-editor.component'
 import { MemberSheet } from '../features/member-sheet/components/member-sheet.component';
 import { useCreateScheme } from '../features/schemes/api/create-scheme.api';
 import { useSchemes } from '../features/schemes/api/get-schemes.api';
+import { useUnderlays } from '../features/underlay/api/get-underlays.api';
+import { UnderlayImage } from '../features/underlay/components/underlay-image.component';
+import { UnderlayPanel } from '../features/underlay/components/underlay-panel.component';
 import { isApiError } from '../lib/api-client';
 import { canEditProjects } from '../lib/permissions';
 import { useUnits } from '../lib/units-context';
@@ -113,6 +116,8 @@ function SchemePlan({ projectId, schemeId, levelId, onLevel }: { projectId: stri
           initialLevelId={levelId}
           onLevelChange={onLevel}
           onSaved={onSaved}
+          renderUnderlayPanel={(level) => <UnderlayPanel schemeId={schemeId} levelId={level} canEdit={canEdit} units={system} />}
+          renderUnderlayImages={(level, view) => <LevelUnderlays schemeId={schemeId} levelId={level} view={view} />}
           renderDesignBasis={({ designBasis, canEdit: can, submit }) => <DesignBasisForm value={designBasis} canEdit={can} onSubmit={submit} units={system} />}
           renderMemberSheet={({ member, planMember, plan, result, canEdit: can, lockShape, setConstraints, close }) => (
             <MemberSheet
@@ -131,6 +136,12 @@ function SchemePlan({ projectId, schemeId, levelId, onLevel }: { projectId: stri
       </div>
     </>
   );
+}
+
+/** Konva nodes: the level's visible underlays beneath the plan. */
+function LevelUnderlays({ schemeId, levelId, view }: { schemeId: string; levelId: string; view: { scale: number; x: number; y: number } }) {
+  const underlays = useUnderlays(schemeId, levelId);
+  return <>{(underlays.data ?? []).map((u) => <UnderlayImage key={u.id} underlay={u} view={view} />)}</>;
 }
 
 function SchemeChooser({ projectId }: { projectId: string }) {

@@ -21,9 +21,8 @@ export const LABEL_MIN_PX = 80;
 
 /** Returns how many member labels (size and ratio) were drawn. */
 export function drawStatic(ctx: CanvasRenderingContext2D, plan: Plan, geo: StaticGeometry, view: View, theme: PlanTheme): number {
+  // The paper is the container's background, so an underlay can show beneath.
   ctx.save();
-  ctx.fillStyle = theme.paper;
-  ctx.fillRect(0, 0, view.width, view.height);
   const extents = gridExtents(plan, geo);
 
   // Plan-space line work.
@@ -33,7 +32,9 @@ export function drawStatic(ctx: CanvasRenderingContext2D, plan: Plan, geo: Stati
   for (const d of geo.decks) {
     tracePolygon(ctx, d.polygon);
     ctx.fillStyle = zoneTint(d.zoneIndex);
+    ctx.globalAlpha = 0.8;
     ctx.fill();
+    ctx.globalAlpha = 1;
     ctx.lineWidth = px;
     ctx.strokeStyle = theme.line;
     ctx.stroke();
@@ -202,16 +203,20 @@ function drawDeckArrow(ctx: CanvasRenderingContext2D, d: StaticGeometry['decks']
     ctx.closePath();
     ctx.fill();
   }
-  ctx.font = `10px ${SANS}`;
-  ctx.textAlign = 'center';
-  ctx.textBaseline = 'bottom';
-  if (lenPx > 60) {
-    // A halo in the zone's tint keeps the name legible over beams.
-    ctx.lineWidth = 4;
-    ctx.strokeStyle = zoneTint(d.zoneIndex);
-    ctx.strokeText(d.zoneName, 0, -7);
-    ctx.fillText(d.zoneName, 0, -7);
-  }
+  ctx.restore();
+  // The zone's name in the deck's north-west corner, clear of the member labels at midspans.
+  const [nx, ny] = toScreen(view, [Math.min(...xs), Math.max(...ys)]);
+  const widthPx = (Math.max(...xs) - Math.min(...xs)) * view.scale;
+  if (widthPx < 90) return;
+  ctx.save();
+  ctx.font = `italic 10px ${SANS}`;
+  ctx.textAlign = 'left';
+  ctx.textBaseline = 'top';
+  ctx.lineWidth = 4;
+  ctx.strokeStyle = zoneTint(d.zoneIndex);
+  ctx.fillStyle = theme.inkSoft;
+  ctx.strokeText(d.zoneName, nx + 8, ny + 7);
+  ctx.fillText(d.zoneName, nx + 8, ny + 7);
   ctx.restore();
 }
 

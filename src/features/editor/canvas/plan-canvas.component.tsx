@@ -14,11 +14,15 @@ import { pickAt } from '../tools/hit-test.tool';
 import { memberStatus } from '../members/member-status';
 import { toPlan } from './view-transform';
 
+export type PlanViewArgs = { scale: number; x: number; y: number };
+
 type Props = {
   store: EditorStore;
   design: LiveDesign;
   controller: ToolController;
   label: string;
+  /** Konva nodes drawn under the plan (underlay images), given the view. */
+  renderUnderlay?: (view: PlanViewArgs) => React.ReactNode;
 };
 
 /**
@@ -27,7 +31,7 @@ type Props = {
  * layer for selection, drafts and handles. Pointer input is handled on the container and
  * hit-tested with plain geometry, so neither layer needs Konva's hit graph.
  */
-export function PlanCanvas({ store, design, controller, label }: Props) {
+export function PlanCanvas({ store, design, controller, label, renderUnderlay }: Props) {
   const containerRef = useRef<HTMLDivElement>(null);
   const staticLayer = useRef<Konva.Layer>(null);
   const overlayLayer = useRef<Konva.Layer>(null);
@@ -140,6 +144,11 @@ export function PlanCanvas({ store, design, controller, label }: Props) {
       onContextMenu={(e) => e.preventDefault()}
     >
       <Stage width={size.width} height={size.height} listening={false}>
+        {renderUnderlay ? (
+          <Layer listening={false}>
+            <UnderlayNodes store={store} render={renderUnderlay} />
+          </Layer>
+        ) : null}
         <Layer ref={staticLayer} listening={false}>
           <Shape
             listening={false}
@@ -186,6 +195,14 @@ export function PlanCanvas({ store, design, controller, label }: Props) {
       ) : null}
     </div>
   );
+}
+
+/** Re-renders with the view (only the underlay does; the plan layers redraw without React). */
+function UnderlayNodes({ store, render }: { store: EditorStore; render: (view: PlanViewArgs) => React.ReactNode }) {
+  const scale = useStore(store, (s) => s.view.scale);
+  const x = useStore(store, (s) => s.view.x);
+  const y = useStore(store, (s) => s.view.y);
+  return <>{render({ scale, x, y })}</>;
 }
 
 function ScaleIndicator({ store }: { store: EditorStore }) {

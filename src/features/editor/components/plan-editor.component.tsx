@@ -6,7 +6,7 @@ import { Button } from '../../../components/ui/button.ui';
 import { EngineerCaution } from '../../../components/ui/engineer-caution.ui';
 import { ACTIONS, actionForKey, dispatch, keyOf, type ActionId } from '../actions/action-registry';
 import { savePlan } from '../api/save-plan.api';
-import { PlanCanvas } from '../canvas/plan-canvas.component';
+import { PlanCanvas, type PlanViewArgs } from '../canvas/plan-canvas.component';
 import { LiveDesign } from '../design/live-design';
 import { MemberList } from '../members/member-list.component';
 import { createEditorStore, type EditorStore } from '../store/editor.store';
@@ -48,8 +48,10 @@ export interface PlanEditorProps {
   renderMemberSheet?: (args: MemberSheetSlotArgs) => ReactNode;
   /** The Design basis form (composed by the page). */
   renderDesignBasis?: (args: DesignBasisSlotArgs) => ReactNode;
-  /** Underlay controls (composed by the page). */
-  underlay?: ReactNode;
+  /** Underlay controls for the level shown (composed by the page). */
+  renderUnderlayPanel?: (levelId: string) => ReactNode;
+  /** Underlay images (Konva nodes) for the level shown, under the plan. */
+  renderUnderlayImages?: (levelId: string, view: PlanViewArgs) => ReactNode;
   /** Save function (tests pass their own); defaults to PUT /api/schemes/:id/plan. */
   save?: typeof savePlan;
 }
@@ -87,6 +89,7 @@ export function PlanEditor(props: PlanEditorProps) {
   const designState = useSyncExternalStore(design.subscribe, design.getSnapshot);
   const [recovered, setRecovered] = useState(() => autosave.readLocalDraft());
   const [showBasis, setShowBasis] = useState(false);
+  const [showUnderlay, setShowUnderlay] = useState(false);
 
   // Design after every change of the plan; publish the edit → sizes time for tests and the status line.
   useEffect(() => {
@@ -166,6 +169,11 @@ export function PlanEditor(props: PlanEditorProps) {
           <ActionButton store={store} id="view.zoomOut" text="−" />
           <ActionButton store={store} id="view.zoomIn" text="+" />
           <ActionButton store={store} id="view.fit" />
+          {props.renderUnderlayPanel ? (
+            <Button variant="quiet" className="h-8 text-xs" aria-expanded={showUnderlay} onClick={() => setShowUnderlay((v) => !v)}>
+              Underlay
+            </Button>
+          ) : null}
           {props.renderDesignBasis ? (
             <Button variant="quiet" className="h-8 text-xs" aria-expanded={showBasis} onClick={() => setShowBasis((v) => !v)}>
               Design basis
@@ -191,11 +199,17 @@ export function PlanEditor(props: PlanEditorProps) {
         </div>
       ) : null}
       {canEdit ? <ToolOptionsBar store={store} /> : null}
-      {props.underlay ? <div className="border-b border-ink bg-paper px-3 py-1.5">{props.underlay}</div> : null}
+      {showUnderlay && props.renderUnderlayPanel ? <div className="border-b border-ink bg-paper px-4 py-3">{props.renderUnderlayPanel(levelId)}</div> : null}
       <div className="flex min-h-0" style={{ height: 'min(72vh, 760px)' }}>
         {canEdit ? <PlanToolbar store={store} /> : null}
         <div className="relative min-w-0 flex-1">
-          <PlanCanvas store={store} design={design} controller={controller} label={`Plan of ${levelName}, ${props.schemeName}`} />
+          <PlanCanvas
+            store={store}
+            design={design}
+            controller={controller}
+            label={`Plan of ${levelName}, ${props.schemeName}`}
+            renderUnderlay={props.renderUnderlayImages ? (view) => props.renderUnderlayImages!(levelId, view) : undefined}
+          />
         </div>
         <aside className="flex w-[26rem] shrink-0 flex-col border-l border-ink bg-paper-raised" aria-label="Members and selection">
           <MemberList store={store} design={design} />
