@@ -16,7 +16,7 @@ import { MemberInputError } from '../sizing/member-input.validation';
 import type { MemberDesignInput, MemberDesignResult } from '../sizing/member-design.types';
 import type { MemberLoad } from '../analysis/member-load.types';
 import type { TakedownLoad } from '../takedown/member-load.takedown';
-import { buildFramingTopology, type FramingTopology } from '../geometry/framing-topology.geometry';
+import { planGeometry, type PlanGeometry, type PlanGeometryMemo } from './plan-geometry-memo.scheme';
 import { lockedShapeWeightPlf, reducedLiveKip, runTakedown, type EndReaction, type MemberTakedown, type TakedownResult } from '../takedown/gravity-takedown.takedown';
 import type { Bracing } from '../takedown/member-bracing.takedown';
 import { assignMarks } from './member-marks.scheme';
@@ -296,10 +296,14 @@ class DesignTable {
   }
 }
 
-/** Design memo carried (non-enumerable, so never serialised) on each result. */
+/** Memos carried (non-enumerable, so never serialised) on each result, for the next re-design. */
 const CACHE = Symbol('baywright.designCache');
-function cacheOf(result: SchemeResult | undefined): DesignTable | null {
-  return (result as unknown as { [CACHE]?: DesignTable } | undefined)?.[CACHE] ?? null;
+interface SchemeMemo {
+  designs: DesignTable;
+  geometry: PlanGeometryMemo;
+}
+function cacheOf(result: SchemeResult | undefined): SchemeMemo | null {
+  return (result as unknown as { [CACHE]?: SchemeMemo } | undefined)?.[CACHE] ?? null;
 }
 
 /** Group key: level, kind, span, bracing and the layout (case, kind, position) of the loads. */
@@ -348,20 +352,21 @@ class DesignPass {
     return 'error' in result ? lockedShapeWeightPlf(mt.member) : result.weight_plf;
   };
 
-  run(topology: FramingTopology): TakedownResult {
-    return runTakedown(this.plan, { topology, selfWeight: this.selfWeight });
+  run(geometry: PlanGeometry): TakedownResult {
+    return runTakedown(this.plan, { topology: geometry.topology, deckLoads: geometry.deckLoads, selfWeight: this.selfWeight });
   }
 }
 
 export function designScheme(plan: Plan, options: SchemeOptions = {}): SchemeResult {
-  const topology = buildFramingTopology(plan);
+  const memo = cacheOf(options.previous);
+  const geometry = planGeometry(plan, memo?.geometry ?? null);
   // Read from this run's memo, then the previous one; keep only designs this run used.
   const table = new DesignTable();
-  const previous = cacheOf(options.previous);
+  const previous = memo?.designs ?? null;
 
   const forced = new Map<string, string>();
   let pass = new DesignPass(plan, table, previous, forced);
-  let takedown = pass.run(topology);
+  let takedown = pass.run(geometry);
 
   if (options.groupIdentical) {
     // Fixed point: a group's size changes its members' self weight, hence their supporters' loads.
@@ -397,12 +402,13 @@ export function designScheme(plan: Plan, options: SchemeOptions = {}): SchemeRes
       forced.clear();
       nextForced.forEach((v, k) => forced.set(k, v));
       pass = new DesignPass(plan, table, previous, forced);
-      takedown = pass.run(topology);
+      takedown = pass.run(geometry);
     }
   }
 
   const result = buildSchemeResult(plan, takedown, pass.designs, pass.loadsOf);
-  Object.defineProperty(result, CACHE, { value: table, enumerable: false });
+  const next: SchemeMemo = { designs: table, geometry };
+  Object.defineProperty(result, CACHE, { value: next, enumerable: false });
   return result;
 }
 

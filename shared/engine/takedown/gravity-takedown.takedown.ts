@@ -73,6 +73,38 @@ export interface TakedownOptions {
   selfWeight?: (member: MemberTakedown) => number;
   /** Reuse a topology already built for this plan. */
   topology?: FramingTopology;
+  /** Reuse deck loads already prepared for this plan and topology (see prepareDeckLoads). */
+  deckLoads?: PreparedDeckLoads;
+}
+
+/**
+ * Everything the takedown draws from the decks alone: their contexts and problems, and each
+ * member's strip loads and tributary area (merged). A pure function of the topology, decks,
+ * zones, openings and levels, so a re-design that changes none of them can reuse it; the
+ * load objects are never mutated, the lists are copied before use.
+ */
+export interface PreparedDeckLoads {
+  decks: DeckContext[];
+  problems: PlanProblem[];
+  strips: Map<string, { loads: TakedownLoad[]; areas: AreaLoad[] }>;
+}
+
+const sameLoadKind = (a: TakedownLoad, b: TakedownLoad) => a.case === b.case && a.source === b.source && !!a.reducible === !!b.reducible;
+const sameAreaKind = (a: AreaLoad, b: AreaLoad) => a.of === b.of;
+
+export function prepareDeckLoads(plan: Plan, topology: FramingTopology): PreparedDeckLoads {
+  const { decks, problems } = buildDeckContexts(plan, topology);
+  const strips = new Map<string, { loads: TakedownLoad[]; areas: AreaLoad[] }>();
+  for (const id of topology.members.keys()) strips.set(id, { loads: [], areas: [] });
+  const memberSink = (id: string, load: TakedownLoad) => void strips.get(id)!.loads.push(load);
+  const areaSink = (id: string, load: AreaLoad) => void strips.get(id)!.areas.push(load);
+  for (const ctx of decks) deckStripLoads(ctx, memberSink, areaSink);
+  for (const [id, g] of strips) {
+    const span = topology.members.get(id)!.span_ft;
+    g.loads = mergeContiguousLoads(g.loads, span, sameLoadKind);
+    g.areas = mergeContiguousLoads(g.areas, span, sameAreaKind);
+  }
+  return { decks, problems, strips };
 }
 
 export interface EquilibriumCase {
@@ -232,8 +264,6 @@ interface Gathered {
   deckAreaCount: number;
 }
 
-const sameLoadKind = (a: TakedownLoad, b: TakedownLoad) => a.case === b.case && a.source === b.source && !!a.reducible === !!b.reducible;
-const sameAreaKind = (a: AreaLoad, b: AreaLoad) => a.of === b.of;
 const ascending = (a: number, b: number) => a - b;
 
 /** Positions where other members frame in, strictly inside the span (as listed, and distinct ascending). */
@@ -252,27 +282,19 @@ const NO_COVERAGE: [number, number][] = [];
 export function runTakedown(plan: Plan, options: TakedownOptions = {}): TakedownResult {
   const topology = options.topology ?? buildFramingTopology(plan);
   const problems: PlanProblem[] = [...topology.problems];
-  const { decks, problems: deckProblems } = buildDeckContexts(plan, topology);
-  problems.push(...deckProblems);
+  const prepared = options.deckLoads ?? prepareDeckLoads(plan, topology);
+  const decks = prepared.decks;
+  problems.push(...prepared.problems);
 
   const gathered = new Map<string, Gathered>();
-  for (const id of topology.members.keys()) gathered.set(id, { loads: [], areas: [], deckAreaCount: 0 });
+  for (const [id, strip] of prepared.strips) gathered.set(id, { loads: strip.loads.slice(), areas: strip.areas.slice(), deckAreaCount: strip.areas.length });
   const receipts: ColumnReceipt[] = [];
-  const memberSink = (id: string, load: TakedownLoad) => void gathered.get(id)!.loads.push(load);
-  const areaSink = (id: string, load: AreaLoad) => void gathered.get(id)!.areas.push(load);
   const sinks = {
-    member: memberSink,
+    member: (id: string, load: TakedownLoad) => void gathered.get(id)!.loads.push(load),
     column: (columnId: string, level: string, c: LoadCase, kip: number, source: string) =>
       receipts.push({ columnId, level, D_kip: c === 'D' ? kip : 0, L_kip: c === 'L' ? kip : 0, Lreducible_kip: 0, Lr_kip: c === 'Lr' ? kip : 0, S_kip: c === 'S' ? kip : 0, reducibleArea_ft2: 0, area_ft2: 0, cantileverSlab: false, source }),
   };
 
-  for (const ctx of decks) deckStripLoads(ctx, memberSink, areaSink);
-  for (const [id, g] of gathered) {
-    const span = topology.members.get(id)!.span_ft;
-    g.loads = mergeContiguousLoads(g.loads, span, sameLoadKind);
-    g.areas = mergeContiguousLoads(g.areas, span, sameAreaKind);
-    g.deckAreaCount = g.areas.length;
-  }
   const points = placePointLoads(plan, topology, decks, sinks);
   const lines = placeLineLoads(plan, topology, decks, sinks);
   problems.push(...points.problems, ...lines.problems);
