@@ -57,7 +57,8 @@ export function leverRuleSupporters(ctx: DeckContext, u: number, v: number): { l
 /** Fractions of a load at u going to left and right (lever rule); a lone side takes it all. */
 export function leverFractions(left: DeckSupporter | null, right: DeckSupporter | null, u: number): { id: string; fraction: number }[] {
   if (left && right && right.u_ft - left.u_ft > 1e-9) {
-    const fLeft = (right.u_ft - u) / (right.u_ft - left.u_ft);
+    // Clamped: a piece end that rounds a hair outside the pair would otherwise give a -1e-16 share.
+    const fLeft = Math.min(1, Math.max(0, (right.u_ft - u) / (right.u_ft - left.u_ft)));
     return [
       { id: left.id, fraction: fLeft },
       { id: right.id, fraction: 1 - fLeft },
