@@ -1,7 +1,7 @@
 import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { act, fireEvent, screen, waitFor, within } from '@testing-library/react';
-import { describe, expect, it, vi } from 'vitest';
+import { beforeEach, describe, expect, it, vi } from 'vitest';
 import { PlanEditor } from '../../src/features/editor/components/plan-editor.component';
 import type { SavePlanOutcome } from '../../src/features/editor/api/save-plan.api';
 import { renderWithProviders, testSession } from '../../src/testing/test-utils';
@@ -21,6 +21,9 @@ function renderEditor(canEdit: boolean, save = vi.fn(async (): Promise<SavePlanO
 }
 
 describe('Plan editor', () => {
+  // Unsaved drafts are kept in localStorage; each test starts without one.
+  beforeEach(() => localStorage.clear());
+
   it('when an engineer opens a plan, then every tool is offered with its shortcut and the members are sized in the table', async () => {
     renderEditor(true);
     const tools = screen.getByRole('toolbar', { name: 'Plan tools' });
@@ -50,6 +53,18 @@ describe('Plan editor', () => {
     expect(screen.getByLabelText('Max spacing, ft')).toHaveValue('10');
   });
 
+  it('when "Delete selected" is chosen from the Plan menu, then it does what the Delete key does', async () => {
+    renderEditor(true);
+    fireEvent.click(screen.getAllByRole('button', { name: /^Select / })[0]);
+    fireEvent.click(screen.getByRole('button', { name: 'Plan menu ▾' }));
+    const menu = screen.getByRole('menu', { name: 'Plan menu' });
+    expect(within(menu).getByRole('menuitem', { name: /Delete selected/ })).toHaveTextContent('Del');
+    fireEvent.click(within(menu).getByRole('menuitem', { name: /Delete selected/ }));
+    expect(within(screen.getByRole('table')).getAllByRole('row')).toHaveLength(11);
+    fireEvent.keyDown(screen.getByTestId('plan-canvas'), { key: 'z', ctrlKey: true });
+    expect(within(screen.getByRole('table')).getAllByRole('row')).toHaveLength(12);
+  });
+
   it('when a row of the member list is chosen, then that member is the selection', async () => {
     renderEditor(true);
     await waitFor(() => expect(screen.getByTestId('design-status')).toHaveTextContent('11 members sized'), { timeout: 20_000 });
@@ -57,6 +72,17 @@ describe('Plan editor', () => {
     fireEvent.click(first);
     expect(first).toHaveAttribute('aria-pressed', 'true');
     expect(screen.getAllByRole('button', { name: /^Select / }).filter((b) => b.getAttribute('aria-pressed') === 'true')).toHaveLength(1);
+  });
+
+  it('when an unsaved draft was kept on this device, then the editor offers to restore it', async () => {
+    const plan = twoBay();
+    const kept = { ...plan, members: plan.members.slice(2) };
+    localStorage.setItem('baywright.plan-draft.s1', JSON.stringify({ baseRevision: 1, plan: kept, keptAt: '2026-12-01T10:00:00Z' }));
+    renderEditor(true);
+    const alert = screen.getByRole('alert');
+    expect(alert).toHaveTextContent('were kept on this device but not saved');
+    fireEvent.click(within(alert).getByRole('button', { name: 'Restore them' }));
+    expect(within(screen.getByRole('table')).getAllByRole('row')).toHaveLength(10);
   });
 
   it('when a drafter opens a plan, then no tools, undo or tool options are shown', () => {

@@ -13,6 +13,7 @@ import { createEditorStore, type EditorStore } from '../store/editor.store';
 import { PlanAutosave, type AutosaveSnapshot } from '../sync/plan-autosave';
 import { createToolController } from '../tools/tool-controller';
 import { ConflictBanner } from './conflict-banner.component';
+import { EditMenu } from './edit-menu.component';
 import { LevelBar } from './level-bar.component';
 import { PlanToolbar } from './plan-toolbar.component';
 import { SelectionInspector } from './selection-inspector.component';
@@ -169,6 +170,7 @@ export function PlanEditor(props: PlanEditorProps) {
           <ActionButton store={store} id="view.zoomOut" text="−" />
           <ActionButton store={store} id="view.zoomIn" text="+" />
           <ActionButton store={store} id="view.fit" />
+          <EditMenu store={store} canEdit={canEdit} />
           {props.renderUnderlayPanel ? (
             <Button variant="quiet" className="h-8 text-xs" aria-expanded={showUnderlay} onClick={() => setShowUnderlay((v) => !v)}>
               Underlay

@@ -1,4 +1,4 @@
-import { useEffect, useMemo, useRef, useSyncExternalStore } from 'react';
+import { memo, useEffect, useMemo, useRef, useSyncExternalStore } from 'react';
 import { useStore } from 'zustand';
 import { dispatch } from '../actions/action-registry';
 import type { LiveDesign } from '../design/live-design';
@@ -74,51 +74,64 @@ export function MemberList({ store, design }: { store: EditorStore; design: Live
                 </td>
               </tr>
             ) : null}
-            {rows.map((r) => {
-              const isSelected = selected.has(r.id);
-              const s = r.status;
-              return (
-                <tr
-                  key={r.id}
-                  data-member-id={r.id}
-                  data-selected={isSelected || undefined}
-                  className={`cursor-pointer border-b border-line/60 ${isSelected ? 'bg-accent-wash' : 'hover:bg-paper-sunk'}`}
-                  onClick={(e) => dispatch(store, 'selection.set', { ids: [r.id], add: e.shiftKey })}
-                >
-                  <td className="px-2 py-1">
-                    <button
-                      type="button"
-                      aria-pressed={isSelected}
-                      className={`figures font-mono ${isSelected ? 'font-semibold text-accent' : 'text-ink'}`}
-                      aria-label={`Select ${s.mark || r.id}`}
-                      onClick={(e) => {
-                        e.stopPropagation();
-                        dispatch(store, 'selection.set', { ids: [r.id], add: e.shiftKey });
-                      }}
-                    >
-                      {s.mark || r.id}
-                    </button>
-                  </td>
-                  <td className="px-2 py-1 whitespace-nowrap text-ink-soft">
-                    {r.kind} <span className="figures font-mono">{r.span_ft.toFixed(1)}′</span>
-                  </td>
-                  <td className="figures px-2 py-1 font-mono">{s.size}</td>
-                  <td className="px-2 py-1 text-right">
-                    {s.ratio === null ? (
-                      <span className="text-ink-faint">—</span>
-                    ) : (
-                      <span className="figures inline-block rounded-[3px] px-1.5 font-mono" style={{ backgroundColor: s.util.colour, color: s.util.inkColour }}>
-                        {s.util.printed}
-                      </span>
-                    )}
-                  </td>
-                  <td className={`px-2 py-1 ${s.state === 'fails' || s.state === 'not-designed' ? 'text-danger' : 'text-ink-soft'}`}>{s.words}</td>
-                </tr>
-              );
-            })}
+            {rows.map((r) => (
+              <MemberRow key={r.id} row={r} selected={selected.has(r.id)} store={store} />
+            ))}
           </tbody>
         </table>
       </div>
     </section>
   );
 }
+
+/** Same printed content: a new design that changes nothing in a row leaves the row alone. */
+function sameRow(a: { row: Row; selected: boolean; store: EditorStore }, b: { row: Row; selected: boolean; store: EditorStore }): boolean {
+  const x = a.row.status;
+  const y = b.row.status;
+  return (
+    a.selected === b.selected && a.store === b.store && a.row.id === b.row.id && a.row.kind === b.row.kind && a.row.span_ft === b.row.span_ft &&
+    x.mark === y.mark && x.size === y.size && x.util.printed === y.util.printed && x.util.band === y.util.band && x.words === y.words && x.state === y.state
+  );
+}
+
+/** One row; memoised so a selection change or a re-design re-renders only the rows that change. */
+const MemberRow = memo(function MemberRow({ row: r, selected: isSelected, store }: { row: Row; selected: boolean; store: EditorStore }) {
+  const s = r.status;
+  return (
+    <tr
+      data-member-id={r.id}
+      data-selected={isSelected || undefined}
+      className={`cursor-pointer border-b border-line/60 ${isSelected ? 'bg-accent-wash' : 'hover:bg-paper-sunk'}`}
+      onClick={(e) => dispatch(store, 'selection.set', { ids: [r.id], add: e.shiftKey })}
+    >
+      <td className="px-2 py-1">
+        <button
+          type="button"
+          aria-pressed={isSelected}
+          className={`figures font-mono ${isSelected ? 'font-semibold text-accent' : 'text-ink'}`}
+          aria-label={`Select ${s.mark || r.id}`}
+          onClick={(e) => {
+            e.stopPropagation();
+            dispatch(store, 'selection.set', { ids: [r.id], add: e.shiftKey });
+          }}
+        >
+          {s.mark || r.id}
+        </button>
+      </td>
+      <td className="px-2 py-1 whitespace-nowrap text-ink-soft">
+        {r.kind} <span className="figures font-mono">{r.span_ft.toFixed(1)}′</span>
+      </td>
+      <td className="figures px-2 py-1 font-mono">{s.size}</td>
+      <td className="px-2 py-1 text-right">
+        {s.ratio === null ? (
+          <span className="text-ink-faint">—</span>
+        ) : (
+          <span className="figures inline-block rounded-[3px] px-1.5 font-mono" style={{ backgroundColor: s.util.colour, color: s.util.inkColour }}>
+            {s.util.printed}
+          </span>
+        )}
+      </td>
+      <td className={`px-2 py-1 ${s.state === 'fails' || s.state === 'not-designed' ? 'text-danger' : 'text-ink-soft'}`}>{s.words}</td>
+    </tr>
+  );
+}, sameRow);
