@@ -320,9 +320,10 @@ function drawMemberLabels(ctx: CanvasRenderingContext2D, geo: StaticGeometry, vi
     if (angle <= -Math.PI / 2 - 1e-6) angle += Math.PI;
     const ratio = s.ratio === null ? '' : ` ${s.util.printed}`;
     let chip = s.state === 'designing' ? '…' : `${s.size}${ratio}`;
-    if (s.shortReason && lengthPx > 220) chip += ` · ${s.state === 'fails' ? 'over: ' : ''}${s.shortReason}`;
+    if (s.shortReason && lengthPx > 220) chip += ` · ${s.state === 'fails' ? 'over: ' : s.state === 'problem' ? 'problem: ' : ''}${s.shortReason}`;
     else if (s.state === 'not-designed') chip = `not designed`;
     else if (s.state === 'fails') chip += ' over';
+    else if (s.state === 'problem') chip += ' problem';
     const mark = s.mark;
     const chipW = ctx.measureText(chip).width + 8;
     const markW = mark ? ctx.measureText(mark).width + 5 : 0;

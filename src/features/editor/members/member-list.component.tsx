@@ -41,6 +41,7 @@ export function MemberList({ store, design }: { store: EditorStore; design: Live
 
   const over = rows.filter((r) => r.status.state === 'fails').length;
   const notDesigned = rows.filter((r) => r.status.state === 'not-designed').length;
+  const flagged = rows.filter((r) => r.status.state === 'problem').length;
 
   return (
     <section aria-labelledby="member-list-heading" className="flex min-h-0 flex-col">
@@ -52,6 +53,7 @@ export function MemberList({ store, design }: { store: EditorStore; design: Live
           {rows.length} on this level
           {over ? <span className="text-danger"> · {over} over</span> : null}
           {notDesigned ? <span className="text-danger"> · {notDesigned} not designed</span> : null}
+          {flagged ? <span className="text-danger"> · {flagged} with problems</span> : null}
           {snap.pending ? ' · designing…' : ''}
         </p>
       </div>
@@ -131,7 +133,7 @@ const MemberRow = memo(function MemberRow({ row: r, selected: isSelected, store 
           </span>
         )}
       </td>
-      <td className={`px-2 py-1 ${s.state === 'fails' || s.state === 'not-designed' ? 'text-danger' : 'text-ink-soft'}`}>{s.words}</td>
+      <td className={`px-2 py-1 ${s.state === 'fails' || s.state === 'not-designed' || s.state === 'problem' ? 'text-danger' : 'text-ink-soft'}`}>{s.words}</td>
     </tr>
   );
 }, sameRow);

@@ -7,11 +7,12 @@ export interface MemberStatus {
   size: string;
   ratio: number | null;
   util: Utilisation;
-  /** Plain words: "Passes — flexure governs", "Over — live-load deflection governs", "Not designed — …". */
+  /** Plain words: "Passes — flexure governs", "Over — live-load deflection governs", "Not designed — …", "Problem — …". */
   words: string;
   /** Short reason for the canvas label when the member fails or was not designed. */
   shortReason: string | null;
-  state: 'designing' | 'passes' | 'fails' | 'not-designed';
+  /** 'problem': sized, but the engine reports an error about it (e.g. an end that lands on nothing). */
+  state: 'designing' | 'passes' | 'fails' | 'not-designed' | 'problem';
 }
 
 const GOVERNING_WORDS: Record<string, string> = {
@@ -36,6 +37,11 @@ export function memberStatus(id: string, member: SchemeMember | undefined, resul
   }
   const ratio = member.ratio ?? member.design.ratio;
   const util = utilisation(ratio);
+  // A size that "passes" on a member the engine flags (no support at an end, …) is not a pass.
+  if (problem && problem.code !== 'member-fails') {
+    const reason = cleanReason(problem.message, id);
+    return { mark: member.mark, size: member.shape ?? '—', ratio, util, words: `Problem — ${reason}`, shortReason: shorten(reason), state: 'problem' };
+  }
   if (member.passes) {
     return { mark: member.mark, size: member.shape ?? '—', ratio, util, words: `Passes — ${governingWords(member.governing)} governs`, shortReason: null, state: 'passes' };
   }
