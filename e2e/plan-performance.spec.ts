@@ -1,23 +1,9 @@
 import { mkdirSync, writeFileSync } from 'node:fs';
-import { expect, test, type Page } from '@playwright/test';
+import { expect, test } from '@playwright/test';
 import { signInAs } from './support/auth.helpers';
-import { clickPlan, generatedPlan, planCanvas } from './support/plan-canvas.helpers';
+import { clickPlan, generatedPlan, planCanvas, schemeWithPlan } from './support/plan-canvas.helpers';
 
 const PERF_DIR = 'artifacts/perf';
-
-/** A scheme in the demo project holding this plan, made through the real API; returns its Plan URL. */
-async function schemeWithPlan(page: Page, plan: ReturnType<typeof generatedPlan>, name: string): Promise<string> {
-  const origin = new URL(page.url()).origin;
-  const headers = { Origin: origin };
-  const projects = (await (await page.request.get('/api/projects')).json()) as { projects: { id: string | number }[] };
-  const projectId = projects.projects[0].id;
-  const created = await page.request.post(`/api/projects/${projectId}/schemes`, { data: { name }, headers });
-  expect(created.status()).toBe(201);
-  const scheme = ((await created.json()) as { scheme: { id: string | number; revision: number } }).scheme;
-  const put = await page.request.put(`/api/schemes/${scheme.id}/plan`, { data: { revision: scheme.revision, plan }, headers });
-  expect(put.status(), await put.text()).toBe(200);
-  return `/projects/${projectId}/plan?scheme=${scheme.id}&level=L2`;
-}
 
 function percentile(sorted: number[], p: number): number {
   if (sorted.length === 0) return NaN;

@@ -1,5 +1,18 @@
 import { expect, type Locator, type Page } from '@playwright/test';
 
+/** A scheme in the demo project holding this plan, made through the real API; returns its Plan URL. */
+export async function schemeWithPlan(page: Page, plan: unknown, name: string): Promise<string> {
+  const headers = { Origin: new URL(page.url()).origin };
+  const projects = (await (await page.request.get('/api/projects')).json()) as { projects: { id: string | number }[] };
+  const projectId = projects.projects[0].id;
+  const created = await page.request.post(`/api/projects/${projectId}/schemes`, { data: { name }, headers });
+  expect(created.status()).toBe(201);
+  const scheme = ((await created.json()) as { scheme: { id: string | number; revision: number } }).scheme;
+  const put = await page.request.put(`/api/schemes/${scheme.id}/plan`, { data: { revision: scheme.revision, plan }, headers });
+  expect(put.status(), await put.text()).toBe(200);
+  return `/projects/${projectId}/plan?scheme=${scheme.id}&level=L2`;
+}
+
 /** The Plan canvas and a plan-feet → page-pixel converter read from its data attributes. */
 export async function planCanvas(page: Page, timeout = 15_000) {
   const canvas = page.getByTestId('plan-canvas');
