@@ -45,7 +45,7 @@ const toolAction = (tool: ToolId, label: string, key: string, edits = true) =>
     keys: [key],
     undo: 'none',
     edits,
-    run: (s) => ({ tool, draft: { kind: 'none' }, notice: null, selection: tool === 'select' ? s.selection : s.selection }),
+    run: () => ({ tool, draft: { kind: 'none' }, notice: null }),
   });
 
 const allLevelIds = (s: EditorStoreState) => s.plan.levels.map((l) => l.id);

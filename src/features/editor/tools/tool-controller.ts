@@ -185,7 +185,8 @@ export function createToolController(store: EditorStore) {
       const s = store.getState();
       const end = planAt(p);
       store.setState({ draft: { kind: 'none' } });
-      const dragged = Math.hypot(...(toScreen(s.view, end).map((v, i) => v - toScreen(s.view, g.start)[i]) as [number, number])) > 3;
+      const [ax, ay] = toScreen(s.view, g.start);
+      const dragged = Math.hypot(p.sx - ax, p.sy - ay) > 3;
       if (!dragged) {
         if (!g.shift) dispatch(store, 'selection.set', { ids: [] });
         return;
