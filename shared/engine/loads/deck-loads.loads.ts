@@ -103,14 +103,16 @@ export function buildDeckContexts(plan: Plan, topology: FramingTopology): { deck
     const supporters: DeckSupporter[] = [];
     const axes = new Map<string, MemberAxisInDeck>();
     const box = polygonBox(deck.polygon);
+    // Deck frame coordinates read in place (as toDeckFrame gives them), no array per member and deck.
+    const iu = deck.spanDirection === 'x' ? 0 : 1;
+    const iv = 1 - iu;
     for (const fm of membersByLevel.get(deck.level) ?? []) {
       if (!touchesBox(box, fm, SUPPORT_TOLERANCE_FT)) continue;
-      if (runsAcrossSpan(fm, deck.spanDirection)) {
-        const a = toDeckFrame(fm.start, deck.spanDirection);
-        const b = toDeckFrame(fm.end, deck.spanDirection);
-        supporters.push({ id: fm.id, u_ft: (a[0] + b[0]) / 2, vMin_ft: Math.min(a[1], b[1]), vMax_ft: Math.max(a[1], b[1]) });
-        axes.set(fm.id, { vStart_ft: a[1], sign: b[1] >= a[1] ? 1 : -1, span_ft: fm.span_ft });
-      } else if (!runsAlongSpan(fm, deck.spanDirection) && touchesBox(box, fm, -SUPPORT_TOLERANCE_FT)) {
+      const au = fm.start[iu], av = fm.start[iv], bu = fm.end[iu], bv = fm.end[iv];
+      if (Math.abs(au - bu) <= SUPPORT_TOLERANCE_FT) {
+        supporters.push({ id: fm.id, u_ft: (au + bu) / 2, vMin_ft: Math.min(av, bv), vMax_ft: Math.max(av, bv) });
+        axes.set(fm.id, { vStart_ft: av, sign: bv >= av ? 1 : -1, span_ft: fm.span_ft });
+      } else if (!(Math.abs(av - bv) <= SUPPORT_TOLERANCE_FT) && touchesBox(box, fm, -SUPPORT_TOLERANCE_FT)) {
         problems.push(
           planProblem('warning', 'member-skew-to-deck', `Member ${fm.id}: at an angle to the span of deck ${deck.id}; it takes no load from that deck (only members square across the span carry deck)`, {
             elementId: fm.id,

@@ -220,16 +220,17 @@ function addStripsInBand(
     }
     return;
   }
-  inside.forEach((s, k) => {
-    const widthAt = (uL: number, uR: number, holesHere: readonly [number, number][]) => {
-      const lo = k === 0 ? uL : Math.max(uL, (inside[k - 1].u_ft + s.u_ft) / 2);
-      const hi = k === inside.length - 1 ? uR : Math.min(uR, (s.u_ft + inside[k + 1].u_ft) / 2);
-      return holesHere.length === 0 ? Math.max(0, hi - lo) : lengthOutsideHoles(lo, hi, holesHere);
-    };
-    const w1 = widthAt(uLA, uRA, holesA);
-    const w2 = widthAt(uLB, uRB, holesB);
-    const vm = (va + vb) / 2;
-    if ((k === 0 && s.u_ft - valueAt(interval.left, vm) > SUPPORT_TOLERANCE_FT) || (k === inside.length - 1 && valueAt(interval.right, vm) - s.u_ft > SUPPORT_TOLERANCE_FT)) {
+  // A plain loop with the width worked inline: one closure per supporter and band was most of
+  // this file's garbage on large plans.
+  const vm = (va + vb) / 2;
+  const last = inside.length - 1;
+  for (let k = 0; k <= last; k++) {
+    const s = inside[k];
+    const midLo = k === 0 ? -Infinity : (inside[k - 1].u_ft + s.u_ft) / 2;
+    const midHi = k === last ? Infinity : (s.u_ft + inside[k + 1].u_ft) / 2;
+    const w1 = stripWidthFt(k === 0 ? uLA : Math.max(uLA, midLo), k === last ? uRA : Math.min(uRA, midHi), holesA);
+    const w2 = stripWidthFt(k === 0 ? uLB : Math.max(uLB, midLo), k === last ? uRB : Math.min(uRB, midHi), holesB);
+    if ((k === 0 && s.u_ft - valueAt(interval.left, vm) > SUPPORT_TOLERANCE_FT) || (k === last && valueAt(interval.right, vm) - s.u_ft > SUPPORT_TOLERANCE_FT)) {
       out.overhangMemberIds.add(s.id);
     }
     const ranges = out.bearing_v.get(s.id);
@@ -237,14 +238,19 @@ function addStripsInBand(
     else out.bearing_v.set(s.id, [[va, vb]]);
     if (w1 > 1e-12 || w2 > 1e-12) {
       // Continue the member's previous strip when the width carries on unchanged (fewer, longer loads).
-      const last = out.lastStrip.get(s.id);
-      if (last && Math.abs(last.v2_ft - va) < 1e-12 && last.width1_ft === last.width2_ft && w1 === w2 && Math.abs(last.width2_ft - w1) <= 1e-12 * Math.max(1, w1)) {
-        last.v2_ft = vb;
+      const prev = out.lastStrip.get(s.id);
+      if (prev && Math.abs(prev.v2_ft - va) < 1e-12 && prev.width1_ft === prev.width2_ft && w1 === w2 && Math.abs(prev.width2_ft - w1) <= 1e-12 * Math.max(1, w1)) {
+        prev.v2_ft = vb;
       } else {
         const strip = { memberId: s.id, v1_ft: va, v2_ft: vb, width1_ft: w1, width2_ft: w2 };
         out.strips.push(strip);
         out.lastStrip.set(s.id, strip);
       }
     }
-  });
+  }
+}
+
+/** Width of [lo, hi] outside the holes, ft (0 when hi ≤ lo). */
+function stripWidthFt(lo: number, hi: number, holesHere: readonly [number, number][]): number {
+  return holesHere.length === 0 ? Math.max(0, hi - lo) : lengthOutsideHoles(lo, hi, holesHere);
 }

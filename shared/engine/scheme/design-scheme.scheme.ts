@@ -117,6 +117,39 @@ type DesignEntry = MemberDesignResult | { error: string[] };
 /** The takedown's self-weight load (a uniform dead load; the kind test first spares the text test). */
 const isSelfWeight = (l: TakedownLoad) => l.kind === 'uniform' && l.case === 'D' && l.source.startsWith('self weight');
 
+/**
+ * A reducible load written without `reducible`, its magnitudes × f and `suffix` on its source.
+ * Keys in the order the takedown writes them (deck strips: kind first; delivered reactions:
+ * case first), built literally so each kind has one object layout (a generic key-by-key copy
+ * was the slowest part of this function).
+ */
+function reducedCopy(l: TakedownLoad, f: number, suffix: string): MemberLoad {
+  const source = suffix === '' ? l.source : l.source + suffix;
+  const caseFirst = firstKeyIsCase(l);
+  switch (l.kind) {
+    case 'point':
+      return caseFirst
+        ? { case: l.case, kind: 'point', P_kip: l.P_kip * f, x_ft: l.x_ft, source }
+        : { kind: 'point', P_kip: l.P_kip * f, x_ft: l.x_ft, case: l.case, source };
+    case 'uniform':
+      return caseFirst ? { case: l.case, kind: 'uniform', w_klf: l.w_klf * f, source } : { kind: 'uniform', w_klf: l.w_klf * f, case: l.case, source };
+    case 'partial':
+      return caseFirst
+        ? { case: l.case, kind: 'partial', w_klf: l.w_klf * f, from_ft: l.from_ft, to_ft: l.to_ft, source }
+        : { kind: 'partial', w_klf: l.w_klf * f, from_ft: l.from_ft, to_ft: l.to_ft, case: l.case, source };
+    case 'linear':
+      return caseFirst
+        ? { case: l.case, kind: 'linear', w1_klf: l.w1_klf * f, w2_klf: l.w2_klf * f, from_ft: l.from_ft, to_ft: l.to_ft, source }
+        : { kind: 'linear', w1_klf: l.w1_klf * f, w2_klf: l.w2_klf * f, from_ft: l.from_ft, to_ft: l.to_ft, case: l.case, source };
+  }
+}
+
+/** Whether `case` is the load's first key (the takedown writes no other key before kind or case). */
+function firstKeyIsCase(l: TakedownLoad): boolean {
+  for (const k in l) return k === 'case';
+  return false;
+}
+
 /** The loads a member is designed for: reducible live × its reduction factor (ASCE 7-16 Eq. 4.7-1). */
 export function designLoads(mt: MemberTakedown): MemberLoad[] {
   const f = mt.liveReductionFactor;
@@ -132,26 +165,10 @@ export function designLoads(mt: MemberTakedown): MemberLoad[] {
       continue;
     }
     // Same keys in the same order, without `reducible`; reducible live scaled by the factor.
-    const copy: Record<string, unknown> = {};
-    for (const k in l) if (k !== 'reducible') copy[k] = (l as unknown as Record<string, unknown>)[k];
     if (l.reducible && f !== 1) {
       note ??= ` × ${f.toFixed(3)} (ASCE 7-16 Eq. 4.7-1)`;
-      switch (l.kind) {
-        case 'uniform':
-        case 'partial':
-          copy.w_klf = l.w_klf * f;
-          break;
-        case 'linear':
-          copy.w1_klf = l.w1_klf * f;
-          copy.w2_klf = l.w2_klf * f;
-          break;
-        case 'point':
-          copy.P_kip = l.P_kip * f;
-          break;
-      }
-      copy.source = l.source + note;
-    }
-    out.push(copy as unknown as MemberLoad);
+      out.push(reducedCopy(l, f, note));
+    } else out.push(reducedCopy(l, 1, ''));
   }
   return out;
 }

@@ -318,6 +318,7 @@ export function runTakedown(plan: Plan, options: TakedownOptions = {}): Takedown
   const members = new Map<string, MemberTakedown>();
   const llrOn = plan.designBasis.liveLoadReduction;
   const sums = new EndSums();
+  const selfWeightLoads = new Map<number, TakedownLoad>();
   for (const id of topology.order) {
     const fm = topology.members.get(id)!;
     const g = gathered.get(id)!;
@@ -355,7 +356,9 @@ export function runTakedown(plan: Plan, options: TakedownOptions = {}): Takedown
     const plf = options.selfWeight ? options.selfWeight(mt) : lockedShapeWeightPlf(fm.member);
     mt.selfWeight_plf = plf;
     if (plf > 0) {
-      const selfWeight: TakedownLoad = { case: 'D', kind: 'uniform', w_klf: plf / 1000, source: `self weight ${plf} plf` };
+      // One load object per weight in a run (members of one size share it; never mutated).
+      let selfWeight = selfWeightLoads.get(plf);
+      if (!selfWeight) selfWeightLoads.set(plf, (selfWeight = { case: 'D', kind: 'uniform', w_klf: plf / 1000, source: `self weight ${plf} plf` }));
       loads.push(selfWeight);
       sums.tD += resultantKip(selfWeight, span);
       sums.mD += lastResultant.momentAboutStartKipFt;
