@@ -474,6 +474,11 @@ function buildSchemeResult(plan: Plan, takedown: TakedownResult, designs: Map<st
     plan.levels,
   );
 
+  // A member with an error against it (e.g. an end that lands on nothing) never reads as passing,
+  // whatever its sizing said: the sizing assumed supports the framing does not have.
+  const erroredIds = new Set<string>();
+  for (const p of takedown.problems) if (p.severity === 'error' && p.elementId) erroredIds.add(p.elementId);
+
   const members: SchemeMember[] = fileOrder.map((m) => {
     const mt = takedown.members.get(m.id)!;
     const entry = designs.get(m.id);
@@ -490,7 +495,7 @@ function buildSchemeResult(plan: Plan, takedown: TakedownResult, designs: Map<st
       level: m.level,
       shape: design ? design.shape : m.shape,
       span_ft: mt.span_ft,
-      passes: design ? design.passes : false,
+      passes: design ? design.passes && !erroredIds.has(m.id) : false,
       governing: design ? design.governing : null,
       ratio: design ? design.ratio : null,
       tributaryWidth_ft: mt.tributaryWidth_ft,

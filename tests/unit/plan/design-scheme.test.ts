@@ -101,3 +101,19 @@ describe('marks', () => {
     expect(Object.fromEntries(marks)).toEqual({ a: '2B2', b: '2B1', c: '2B2' });
   });
 });
+
+describe('designScheme when framing is incomplete', () => {
+  it('when a beam end lands on nothing, then that beam never reads as passing and the problem names it', () => {
+    const plan = fixture();
+    const b2 = plan.members.find((x) => x.id === 'b2')!;
+    // Move the far end into open floor, 3 ft short of the girder it framed into.
+    const [sx, sy] = b2.start;
+    const [ex, ey] = b2.end;
+    const len = Math.hypot(ex - sx, ey - sy);
+    b2.end = [sx + ((ex - sx) * (len - 3)) / len, sy + ((ey - sy) * (len - 3)) / len];
+    const r = designScheme(plan);
+    const problem = r.problems.find((p) => p.code === 'member-end-unsupported' && p.elementId === 'b2');
+    expect(problem?.severity).toBe('error');
+    expect(r.members.find((x) => x.id === 'b2')!.passes).toBe(false);
+  });
+});
