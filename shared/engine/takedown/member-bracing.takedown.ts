@@ -10,12 +10,18 @@ import { SUPPORT_TOLERANCE_FT } from '../geometry/framing-topology.geometry';
 /** Same shape as the sizing engine's Bracing (shared/engine/index.ts). */
 export type Bracing = 'continuous' | 'none' | { points_ft: number[] };
 
+const byLowEnd = (p: readonly [number, number], q: readonly [number, number]) => Math.min(p[0], p[1]) - Math.min(q[0], q[1]);
+
 /** Length covered by the union of intervals, ft. */
 export function coveredLengthFt(intervals: readonly [number, number][]): number {
-  const sorted = intervals.map(([a, b]) => [Math.min(a, b), Math.max(a, b)] as [number, number]).sort((p, q) => p[0] - q[0]);
+  // Sorted by low end without a new pair per interval (thousands per plan): same order, same sums.
+  const sorted = intervals.slice().sort(byLowEnd);
   let total = 0;
   let reach = -Infinity;
-  for (const [a, b] of sorted) {
+  for (let i = 0; i < sorted.length; i++) {
+    const p = sorted[i];
+    const a = Math.min(p[0], p[1]);
+    const b = Math.max(p[0], p[1]);
     if (b <= reach) continue;
     total += b - Math.max(a, reach);
     reach = b;
