@@ -2,13 +2,14 @@
 import type { EditorState, PlanPoint, View } from '../store/editor.types';
 import { findBay } from '../tools/infill.tool';
 import { distance } from '../tools/plan-geometry';
-import { MONO, feetInches, type PlanTheme } from './plan-theme';
+import type { UnitSystem } from '../../../lib/units';
+import { MONO, lengthText, type PlanTheme } from './plan-theme';
 import { toScreen } from './view-transform';
 import { MEMBER_WIDTH_PX } from './draw-static';
 
 export const HANDLE_PX = 9;
 
-export function drawOverlay(ctx: CanvasRenderingContext2D, s: EditorState, theme: PlanTheme) {
+export function drawOverlay(ctx: CanvasRenderingContext2D, s: EditorState, theme: PlanTheme, system: UnitSystem = 'US') {
   const { view, plan } = s;
   const S = (p: PlanPoint) => toScreen(view, p);
   ctx.save();
@@ -97,7 +98,7 @@ export function drawOverlay(ctx: CanvasRenderingContext2D, s: EditorState, theme
     ctx.setLineDash(s.tool === 'lineLoad' ? [6, 4] : []);
     line(ctx, S(d.start), S(hoverPt));
     ctx.setLineDash([]);
-    lengthTag(ctx, d.start, hoverPt, view, theme);
+    lengthTag(ctx, d.start, hoverPt, view, theme, system);
   }
   if (d.kind === 'measure') {
     const end = d.end ?? hoverPt;
@@ -106,7 +107,7 @@ export function drawOverlay(ctx: CanvasRenderingContext2D, s: EditorState, theme
       ctx.setLineDash([4, 3]);
       line(ctx, S(d.start), S(end));
       ctx.setLineDash([]);
-      lengthTag(ctx, d.start, end, view, theme, true);
+      lengthTag(ctx, d.start, end, view, theme, system, true);
     }
   }
   if (d.kind === 'polygon' && d.points.length > 0) {
@@ -190,10 +191,15 @@ function handle(ctx: CanvasRenderingContext2D, [x, y]: [number, number], theme: 
   ctx.strokeRect(x - HANDLE_PX / 2, y - HANDLE_PX / 2, HANDLE_PX, HANDLE_PX);
 }
 
-function lengthTag(ctx: CanvasRenderingContext2D, a: PlanPoint, b: PlanPoint, view: View, theme: PlanTheme, withDeltas = false) {
+export function measureText(a: PlanPoint, b: PlanPoint, system: UnitSystem, withDeltas = false): string {
+  let text = lengthText(distance(a, b), system);
+  if (withDeltas) text += `  (Δx ${lengthText(Math.abs(b[0] - a[0]), system)}, Δy ${lengthText(Math.abs(b[1] - a[1]), system)})`;
+  return text;
+}
+
+function lengthTag(ctx: CanvasRenderingContext2D, a: PlanPoint, b: PlanPoint, view: View, theme: PlanTheme, system: UnitSystem, withDeltas = false) {
   const [x, y] = toScreen(view, b);
-  let text = feetInches(distance(a, b));
-  if (withDeltas) text += `  (Δx ${feetInches(Math.abs(b[0] - a[0]))}, Δy ${feetInches(Math.abs(b[1] - a[1]))})`;
+  const text = measureText(a, b, system, withDeltas);
   ctx.font = `600 11px ${MONO}`;
   const w = ctx.measureText(text).width + 10;
   ctx.fillStyle = theme.ink;

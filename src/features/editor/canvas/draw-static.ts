@@ -9,7 +9,8 @@ import type { Plan } from '../../../../shared/schemas/plan.schema';
 import type { PlanPoint, View } from '../store/editor.types';
 import { zoneTint } from '../tools/zone-presets';
 import type { StaticGeometry } from './static-geometry';
-import { MONO, SANS, feetInches, type PlanTheme } from './plan-theme';
+import type { UnitSystem } from '../../../lib/units';
+import { MONO, SANS, lengthText, lineLoadText, pointLoadText, type PlanTheme } from './plan-theme';
 import { toScreen, visibleBounds } from './view-transform';
 
 const BUBBLE_R = 11;
@@ -20,7 +21,7 @@ export const MEMBER_WIDTH_PX = { girder: 4.5, beam: 2 } as const;
 export const LABEL_MIN_PX = 80;
 
 /** Returns how many member labels (size and ratio) were drawn. */
-export function drawStatic(ctx: CanvasRenderingContext2D, plan: Plan, geo: StaticGeometry, view: View, theme: PlanTheme): number {
+export function drawStatic(ctx: CanvasRenderingContext2D, plan: Plan, geo: StaticGeometry, view: View, theme: PlanTheme, system: UnitSystem = 'US'): number {
   // The paper is the container's background, so an underlay can show beneath.
   ctx.save();
   const extents = gridExtents(plan, geo);
@@ -81,7 +82,7 @@ export function drawStatic(ctx: CanvasRenderingContext2D, plan: Plan, geo: Stati
   const margin = 40 / view.scale;
   const onScreen = (p: PlanPoint) => p[0] >= vis.minX - margin && p[0] <= vis.maxX + margin && p[1] >= vis.minY - margin && p[1] <= vis.maxY + margin;
   for (const d of geo.decks) drawDeckArrow(ctx, d, view, theme);
-  drawGrid(ctx, plan, extents, view, theme);
+  drawGrid(ctx, plan, extents, view, theme, system);
   ctx.fillStyle = theme.ink;
   const colSize = Math.max(5, Math.min(12, view.scale * 1.1));
   for (const c of geo.columns) {
@@ -90,7 +91,7 @@ export function drawStatic(ctx: CanvasRenderingContext2D, plan: Plan, geo: Stati
     ctx.fillRect(sx - colSize / 2, sy - colSize / 2, colSize, colSize);
   }
   const labelled = drawMemberLabels(ctx, geo, view, theme, onScreen);
-  for (const p of geo.pointLoads) if (onScreen(p.at)) drawPointLoad(ctx, toScreen(view, p.at), p.text, theme);
+  for (const p of geo.pointLoads) if (onScreen(p.at)) drawPointLoad(ctx, toScreen(view, p.at), pointLoadText(p.D_kip, p.L_kip, system), theme);
   ctx.font = `10px ${MONO}`;
   ctx.fillStyle = theme.load;
   for (const w of geo.lineLoads) {
@@ -99,7 +100,7 @@ export function drawStatic(ctx: CanvasRenderingContext2D, plan: Plan, geo: Stati
     const [sx, sy] = toScreen(view, mid);
     ctx.textAlign = 'center';
     ctx.textBaseline = 'top';
-    ctx.fillText(w.text, sx, sy + 6);
+    ctx.fillText(lineLoadText(w.D_klf, w.L_klf, system), sx, sy + 6);
   }
   ctx.restore();
   return labelled;
@@ -220,7 +221,7 @@ function drawDeckArrow(ctx: CanvasRenderingContext2D, d: StaticGeometry['decks']
   ctx.restore();
 }
 
-function drawGrid(ctx: CanvasRenderingContext2D, plan: Plan, ext: Extents, view: View, theme: PlanTheme) {
+function drawGrid(ctx: CanvasRenderingContext2D, plan: Plan, ext: Extents, view: View, theme: PlanTheme, system: UnitSystem) {
   const grids = plan.grids ?? [];
   if (grids.length === 0) return;
   ctx.save();
@@ -262,17 +263,17 @@ function drawGrid(ctx: CanvasRenderingContext2D, plan: Plan, ext: Extents, view:
   const dimY = topY - off - BUBBLE_R - 16;
   if (xLines.length > 1) {
     const xs = xLines.map((g) => toScreen(view, [g.offset_ft, 0])[0]);
-    dimensionRow(ctx, xs, dimY, xLines, false);
+    dimensionRow(ctx, xs, dimY, xLines, false, system);
   }
   const dimX = leftX - off - BUBBLE_R - 16;
   if (yLines.length > 1) {
     const ys = yLines.map((g) => toScreen(view, [0, g.offset_ft])[1]);
-    dimensionRow(ctx, ys, dimX, yLines, true);
+    dimensionRow(ctx, ys, dimX, yLines, true, system);
   }
   ctx.restore();
 }
 
-function dimensionRow(ctx: CanvasRenderingContext2D, at: number[], across: number, lines: { offset_ft: number }[], vertical: boolean) {
+function dimensionRow(ctx: CanvasRenderingContext2D, at: number[], across: number, lines: { offset_ft: number }[], vertical: boolean, system: UnitSystem) {
   const pt = (a: number, b: number): [number, number] => (vertical ? [b, a] : [a, b]);
   ctx.beginPath();
   ctx.moveTo(...pt(Math.min(...at), across));
@@ -286,7 +287,7 @@ function dimensionRow(ctx: CanvasRenderingContext2D, at: number[], across: numbe
   ctx.stroke();
   for (let i = 0; i + 1 < at.length; i++) {
     const gapPx = Math.abs(at[i + 1] - at[i]);
-    const text = feetInches(lines[i + 1].offset_ft - lines[i].offset_ft);
+    const text = lengthText(lines[i + 1].offset_ft - lines[i].offset_ft, system);
     if (gapPx < ctx.measureText(text).width + 8) continue;
     const mid = (at[i] + at[i + 1]) / 2;
     ctx.save();

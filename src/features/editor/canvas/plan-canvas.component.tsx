@@ -9,10 +9,12 @@ import { buildStaticGeometry, type StaticGeometry } from './static-geometry';
 import { drawStatic } from './draw-static';
 import { drawOverlay } from './draw-overlay';
 import { readPlanTheme, type PlanTheme } from './plan-theme';
-import { scaleBarLength } from './view-transform';
+import { scaleBar } from './view-transform';
 import { pickAt } from '../tools/hit-test.tool';
 import { memberStatus } from '../members/member-status';
 import { toPlan } from './view-transform';
+import type { UnitSystem } from '../../../lib/units';
+import { useUnits } from '../../../lib/units-context';
 
 export type PlanViewArgs = { scale: number; x: number; y: number };
 
@@ -42,6 +44,14 @@ export function PlanCanvas({ store, design, controller, label, renderUnderlay }:
   const readOnly = useStore(store, (s) => s.readOnly);
   const [panning, setPanning] = useState(false);
   const tooltip = useTooltip(store, design, containerRef);
+  // Labels on the canvas are written in the reader's units; the layers read this ref when drawn.
+  const { system } = useUnits();
+  const systemRef = useRef<UnitSystem>(system);
+  systemRef.current = system;
+  useEffect(() => {
+    staticLayer.current?.batchDraw();
+    overlayLayer.current?.batchDraw();
+  }, [system]);
 
   // Size follows the container.
   useEffect(() => {
@@ -158,7 +168,7 @@ export function PlanCanvas({ store, design, controller, label, renderUnderlay }:
               if (!g || !theme.current) return;
               const view = store.getState().view;
               const t0 = performance.now();
-              const labelled = drawStatic(ctx._context, store.getState().plan, g, view, theme.current);
+              const labelled = drawStatic(ctx._context, store.getState().plan, g, view, theme.current, systemRef.current);
               // Performance probe: a test may set window.__planDrawProbe = [] to collect draw times.
               (globalThis as { __planDrawProbe?: number[] }).__planDrawProbe?.push(performance.now() - t0);
               // Read-back for tests and tools: the view and how many members carry a printed size.
@@ -169,6 +179,7 @@ export function PlanCanvas({ store, design, controller, label, renderUnderlay }:
                 el.dataset.viewY = String(view.y);
                 el.dataset.labelledMembers = String(labelled);
                 el.dataset.members = String(g.memberCount);
+                el.dataset.units = systemRef.current;
               }
             }}
           />
@@ -178,12 +189,12 @@ export function PlanCanvas({ store, design, controller, label, renderUnderlay }:
             listening={false}
             perfectDrawEnabled={false}
             sceneFunc={(ctx) => {
-              if (theme.current) drawOverlay(ctx._context, store.getState(), theme.current);
+              if (theme.current) drawOverlay(ctx._context, store.getState(), theme.current, systemRef.current);
             }}
           />
         </Layer>
       </Stage>
-      <ScaleIndicator store={store} />
+      <ScaleIndicator store={store} system={system} />
       {tooltip.content ? (
         <div
           role="tooltip"
@@ -205,19 +216,16 @@ function UnderlayNodes({ store, render }: { store: EditorStore; render: (view: P
   return <>{render({ scale, x, y })}</>;
 }
 
-function ScaleIndicator({ store }: { store: EditorStore }) {
+function ScaleIndicator({ store, system }: { store: EditorStore; system: UnitSystem }) {
   const scale = useStore(store, (s) => s.view.scale);
-  const ft = scaleBarLength(scale);
-  const px = ft * scale;
+  const bar = scaleBar(scale, system);
   return (
     <div data-testid="scale-indicator" className="pointer-events-none absolute right-3 bottom-3 flex flex-col items-end gap-0.5 rounded-[2px] bg-paper-raised/85 px-1.5 py-1">
-      <div className="flex" style={{ width: px }}>
+      <div className="flex" style={{ width: bar.px }}>
         <div className="h-1.5 flex-1 border border-ink bg-ink" />
         <div className="h-1.5 flex-1 border border-l-0 border-ink" />
       </div>
-      <span className="figures font-mono text-[10px] text-ink">
-        {ft} ft · {scale >= 10 ? scale.toFixed(0) : scale.toFixed(1)} px/ft
-      </span>
+      <span className="figures font-mono text-[10px] text-ink">{bar.text}</span>
     </div>
   );
 }

@@ -1,5 +1,6 @@
 // Canvas colours, read from the app's CSS tokens (src/styles) so the plan and the pages agree.
 import type { UtilisationBand } from '../../../lib/utilisation';
+import { formatQuantity, formatValue, type UnitSystem } from '../../../lib/units';
 
 export interface PlanTheme {
   paper: string;
@@ -62,4 +63,29 @@ export function feetInches(ft: number): string {
     inches -= 12;
   }
   return `${sign}${whole}'-${inches % 1 === 0 ? inches : inches.toFixed(2).replace(/0+$/, '')}"`;
+}
+
+/**
+ * A length on the drawing in the reader's system: US feet-and-inches (30'-0"), SI metres to
+ * the millimetre (9.144 m). The plan itself stays in feet.
+ */
+export function lengthText(ft: number, system: UnitSystem): string {
+  return system === 'SI' ? formatQuantity('length_ft', ft, 'SI', { digits: 3 }) : feetInches(ft);
+}
+
+/** Trimmed number for a load label: at most two decimals, no trailing zeros (1.5, 12, 0.25). */
+function tidy(text: string): string {
+  return text.includes('.') ? text.replace(/0+$/, '').replace(/\.$/, '') : text;
+}
+
+/** "5D + 3L kip" / "22.24D + 13.34L kN": the dead and live of a point load. */
+export function pointLoadText(D_kip: number, L_kip: number, system: UnitSystem): string {
+  const v = (kip: number) => tidy(formatValue('force_kip', kip, system, { digits: 2 }));
+  return `${v(D_kip)}D + ${v(L_kip)}L ${system === 'SI' ? 'kN' : 'k'}`;
+}
+
+/** "0.5D + 0.2L klf" / "7.3D + 2.92L kN/m": the dead and live of a line load. */
+export function lineLoadText(D_klf: number, L_klf: number, system: UnitSystem): string {
+  const v = (klf: number) => tidy(formatValue('lineLoad_klf', klf, system, { digits: 2 }));
+  return `${v(D_klf)}D + ${v(L_klf)}L ${system === 'SI' ? 'kN/m' : 'klf'}`;
 }

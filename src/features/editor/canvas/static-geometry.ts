@@ -23,12 +23,11 @@ export interface StaticGeometry {
   decks: { id: string; polygon: PlanPoint[]; spanDirection: 'x' | 'y'; zoneIndex: number; zoneName: string }[];
   openings: { id: string; polygon: PlanPoint[] }[];
   columns: PlanPoint[];
-  pointLoads: { id: string; at: PlanPoint; text: string }[];
-  lineLoads: { id: string; start: PlanPoint; end: PlanPoint; text: string }[];
+  /** Loads in plan units (kip, klf); their labels are written in the reader's units when drawn. */
+  pointLoads: { id: string; at: PlanPoint; D_kip: number; L_kip: number }[];
+  lineLoads: { id: string; start: PlanPoint; end: PlanPoint; D_klf: number; L_klf: number }[];
   memberCount: number;
 }
-
-const fmt = (v: number) => (Math.round(v * 100) / 100).toString();
 
 export function buildStaticGeometry(plan: Plan, levelId: string, design: LiveDesignSnapshot): StaticGeometry {
   const groups = new Map<string, { kind: 'girder' | 'beam'; band: UtilisationBand; path: Path2D; count: number }>();
@@ -54,8 +53,8 @@ export function buildStaticGeometry(plan: Plan, levelId: string, design: LiveDes
     decks: plan.decks.filter((d) => d.level === levelId).map((d) => ({ id: d.id, polygon: d.polygon, spanDirection: d.spanDirection, zoneIndex: zoneIndex.get(d.zone) ?? -1, zoneName: plan.zones.find((z) => z.id === d.zone)?.name ?? d.zone })),
     openings: plan.openings.filter((o) => o.level === levelId).map((o) => ({ id: o.id, polygon: o.polygon })),
     columns: plan.columns.filter((c) => c.levels.includes(levelId)).map((c) => [c.x_ft, c.y_ft] as PlanPoint),
-    pointLoads: plan.pointLoads.filter((p) => p.level === levelId).map((p) => ({ id: p.id, at: [p.x_ft, p.y_ft] as PlanPoint, text: `${fmt(p.D_kip)}D + ${fmt(p.L_kip)}L k` })),
-    lineLoads: plan.lineLoads.filter((w) => w.level === levelId).map((w) => ({ id: w.id, start: w.start, end: w.end, text: `${fmt(w.D_klf)}D + ${fmt(w.L_klf)}L klf` })),
+    pointLoads: plan.pointLoads.filter((p) => p.level === levelId).map((p) => ({ id: p.id, at: [p.x_ft, p.y_ft] as PlanPoint, D_kip: p.D_kip, L_kip: p.L_kip })),
+    lineLoads: plan.lineLoads.filter((w) => w.level === levelId).map((w) => ({ id: w.id, start: w.start, end: w.end, D_klf: w.D_klf, L_klf: w.L_klf })),
     memberCount: labels.length,
   };
 }

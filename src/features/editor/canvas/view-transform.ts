@@ -1,6 +1,7 @@
 // The plan ↔ screen transform. Plan y points north (up); screen y points down.
 import type { PlanPoint, View } from '../store/editor.types';
 import type { Bounds } from '../tools/plan-geometry';
+import { FT_M, type UnitSystem } from '../../../lib/units';
 
 export const MIN_SCALE = 0.5; // px per ft
 export const MAX_SCALE = 200;
@@ -51,4 +52,12 @@ export function scaleBarLength(scale: number, targetPx = 120): number {
   const pow = 10 ** Math.floor(Math.log10(raw));
   for (const m of [1, 2, 5, 10]) if (m * pow >= raw * 0.7) return m * pow;
   return 10 * pow;
+}
+
+/** The scale bar: a round length in the reader's unit (ft or m), its width on screen and its caption. */
+export function scaleBar(scale_pxPerFt: number, system: UnitSystem): { length: number; px: number; text: string } {
+  const perUnit = system === 'SI' ? scale_pxPerFt / FT_M : scale_pxPerFt;
+  const unit = system === 'SI' ? 'm' : 'ft';
+  const length = scaleBarLength(perUnit);
+  return { length, px: length * perUnit, text: `${length} ${unit} · ${perUnit >= 10 ? perUnit.toFixed(0) : perUnit.toFixed(1)} px/${unit}` };
 }

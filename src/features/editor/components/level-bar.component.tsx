@@ -3,6 +3,9 @@ import { useStore } from 'zustand';
 import { Button } from '../../../components/ui/button.ui';
 import { dispatch } from '../actions/action-registry';
 import type { EditorStore } from '../store/editor.store';
+import { formatQuantity, parseQuantity, unitLabel } from '../../../lib/units';
+import { useUnits } from '../../../lib/units-context';
+import { fieldText } from './field-text';
 
 const INPUT = 'h-8 rounded-[3px] border border-line bg-paper-raised px-2 text-xs text-ink focus:border-accent focus:outline-none';
 
@@ -12,6 +15,7 @@ export function LevelBar({ store, canEdit }: { store: EditorStore; canEdit: bool
   const levelId = useStore(store, (s) => s.levelId);
   const [panel, setPanel] = useState<'none' | 'add' | 'copy'>('none');
   const selectId = useId();
+  const { system } = useUnits();
   return (
     <div className="flex flex-wrap items-center gap-2">
       <label htmlFor={selectId} className="label-caps">
@@ -20,7 +24,7 @@ export function LevelBar({ store, canEdit }: { store: EditorStore; canEdit: bool
       <select id={selectId} className={`${INPUT} min-w-36 font-medium`} value={levelId} onChange={(e) => dispatch(store, 'level.show', { levelId: e.target.value })}>
         {[...levels].reverse().map((l) => (
           <option key={l.id} value={l.id}>
-            {l.name} · EL {l.elevation_ft} ft
+            {l.name} · EL {system === 'SI' ? formatQuantity('length_ft', l.elevation_ft, 'SI') : `${l.elevation_ft} ft`}
           </option>
         ))}
       </select>
@@ -44,7 +48,10 @@ function AddLevelForm({ store, onDone }: { store: EditorStore; onDone: () => voi
   const levels = store.getState().plan.levels;
   const top = levels[levels.length - 1];
   const [name, setName] = useState(`Level ${levels.length + 1}`);
-  const [elevation, setElevation] = useState(String(top ? top.elevation_ft + 14 : 0));
+  const { system } = useUnits();
+  const suggested_ft = top ? top.elevation_ft + 14 : 0;
+  const [elevation, setElevation] = useState(() => fieldText('length_ft', suggested_ft, system));
+  const [error, setError] = useState<string | null>(null);
   const nameId = useId();
   const elId = useId();
   return (
@@ -53,13 +60,17 @@ function AddLevelForm({ store, onDone }: { store: EditorStore; onDone: () => voi
       aria-label="Add level"
       onSubmit={(e) => {
         e.preventDefault();
-        if (dispatch(store, 'level.add', { name, elevation_ft: Number(elevation) }).ok) onDone();
+        // Typed in the reader's units; the plan keeps feet.
+        const r = elevation.trim() === fieldText('length_ft', suggested_ft, system) ? { ok: true as const, value: suggested_ft } : parseQuantity('length_ft', elevation, system);
+        setError(r.ok ? null : r.error);
+        if (r.ok && dispatch(store, 'level.add', { name, elevation_ft: r.value }).ok) onDone();
       }}
     >
       <label htmlFor={nameId} className="text-xs text-ink-soft">Name</label>
       <input id={nameId} className={`${INPUT} w-28`} value={name} onChange={(e) => setName(e.target.value)} />
-      <label htmlFor={elId} className="text-xs text-ink-soft">Elevation, ft</label>
-      <input id={elId} className={`${INPUT} w-16 font-mono`} value={elevation} onChange={(e) => setElevation(e.target.value)} />
+      <label htmlFor={elId} className="text-xs text-ink-soft">Elevation, {unitLabel('length_ft', system)}</label>
+      <input id={elId} className={`${INPUT} w-16 font-mono`} value={elevation} onChange={(e) => setElevation(e.target.value)} aria-invalid={error ? true : undefined} title={error ?? undefined} />
+      {error ? <span className="text-xs text-danger">{error}</span> : null}
       <Button type="submit" variant="secondary" className="h-8 text-xs">Add</Button>
     </form>
   );

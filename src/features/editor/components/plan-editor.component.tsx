@@ -4,6 +4,7 @@ import type { SchemeMember, SchemeResult } from '../../../../shared/engine/index
 import type { Plan, PlanMember } from '../../../../shared/schemas/plan.schema';
 import { Button } from '../../../components/ui/button.ui';
 import { EngineerCaution } from '../../../components/ui/engineer-caution.ui';
+import { UnitsSwitch } from '../../../lib/units-context';
 import { ACTIONS, actionForKey, dispatch, keyOf, type ActionId } from '../actions/action-registry';
 import { savePlan } from '../api/save-plan.api';
 import { PlanCanvas, type PlanViewArgs } from '../canvas/plan-canvas.component';
@@ -171,6 +172,7 @@ export function PlanEditor(props: PlanEditorProps) {
           <ActionButton store={store} id="view.zoomIn" text="+" />
           <ActionButton store={store} id="view.fit" />
           <EditMenu store={store} canEdit={canEdit} />
+          <UnitsSwitch className="mx-1" />
           {props.renderUnderlayPanel ? (
             <Button variant="quiet" className="h-8 text-xs" aria-expanded={showUnderlay} onClick={() => setShowUnderlay((v) => !v)}>
               Underlay

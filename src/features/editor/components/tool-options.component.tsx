@@ -6,6 +6,9 @@ import type { EditorStore } from '../store/editor.store';
 import type { ToolOptions } from '../store/editor.types';
 import { parseGridSpacings } from '../tools/grid-spacings.parser';
 import { ZONE_PRESETS } from '../tools/zone-presets';
+import { fieldText } from './field-text';
+import { formatQuantity, parseQuantity, unitLabel, type QuantityKind, type UnitSystem } from '../../../lib/units';
+import { useUnits } from '../../../lib/units-context';
 
 const HINTS: Partial<Record<string, string>> = {
   select: 'Click to select, Shift-click to add, drag on empty paper for a box. Drag a selected member’s end square to move it.',
@@ -57,6 +60,43 @@ function NumberField({ label, value, onValue, step = 'any', min = 0 }: { label: 
   );
 }
 
+/**
+ * A number of a quantity kind in the reader's units (label "Dead, kN" when SI is shown); what
+ * is typed is read with parseQuantity and handed on in the plan's US unit. A field left alone
+ * keeps the exact US value it was given.
+ */
+function QuantityField({ label, kind, valueUS, onValue, min = 0 }: { label: string; kind: QuantityKind; valueUS: number; onValue: (vUS: number) => void; min?: number }) {
+  const { system } = useUnits();
+  return <QuantityInput key={system} label={label} kind={kind} valueUS={valueUS} onValue={onValue} min={min} system={system} />;
+}
+
+function QuantityInput({ label, kind, valueUS, onValue, min, system }: { label: string; kind: QuantityKind; valueUS: number; onValue: (vUS: number) => void; min: number; system: UnitSystem }) {
+  const [text, setText] = useState(() => fieldText(kind, valueUS, system));
+  const [error, setError] = useState<string | null>(null);
+  return (
+    <Field label={`${label}, ${unitLabel(kind, system)}`}>
+      {(id) => (
+        <input
+          id={id}
+          className={INPUT}
+          inputMode="decimal"
+          value={text}
+          title={error ?? undefined}
+          onChange={(e) => {
+            setText(e.target.value);
+            const r = parseQuantity(kind, e.target.value, system);
+            if (!r.ok) return setError(r.error);
+            if (!(r.value >= min)) return setError(`${label} must be at least ${formatQuantity(kind, min, system)}`);
+            setError(null);
+            onValue(r.value);
+          }}
+          aria-invalid={error ? true : undefined}
+        />
+      )}
+    </Field>
+  );
+}
+
 /** The options of the active tool, under the level bar. */
 export function ToolOptionsBar({ store }: { store: EditorStore }) {
   const tool = useStore(store, (s) => s.tool);
@@ -97,7 +137,7 @@ export function ToolOptionsBar({ store }: { store: EditorStore }) {
           )}
         </Field>
         {options.infillMode === 'spacing' ? (
-          <NumberField key="s" label="Max spacing, ft" value={options.infillSpacing_ft} onValue={(v) => v > 0 && set({ infillSpacing_ft: v })} />
+          <QuantityField key="s" label="Max spacing" kind="length_ft" valueUS={options.infillSpacing_ft} onValue={(v) => v > 0 && set({ infillSpacing_ft: v })} />
         ) : (
           <NumberField key="c" label="Beams per bay" value={options.infillCount} onValue={(v) => Number.isInteger(v) && v >= 1 && set({ infillCount: v })} min={1} />
         )}
@@ -134,8 +174,8 @@ export function ToolOptionsBar({ store }: { store: EditorStore }) {
   if (tool === 'pointLoad') {
     body = (
       <>
-        <NumberField label="Dead, kip" value={options.pointLoad.D_kip} onValue={(D_kip) => set({ pointLoad: { ...store.getState().options.pointLoad, D_kip } })} />
-        <NumberField label="Live, kip" value={options.pointLoad.L_kip} onValue={(L_kip) => set({ pointLoad: { ...store.getState().options.pointLoad, L_kip } })} />
+        <QuantityField label="Dead" kind="force_kip" valueUS={options.pointLoad.D_kip} onValue={(D_kip) => set({ pointLoad: { ...store.getState().options.pointLoad, D_kip } })} />
+        <QuantityField label="Live" kind="force_kip" valueUS={options.pointLoad.L_kip} onValue={(L_kip) => set({ pointLoad: { ...store.getState().options.pointLoad, L_kip } })} />
         <p className="text-xs text-ink-soft">{HINTS.pointLoad}</p>
       </>
     );
@@ -143,8 +183,8 @@ export function ToolOptionsBar({ store }: { store: EditorStore }) {
   if (tool === 'lineLoad') {
     body = (
       <>
-        <NumberField label="Dead, klf" value={options.lineLoad.D_klf} onValue={(D_klf) => set({ lineLoad: { ...store.getState().options.lineLoad, D_klf } })} />
-        <NumberField label="Live, klf" value={options.lineLoad.L_klf} onValue={(L_klf) => set({ lineLoad: { ...store.getState().options.lineLoad, L_klf } })} />
+        <QuantityField label="Dead" kind="lineLoad_klf" valueUS={options.lineLoad.D_klf} onValue={(D_klf) => set({ lineLoad: { ...store.getState().options.lineLoad, D_klf } })} />
+        <QuantityField label="Live" kind="lineLoad_klf" valueUS={options.lineLoad.L_klf} onValue={(L_klf) => set({ lineLoad: { ...store.getState().options.lineLoad, L_klf } })} />
         <p className="text-xs text-ink-soft">{HINTS.lineLoad}</p>
       </>
     );
@@ -157,6 +197,8 @@ export function ToolOptionsBar({ store }: { store: EditorStore }) {
 }
 
 function GridOptions({ store, axis, onAxis }: { store: EditorStore; axis: 'x' | 'y'; onAxis: (a: 'x' | 'y') => void }) {
+  const { system } = useUnits();
+  const u = unitLabel('length_ft', system);
   const [xText, setXText] = useState('');
   const [yText, setYText] = useState('');
   const [errors, setErrors] = useState<{ x?: string; y?: string }>({});
@@ -164,10 +206,10 @@ function GridOptions({ store, axis, onAxis }: { store: EditorStore; axis: 'x' | 
   const yId = useId();
   const apply = (e: React.FormEvent) => {
     e.preventDefault();
-    const x = xText.trim() ? parseGridSpacings(xText) : null;
-    const y = yText.trim() ? parseGridSpacings(yText) : null;
+    const x = xText.trim() ? parseGridSpacings(xText, system) : null;
+    const y = yText.trim() ? parseGridSpacings(yText, system) : null;
     const next = { x: x && !x.ok ? x.error : undefined, y: y && !y.ok ? y.error : undefined };
-    if (!x && !y) next.x = 'Enter spacings for at least one direction, for example 3@30.';
+    if (!x && !y) next.x = `Enter spacings for at least one direction, for example ${system === 'SI' ? '3@9.144' : '3@30'}.`;
     setErrors(next);
     if (next.x || next.y) return;
     dispatch(store, 'grid.fromSpacings', { x: x && x.ok ? x.spacings_ft : null, y: y && y.ok ? y.spacings_ft : null });
@@ -177,18 +219,18 @@ function GridOptions({ store, axis, onAxis }: { store: EditorStore; axis: 'x' | 
       <div className="flex flex-col">
         <span className="flex items-center gap-1.5 text-xs">
           <label htmlFor={xId} className="text-ink-soft">
-            Bays 1, 2, 3 … (east–west), ft
+            Bays 1, 2, 3 … (east–west), {u}
           </label>
-          <input id={xId} className={`${INPUT} w-32`} placeholder="3@30, 2@28" value={xText} onChange={(e) => setXText(e.target.value)} aria-invalid={!!errors.x || undefined} aria-describedby={errors.x ? `${xId}-e` : undefined} />
+          <input id={xId} className={`${INPUT} w-32`} placeholder={system === 'SI' ? '3@9.144, 2@8.534' : '3@30, 2@28'} value={xText} onChange={(e) => setXText(e.target.value)} aria-invalid={!!errors.x || undefined} aria-describedby={errors.x ? `${xId}-e` : undefined} />
         </span>
         {errors.x ? <span id={`${xId}-e`} className="text-xs text-danger">{errors.x}</span> : null}
       </div>
       <div className="flex flex-col">
         <span className="flex items-center gap-1.5 text-xs">
           <label htmlFor={yId} className="text-ink-soft">
-            Bays A, B, C … (north–south), ft
+            Bays A, B, C … (north–south), {u}
           </label>
-          <input id={yId} className={`${INPUT} w-32`} placeholder="2@36" value={yText} onChange={(e) => setYText(e.target.value)} aria-invalid={!!errors.y || undefined} aria-describedby={errors.y ? `${yId}-e` : undefined} />
+          <input id={yId} className={`${INPUT} w-32`} placeholder={system === 'SI' ? '2@10.973' : '2@36'} value={yText} onChange={(e) => setYText(e.target.value)} aria-invalid={!!errors.y || undefined} aria-describedby={errors.y ? `${yId}-e` : undefined} />
         </span>
         {errors.y ? <span id={`${yId}-e`} className="text-xs text-danger">{errors.y}</span> : null}
       </div>
@@ -210,6 +252,7 @@ function GridOptions({ store, axis, onAxis }: { store: EditorStore; axis: 'x' | 
 function ZoneSelect({ store, label }: { store: EditorStore; label: string }) {
   const zones = useStore(store, (s) => s.plan.zones);
   const zoneId = useStore(store, (s) => s.options.zoneId);
+  const { system } = useUnits();
   return (
     <Field label={label}>
       {(id) => (
@@ -217,7 +260,7 @@ function ZoneSelect({ store, label }: { store: EditorStore; label: string }) {
           {zones.length === 0 ? <option value="">none yet</option> : null}
           {zones.map((z) => (
             <option key={z.id} value={z.id}>
-              {z.name} — {z.live_psf || z.roofLive_psf} psf live
+              {z.name} — {system === 'SI' ? formatQuantity('pressure_psf', z.live_psf || z.roofLive_psf, system) : `${z.live_psf || z.roofLive_psf} psf`} live
             </option>
           ))}
         </select>
@@ -235,7 +278,7 @@ function ZoneOptions({ store }: { store: EditorStore }) {
     setValues(ZONE_PRESETS.find((p) => p.key === k)!.zone);
   };
   const num = (field: 'live_psf' | 'partition_psf' | 'superimposedDead_psf' | 'dead_psf' | 'roofLive_psf', label: string) => (
-    <NumberField key={`${key}-${field}`} label={label} value={values[field]} onValue={(v) => setValues((old) => ({ ...old, [field]: v }))} />
+    <QuantityField key={`${key}-${field}`} label={label} kind="pressure_psf" valueUS={values[field]} onValue={(v) => setValues((old) => ({ ...old, [field]: v }))} />
   );
   return (
     <>
@@ -250,10 +293,10 @@ function ZoneOptions({ store }: { store: EditorStore }) {
           </select>
         )}
       </Field>
-      {key === 'roof' ? num('roofLive_psf', 'Roof live, psf') : num('live_psf', 'Live, psf')}
-      {num('partition_psf', 'Partitions, psf')}
-      {num('superimposedDead_psf', 'Superimposed dead, psf')}
-      {num('dead_psf', 'Slab and deck, psf')}
+      {key === 'roof' ? num('roofLive_psf', 'Roof live') : num('live_psf', 'Live')}
+      {num('partition_psf', 'Partitions')}
+      {num('superimposedDead_psf', 'Superimposed dead')}
+      {num('dead_psf', 'Slab and deck')}
       <Button variant="secondary" className="h-8 text-xs" onClick={() => dispatch(store, 'zone.add', { zone: values })}>
         Use this zone
       </Button>

@@ -4,6 +4,8 @@ import { dispatch } from '../actions/action-registry';
 import type { LiveDesign } from '../design/live-design';
 import type { EditorStore } from '../store/editor.store';
 import { memberStatus, type MemberStatus } from './member-status';
+import { formatValue, type UnitSystem } from '../../../lib/units';
+import { useUnits } from '../../../lib/units-context';
 
 type Row = { id: string; kind: 'girder' | 'beam'; span_ft: number; status: MemberStatus };
 
@@ -20,6 +22,7 @@ export function MemberList({ store, design }: { store: EditorStore; design: Live
   const selection = useStore(store, (s) => s.selection);
   const snap = useSyncExternalStore(design.subscribe, design.getSnapshot);
   const bodyRef = useRef<HTMLTableSectionElement>(null);
+  const { system } = useUnits();
 
   const rows: Row[] = useMemo(() => {
     const out: Row[] = [];
@@ -77,7 +80,7 @@ export function MemberList({ store, design }: { store: EditorStore; design: Live
               </tr>
             ) : null}
             {rows.map((r) => (
-              <MemberRow key={r.id} row={r} selected={selected.has(r.id)} store={store} />
+              <MemberRow key={r.id} row={r} selected={selected.has(r.id)} store={store} system={system} />
             ))}
           </tbody>
         </table>
@@ -87,17 +90,19 @@ export function MemberList({ store, design }: { store: EditorStore; design: Live
 }
 
 /** Same printed content: a new design that changes nothing in a row leaves the row alone. */
-function sameRow(a: { row: Row; selected: boolean; store: EditorStore }, b: { row: Row; selected: boolean; store: EditorStore }): boolean {
+type RowProps = { row: Row; selected: boolean; store: EditorStore; system: UnitSystem };
+
+function sameRow(a: RowProps, b: RowProps): boolean {
   const x = a.row.status;
   const y = b.row.status;
   return (
-    a.selected === b.selected && a.store === b.store && a.row.id === b.row.id && a.row.kind === b.row.kind && a.row.span_ft === b.row.span_ft &&
+    a.selected === b.selected && a.store === b.store && a.system === b.system && a.row.id === b.row.id && a.row.kind === b.row.kind && a.row.span_ft === b.row.span_ft &&
     x.mark === y.mark && x.size === y.size && x.util.printed === y.util.printed && x.util.band === y.util.band && x.words === y.words && x.state === y.state
   );
 }
 
 /** One row; memoised so a selection change or a re-design re-renders only the rows that change. */
-const MemberRow = memo(function MemberRow({ row: r, selected: isSelected, store }: { row: Row; selected: boolean; store: EditorStore }) {
+const MemberRow = memo(function MemberRow({ row: r, selected: isSelected, store, system }: RowProps) {
   const s = r.status;
   return (
     <tr
@@ -121,7 +126,7 @@ const MemberRow = memo(function MemberRow({ row: r, selected: isSelected, store 
         </button>
       </td>
       <td className="px-2 py-1 whitespace-nowrap text-ink-soft">
-        {r.kind} <span className="figures font-mono">{r.span_ft.toFixed(1)}′</span>
+        {r.kind} <span className="figures font-mono">{spanText(r.span_ft, system)}</span>
       </td>
       <td className="figures px-2 py-1 font-mono">{s.size}</td>
       <td className="px-2 py-1 text-right">
@@ -137,3 +142,8 @@ const MemberRow = memo(function MemberRow({ row: r, selected: isSelected, store 
     </tr>
   );
 }, sameRow);
+
+/** Span in the reader's units: 30.0′ or 9.14 m. */
+function spanText(span_ft: number, system: UnitSystem): string {
+  return system === 'SI' ? `${formatValue('length_ft', span_ft, 'SI', { digits: 2 })} m` : `${span_ft.toFixed(1)}′`;
+}
