@@ -11,6 +11,7 @@ import { StatusControls } from '../features/scheme-review/components/status-cont
 import { useComparison } from '../features/tonnage/api/get-comparison.api';
 import { ComparisonView } from '../features/tonnage/components/comparison-view.component';
 import type { Role } from '../lib/permissions';
+import { UnitsSwitch } from '../lib/units-context';
 
 // Who may do what on this page (the server enforces the same rules, policy.ts).
 const canReview = (role: Role) => role === 'owner' || role === 'engineer' || role === 'manager';
@@ -29,11 +30,14 @@ export default function ProjectTonnageRoute() {
         <h2 id="tonnage-heading" className="text-lg font-semibold text-ink">
           Tonnage
         </h2>
-        {comparison.data ? (
-          <span className="text-xs text-ink-soft">
-            Designed from each scheme's current plan, {new Date(comparison.data.generatedAt).toLocaleString('en-US', { dateStyle: 'medium', timeStyle: 'short' })}
-          </span>
-        ) : null}
+        <div className="flex flex-wrap items-center gap-3">
+          {comparison.data ? (
+            <span className="text-xs text-ink-soft">
+              Designed from each scheme's current plan, {new Date(comparison.data.generatedAt).toLocaleString('en-US', { dateStyle: 'medium', timeStyle: 'short' })}
+            </span>
+          ) : null}
+          <UnitsSwitch />
+        </div>
       </div>
       <div role="note" className="border-l-4 border-notice bg-notice-wash px-4 py-2">
         <EngineerCaution />

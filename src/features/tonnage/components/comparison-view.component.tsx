@@ -5,12 +5,13 @@ import { EmptyState } from '../../../components/ui/empty-state.ui';
 import { FormAlert } from '../../../components/ui/form-alert.ui';
 import { comparisonPath, type Comparison, type ComparisonScheme } from '../api/get-comparison.api';
 import { SCHEME_COLOURS, TonnageCharts } from './tonnage-charts.component';
+import { describeDifferenceSi, KG_PER_SHORT_TON, tonnageUnits } from './tonnage-units';
+import { useUnits } from '../../../lib/units-context';
 
 export const MAX_COMPARED = 4;
 
 const int = new Intl.NumberFormat('en-US', { maximumFractionDigits: 0 });
 const one = new Intl.NumberFormat('en-US', { minimumFractionDigits: 1, maximumFractionDigits: 1 });
-const two = new Intl.NumberFormat('en-US', { minimumFractionDigits: 2, maximumFractionDigits: 2 });
 const signed = (n: number, fmt: Intl.NumberFormat) => `${n > 0 ? '+' : n < 0 ? '−' : '±'}${fmt.format(Math.abs(n))}`;
 const signedUsd = (n: number) => `${n > 0 ? '+' : n < 0 ? '−' : '±'}${formatEstimateUsd(Math.abs(n))}`;
 
@@ -61,6 +62,8 @@ function SchemeCard({
   actions?: ReactNode;
 }) {
   const t = scheme.totals;
+  const { system } = useUnits();
+  const u = tonnageUnits(system);
   return (
     <article aria-label={scheme.name} className="flex flex-col border-2 border-ink bg-paper-raised">
       <header className="flex items-start gap-2 border-b border-ink px-3 py-2">
@@ -80,11 +83,15 @@ function SchemeCard({
       {t ? (
         <dl className="grid grid-cols-[1fr_auto] gap-x-3 gap-y-1 px-3 py-3 text-sm">
           <Figure label="Steel weight" strong>
-            {one.format(t.steelWeight_tons)} tons
+            {one.format(u.big(t.steelWeight_lb))} {u.bigUnit}
           </Figure>
-          <Figure label="">{int.format(t.steelWeight_lb)} lb</Figure>
-          <Figure label="Steel per floor area">{t.steel_psf === null ? '—' : `${two.format(t.steel_psf)} psf`}</Figure>
-          <Figure label="Floor area">{int.format(t.floorArea_ft2)} ft²</Figure>
+          <Figure label="">
+            {int.format(u.small(t.steelWeight_lb))} {u.smallUnit}
+          </Figure>
+          <Figure label="Steel per floor area">{t.steel_psf === null ? '—' : `${u.perAreaFmt.format(u.perArea(t.steel_psf))} ${u.perAreaUnit}`}</Figure>
+          <Figure label="Floor area">
+            {int.format(u.area(t.floorArea_ft2))} {u.areaUnit}
+          </Figure>
           <Figure label="Pieces">{int.format(t.pieces)}</Figure>
           <Figure label="Connections">{int.format(t.connections)}</Figure>
           <Figure label="Estimated cost" strong>
@@ -116,6 +123,8 @@ function SchemeCard({
 
 function Differences({ base, others }: { base: ComparisonScheme; others: ComparisonScheme[] }) {
   const rows = others.filter((s) => s.totals).map((s) => ({ s, d: tonnageDifference(base.totals!, s.totals!) }));
+  const { system } = useUnits();
+  const u = tonnageUnits(system);
   if (rows.length === 0) return null;
   return (
     <section aria-labelledby="differences-heading" className="border border-ink/80 bg-paper-raised">
@@ -126,7 +135,7 @@ function Differences({ base, others }: { base: ComparisonScheme; others: Compari
       <ul className="flex flex-col gap-1 px-4 py-3 text-sm" data-testid="difference-sentences">
         {rows.map(({ s, d }) => (
           <li key={s.id} className="font-medium text-ink">
-            {describeDifference(s.name, base.name, d)}
+            {system === 'SI' ? describeDifferenceSi(s.name, base.name, d) : describeDifference(s.name, base.name, d)}
           </li>
         ))}
       </ul>
@@ -135,9 +144,9 @@ function Differences({ base, others }: { base: ComparisonScheme; others: Compari
           <thead>
             <tr className="border-b border-ink/60 text-right">
               <th className="label-caps px-4 py-2 text-left">Scheme</th>
-              <th className="label-caps px-3 py-2">lb</th>
-              <th className="label-caps px-3 py-2">tons</th>
-              <th className="label-caps px-3 py-2">psf</th>
+              <th className="label-caps px-3 py-2">{u.smallUnit}</th>
+              <th className="label-caps px-3 py-2">{u.bigUnit}</th>
+              <th className="label-caps px-3 py-2">{u.perAreaUnit}</th>
               <th className="label-caps px-3 py-2">%</th>
               <th className="label-caps px-3 py-2">pieces</th>
               <th className="label-caps px-4 py-2">cost</th>
@@ -147,9 +156,9 @@ function Differences({ base, others }: { base: ComparisonScheme; others: Compari
             {rows.map(({ s, d }) => (
               <tr key={s.id} className="border-b border-line text-right font-mono last:border-b-0">
                 <td className="px-4 py-2 text-left font-sans">{s.name}</td>
-                <td className="px-3 py-2">{signed(d.steelWeight_lb, int)}</td>
-                <td className="px-3 py-2">{signed(d.steelWeight_tons, one)}</td>
-                <td className="px-3 py-2">{d.steel_psf === null ? '—' : signed(d.steel_psf, two)}</td>
+                <td className="px-3 py-2">{signed(u.small(d.steelWeight_lb), int)}</td>
+                <td className="px-3 py-2">{signed(u.big(d.steelWeight_lb), one)}</td>
+                <td className="px-3 py-2">{d.steel_psf === null ? '—' : signed(u.perArea(d.steel_psf), u.perAreaFmt)}</td>
                 <td className="px-3 py-2">{d.steelWeight_pct === null ? '—' : `${signed(d.steelWeight_pct, one)} %`}</td>
                 <td className="px-3 py-2">{signed(d.pieces, int)}</td>
                 <td className="px-4 py-2">{d.cost_usd === null ? '—' : signedUsd(d.cost_usd)}</td>
@@ -176,6 +185,7 @@ export function ComparisonView({
   unitPricesLink?: ReactNode;
 }) {
   const all = comparison.schemes;
+  const { system } = useUnits();
   const [picked, setPicked] = useState<string[] | null>(null);
   const selection = picked ?? defaultSelection(all);
   const shown = useMemo(() => all.filter((s) => selection.includes(s.id)), [all, selection]);
@@ -184,7 +194,7 @@ export function ComparisonView({
   if (all.length === 0) {
     return (
       <EmptyState title="Nothing to compare yet">
-        Tonnage compares schemes by steel weight, weight per square foot, piece count and cost, level by level. Start a
+        Tonnage compares schemes by steel weight, steel per floor area, piece count and cost, level by level. Start a
         scheme on the Schemes page; it is designed when it is compared.
       </EmptyState>
     );
@@ -236,7 +246,7 @@ export function ComparisonView({
       <p className="text-sm text-ink-soft" data-testid="price-basis">
         {prices ? (
           <>
-            Costs at ${int.format(prices.steel_usd_per_ton)} per ton fabricated and erected and ${int.format(prices.connection_usd_each)} per connection
+            Costs at ${int.format(prices.steel_usd_per_ton)} per ton{system === 'SI' ? ` (short ton, ${one.format(KG_PER_SHORT_TON)} kg)` : ''} fabricated and erected and ${int.format(prices.connection_usd_each)} per connection
             {prices.example ? (
               <strong className="font-semibold text-notice"> (invented example prices, not market prices)</strong>
             ) : null}
@@ -268,7 +278,7 @@ export function ComparisonView({
         })}
       </div>
 
-      <TonnageCharts schemes={shown} />
+      <TonnageCharts schemes={shown} system={system} />
 
       <p className="text-xs text-ink-soft">{comparison.basis}</p>
     </div>
