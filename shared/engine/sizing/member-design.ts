@@ -59,7 +59,7 @@ export function designMember(input: MemberDesignInput): MemberDesignResult {
     const result = buildMemberResult(ctx, evaluateShape(ctx, k, true), true);
     if (!k.webCompact) {
       result.passes = false;
-      result.failure = `Locked shape ${k.label}: web noncompact in flexure at Fy = ${input.Fy_ksi} ksi (AISC 360-16 F4 not implemented; not permitted).`;
+      result.failure = `Locked shape ${k.label}: web noncompact in flexure at Fy = ${input.Fy_ksi} ksi (AISC 360-16 F4 is outside the engine's scope, so the shape is not permitted).`;
     } else if (!result.passes) {
       result.failure = `Locked shape ${k.label} does not pass: ratio ${result.ratio.toFixed(3)}, ${describeGoverning(result)}.`;
     }
