@@ -131,7 +131,9 @@ export function PlanCanvas({ store, design, controller, label, renderUnderlay }:
       aria-label={label}
       tabIndex={0}
       className="relative h-full w-full touch-none overflow-hidden bg-paper-raised outline-none select-none"
-      style={{ cursor }}
+      // Strict containment (sized by its parent anyway): the scale bar changing on zoom lays out
+      // and paints this box alone, not the rest of the page.
+      style={{ cursor, contain: 'strict' }}
       onPointerDown={(e) => {
         containerRef.current?.focus();
         (e.target as Element).setPointerCapture?.(e.pointerId);

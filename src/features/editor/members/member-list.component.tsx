@@ -60,7 +60,9 @@ export function MemberList({ store, design }: { store: EditorStore; design: Live
           {snap.pending ? ' · designing…' : ''}
         </p>
       </div>
-      <div className="min-h-0 flex-1 overflow-auto">
+      {/* Layout and paint containment: with thousands of rows, a DOM change elsewhere (the scale bar
+          on every zoom step) otherwise makes the browser re-walk and repaint this table. */}
+      <div className="min-h-0 flex-1 overflow-auto" style={{ contain: 'content' }}>
         <table className="w-full border-collapse text-xs" aria-describedby="member-list-heading">
           <thead className="sticky top-0 bg-paper-raised">
             <tr className="border-b border-line text-left">
