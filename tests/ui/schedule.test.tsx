@@ -40,6 +40,18 @@ describe('ScheduleTable', () => {
     expect(screen.getByText((_, el) => el?.tagName === 'P' && el.textContent === '22 of 22 members')).toBeInTheDocument();
   });
 
+  it('when a member is governed by a check, then the Governs column names it in words, never the engine id', () => {
+    renderTable();
+    const table = screen.getByRole('table', { name: 'Member schedule' });
+    expect(within(table).queryByText(/^(deflectionTotal|deflectionLive)$/)).toBeNull();
+    const words: Record<string, string> = { flexure: 'flexure', shear: 'shear', deflectionLive: 'live-load deflection', deflectionTotal: 'total-load deflection' };
+    for (const r of bodyRows()) {
+      const row = rows.find((x) => x.memberId === r.getAttribute('data-member'))!;
+      const cells = Array.from(r.querySelectorAll('td')).map((td) => td.textContent);
+      expect(cells).toContain(words[row.governing!]);
+    }
+  });
+
   it('when filtered by text, level and kind, then only matching members remain', async () => {
     const user = userEvent.setup();
     renderTable();

@@ -32,6 +32,14 @@ export interface ScheduleTableProps {
 const col = createColumnHelper<ScheduleRow>();
 const dash = '—';
 
+/** The governing check in words, as on the Member sheet (the engine reports a check id). */
+const GOVERNING_WORDS: Record<string, string> = {
+  flexure: 'flexure',
+  shear: 'shear',
+  deflectionLive: 'live-load deflection',
+  deflectionTotal: 'total-load deflection',
+};
+
 function MarkCell({ row, editable, onSave, saving }: { row: ScheduleRow; editable: boolean; onSave?: ScheduleTableProps['onSaveMark']; saving?: boolean }) {
   const [editing, setEditing] = useState(false);
   const [value, setValue] = useState(row.mark);
@@ -133,7 +141,7 @@ export function ScheduleTable({ rows, levels, basis, units, mayEditMarks, onSave
       col.accessor((r) => r.gridLocation ?? '', { id: 'gridLocation', header: 'Grid location', cell: (c) => c.getValue() || dash }),
       reaction('start', 'Start reaction'),
       reaction('end', 'End reaction'),
-      col.accessor((r) => r.governing ?? '', { id: 'governing', header: 'Governs', cell: (c) => c.getValue() || dash }),
+      col.accessor((r) => (r.governing ? (GOVERNING_WORDS[r.governing] ?? r.governing) : ''), { id: 'governing', header: 'Governs', cell: (c) => c.getValue() || dash }),
       col.accessor((r) => r.ratio ?? -1, {
         id: 'ratio',
         header: 'Ratio',
