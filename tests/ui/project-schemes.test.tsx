@@ -59,13 +59,21 @@ describe('project schemes page', () => {
     mockFetch([scheme()]);
     renderAs('drafter');
     const row = (await screen.findByRole('link', { name: 'Scheme A — beams at about 10 ft' })).closest('tr')!;
-    // 274,326 lb / 2,000 lb per ton = 137.2 t
-    expect(within(row).getByText('137.2 t')).toBeInTheDocument();
+    // 274,326 lb / 2,000 lb per short ton = 137.2 tons ("t" would read as tonnes, NIST SP 811)
+    expect(within(row).getByText('137.2 tons')).toBeInTheDocument();
     expect(within(row).getByText('6.40 psf')).toBeInTheDocument();
     expect(within(row).getByText('220 pcs')).toBeInTheDocument();
     expect(within(row).getByText('Stale · rev 2')).toBeInTheDocument();
     expect(within(row).getByRole('link', { name: 'Open plan' })).toHaveAttribute('href', `/projects/${PROJECT}/plan?scheme=s-1`);
     expect(within(row).getByRole('link', { name: 'Export' })).toHaveAttribute('href', '/api/schemes/s-1/export');
+  });
+
+  it('when a scheme weighs a whole number of tons, then it still shows one decimal, as on Tonnage', async () => {
+    mockFetch([scheme({ design: { ...scheme().design, steelWeight_lb: 300000 } })]);
+    renderAs('drafter');
+    const row = (await screen.findByRole('link', { name: 'Scheme A — beams at about 10 ft' })).closest('tr')!;
+    // 300,000 lb / 2,000 lb per short ton = 150.0 tons
+    expect(within(row).getByText('150.0 tons')).toBeInTheDocument();
   });
 
   it('when a drafter opens the page, then no create, clone, archive or delete controls are shown', async () => {

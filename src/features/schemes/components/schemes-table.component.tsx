@@ -11,16 +11,16 @@ import { useUpdateScheme } from '../api/update-scheme.api';
 import { SchemeRevisions } from './scheme-revisions.component';
 
 const dateFormat = new Intl.DateTimeFormat(undefined, { year: 'numeric', month: 'short', day: '2-digit' });
-const weightFormat = new Intl.NumberFormat(undefined, { maximumFractionDigits: 1 });
+const weightFormat = new Intl.NumberFormat(undefined, { minimumFractionDigits: 1, maximumFractionDigits: 1 });
 
 function formatDate(iso: string): string {
   const date = new Date(iso);
   return Number.isNaN(date.getTime()) ? '—' : dateFormat.format(date);
 }
 
-/** Steel weight in US tons (2,000 lb), the unit tonnage is priced in. */
+/** Steel weight in US tons (2,000 lb), the unit tonnage is priced in; spelled out, since "t" is the tonne (NIST SP 811). */
 function tons(lb: number): string {
-  return `${weightFormat.format(lb / 2000)} t`;
+  return `${weightFormat.format(lb / 2000)} tons`;
 }
 
 function DesignCell({ scheme }: { scheme: SchemeSummary }) {
