@@ -4,6 +4,7 @@ import { loadSession } from '../auth/auth.middleware';
 import { requireSameOrigin } from '../middleware/csrf.middleware';
 import { apiNotFound } from '../middleware/error.middleware';
 import { auditRoutes } from './audit.routes';
+import { calcBookRoutes } from './calc-book.routes';
 import { comparisonRoutes } from './comparison.routes';
 import { firmsRoutes } from './firms.routes';
 import { healthRoutes } from './health.routes';
@@ -42,6 +43,7 @@ export function apiRoutes(ctx: AppContext): Router {
   api.use('/schemes', marksRoutes(ctx));
   api.use('/schemes', scheduleRoutes(ctx));
   api.use('/schemes', planSheetRoutes(ctx));
+  api.use('/schemes', calcBookRoutes(ctx));
   // Review (issue 7): status, comments, activity; Tonnage comparison; firm unit prices.
   api.use('/schemes', schemeStatusRoutes(ctx));
   api.use('/schemes', schemeCommentsRoutes(ctx));

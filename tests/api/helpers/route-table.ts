@@ -385,5 +385,9 @@ function draftingRows(): RouteCase[] {
       method: 'GET', route: '/api/schemes/:id/plan-sheet.pdf', allowed: readers, okStatus: 200,
       path: scheme('own', '/plan-sheet.pdf?level=L2'), foreignPath: scheme('foreign', '/plan-sheet.pdf'),
     },
+    {
+      method: 'GET', route: '/api/schemes/:id/calc-book.pdf', allowed: readers, okStatus: 200,
+      path: scheme('own', '/calc-book.pdf?level=L2'), foreignPath: scheme('foreign', '/calc-book.pdf'),
+    },
   ];
 }

@@ -32,4 +32,5 @@ export function useSchedule(schemeId: string) {
 export const exportLinks = (schemeId: string) => ({
   csv: `/api/schemes/${encodeURIComponent(schemeId)}/schedule.csv`,
   pdf: `/api/schemes/${encodeURIComponent(schemeId)}/plan-sheet.pdf`,
+  calcBook: `/api/schemes/${encodeURIComponent(schemeId)}/calc-book.pdf`,
 });

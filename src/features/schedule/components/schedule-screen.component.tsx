@@ -95,6 +95,9 @@ export function ScheduleScreen({ schemes, mayEditMarks, renderSheet }: ScheduleS
           <a className={buttonClasses('secondary')} href={links.pdf} download>
             Download plan sheet (PDF)
           </a>
+          <a className={buttonClasses('secondary')} href={links.calcBook} download>
+            Calc book (PDF)
+          </a>
           {renderSheet ? (
             <Button variant={showSheet ? 'primary' : 'secondary'} aria-pressed={showSheet} onClick={() => setShowSheet((v) => !v)}>
               {showSheet ? 'Hide plan sheet' : 'View plan sheet'}

@@ -1,0 +1,55 @@
+import { buildCalcBook, type CalcBook, type CalcBookMembers } from '../../shared/report/calc-book.report';
+import { AppError } from '../errors/app-error';
+import { renderCalcBookPdf } from '../pdf/calc-book.pdf';
+import type { SchemeServiceContext } from './plan-store.service';
+import { loadSchemeDrafting } from './schedule.service';
+import { fileSlug } from './schemes.service';
+
+// The calc book of a scheme: its current design (designed first when stale) written up as
+// the calculation report an engineer checks before sealing, as a document model and a PDF.
+
+export interface CalcBookOptions {
+  members: CalcBookMembers;
+  levelId?: string;
+  /** The signed-in person, for "prepared by". */
+  preparedBy: string;
+  /** Issue date; today when absent. */
+  date?: Date;
+}
+
+export async function getCalcBook(
+  ctx: SchemeServiceContext,
+  schemeId: string,
+  options: CalcBookOptions,
+): Promise<{ scheme: { id: string; name: string; revision: number }; book: CalcBook }> {
+  const { scheme, plan, design } = await loadSchemeDrafting(ctx, schemeId);
+  if (options.levelId !== undefined && !plan.levels.some((l) => l.id === options.levelId)) {
+    throw new AppError(404, 'not_found', `Level "${options.levelId}" is not a level of this scheme.`);
+  }
+  const project = await ctx.db.models.Project.findByPk(scheme.projectId);
+  const p = project?.get({ plain: true });
+  const book = buildCalcBook({
+    plan,
+    design,
+    project: { name: p?.name ?? '', number: p?.number ?? null, client: p?.client ?? null, address: p?.address ?? null },
+    scheme: { name: scheme.name, revision: scheme.revision },
+    designedRevision: design.revision,
+    designedAt: design.designedAt,
+    date: (options.date ?? new Date()).toISOString().slice(0, 10),
+    preparedBy: options.preparedBy,
+    options: { members: options.members, levelId: options.levelId },
+  });
+  return { scheme: { id: scheme.id, name: scheme.name, revision: scheme.revision }, book };
+}
+
+export async function getCalcBookPdf(
+  ctx: SchemeServiceContext,
+  schemeId: string,
+  options: CalcBookOptions,
+): Promise<{ filename: string; pdf: Buffer; caution: string }> {
+  const { scheme, book } = await getCalcBook(ctx, schemeId, options);
+  const levelPart = options.levelId ? `-${fileSlug(options.levelId)}` : '';
+  const membersPart = options.members === 'all' ? '-all' : '';
+  const pdf = await renderCalcBookPdf(book, { author: options.preparedBy });
+  return { filename: `${fileSlug(scheme.name)}-calc-book${levelPart}${membersPart}-r${scheme.revision}.pdf`, pdf, caution: book.caution };
+}

@@ -1,0 +1,639 @@
+/**
+ * Calc book: the printable calculation report of a scheme, as a document model (sections of
+ * headings, paragraphs, lists and tables) built from the plan and its designScheme result.
+ * Pure: the PDF renderer (server/pdf/calc-book.pdf.ts) only lays it out, so everything the
+ * report states is testable here. Numbers stay numbers (CalcNumber) until they are drawn.
+ */
+import { E_KSI, STANDARDS } from '../engine/index';
+import type { MemberCheck, MemberLoad, SchemeMember, SchemeResult } from '../engine/index';
+import type { Plan } from '../schemas/plan.schema';
+
+/** The notice on the cover and on every page of the calc book (product.md, Cautions). */
+export const CALC_BOOK_CAUTION =
+  'Results are an aid to a licensed engineer, who must check them; the local building code and the engineer of record govern.';
+
+/** Code editions the engine implements (design-basis.md), cited as the report states them. */
+export const CODE_EDITIONS: readonly { code: string; scope: string }[] = [
+  { code: 'AISC 360-16', scope: 'Specification for Structural Steel Buildings: flexure (Chapter F), shear (Chapter G), Table B4.1b slenderness' },
+  { code: 'ASCE 7-16 §2.3.1', scope: 'Load combinations for strength design (LRFD)' },
+  { code: 'ASCE 7-16 §2.4.1', scope: 'Load combinations for allowable stress design (ASD)' },
+  { code: 'ASCE 7-16 §4.7', scope: 'Reduction in uniformly distributed live loads (Eq. 4.7-1, Table 4.7-1)' },
+  { code: 'IBC Table 1604.3', scope: 'Deflection limits (serviceability, unfactored loads)' },
+  { code: 'AISC Shapes Database v15.0', scope: 'W-shape dimensions and properties' },
+];
+
+/** What the engine assumes, and where it takes the conservative reading of a clause. */
+export const ENGINE_ASSUMPTIONS: readonly string[] = [
+  'Members are simple spans with pinned (shear-connected) ends; no continuity, cantilevers or back-spans.',
+  'LRFD combinations 3 and 4 of ASCE 7-16 §2.3.1 use 1.0L; the 0.5L of exception 1 is not taken (conservative).',
+  'Roof live load is not reduced (ASCE 7-16 §4.8.2 not applied; conservative), and live load on roof levels is not reduced by §4.7.',
+  'Partition load is treated as live load and never reduced. Live loads over 100 psf are not reduced (§4.7.3); the 20 % allowance for members supporting two or more floors is not taken (conservative).',
+  'The tributary area AT of a girder is the floor area whose load it actually carries, traced through the framing (the beams pass their reactions in proportion). This is smaller than "girder span × half the beam spans", so it reduces less (conservative reading of ASCE 7-16 §4.7).',
+  'Columns: live load reduced on the cumulative tributary area with KLL = 4 (Table 4.7-1), and L ≥ 0.40 L0 once two or more floors contribute; column self weight is not included (columns are not sized).',
+  'The compression flange is braced continuously only where a deck spanning perpendicular to the member covers its whole span; otherwise it is braced at the points where other members frame in. Deck parallel to a member is not counted as bracing (bare-steel stage; conservative).',
+  'Cb is computed by AISC 360-16 Eq. F1-1 from the member\'s own moment diagram for each segment and combination; where the engineer overrides Lb, Cb = 1.0 (conservative).',
+  'Total-load deflection is computed under all load cases together (D + L + Lr + S), whatever the project\'s total-deflection setting (conservative).',
+  'Member self weight is added as a uniform dead load from the chosen shape, and sizing is repeated until the shape no longer changes.',
+];
+
+export type CalcBookMembers = 'all' | 'distinct';
+
+export interface CalcBookOptions {
+  /** 'distinct' (default): one member per mark, the one that works hardest. */
+  members?: CalcBookMembers;
+  /** Only this level's members and columns. */
+  levelId?: string;
+}
+
+export interface CalcBookInput {
+  plan: Plan;
+  design: SchemeResult;
+  project: { name: string; number?: string | null; client?: string | null; address?: string | null };
+  scheme: { name: string; revision: number };
+  /** Plan revision the design was computed from, and when. */
+  designedRevision?: number;
+  designedAt?: string;
+  /** Issue date, YYYY-MM-DD. */
+  date: string;
+  preparedBy: string;
+  options?: CalcBookOptions;
+}
+
+/** A number kept as a number; `digits` decimals when drawn. */
+export interface CalcNumber {
+  n: number;
+  digits: number;
+}
+export type CalcCell = string | CalcNumber | null;
+
+export interface CalcColumn {
+  label: string;
+  /** Relative width. */
+  weight: number;
+  align?: 'left' | 'right';
+}
+
+export type CalcBlock =
+  | { type: 'heading'; text: string }
+  | { type: 'paragraph'; text: string; tone?: 'normal' | 'soft' | 'strong' }
+  | { type: 'caution'; text: string }
+  | { type: 'list'; items: string[] }
+  | { type: 'fields'; rows: [string, CalcCell][] }
+  | { type: 'table'; caption?: string; columns: CalcColumn[]; rows: CalcCell[][] };
+
+export interface CalcSection {
+  /** Stable id: "cover", "attention", "basis", "zones", "level-L2", "member-b2", "columns", "equilibrium". */
+  id: string;
+  title: string;
+  blocks: CalcBlock[];
+  /** Member sections: which member and mark. */
+  memberId?: string;
+  mark?: string;
+  /** Start a new page before this section. */
+  pageBreakBefore?: boolean;
+}
+
+export interface CalcBook {
+  title: string;
+  caution: string;
+  /** Every distinct mark in the report, in mark order. */
+  marks: string[];
+  sections: CalcSection[];
+  /** Short running text for page footers. */
+  runningTitle: string;
+}
+
+const num = (n: number, digits: number): CalcNumber => ({ n, digits });
+const opt = (n: number | null | undefined, digits: number): CalcCell => (n === null || n === undefined || !Number.isFinite(n) ? null : num(n, digits));
+
+/** Formats a CalcNumber as the report prints it (thousands separated). */
+export function formatCalcNumber(c: CalcNumber): string {
+  const v = Object.is(Math.round(c.n * 10 ** c.digits), -0) ? 0 : c.n;
+  return v.toLocaleString('en-US', { minimumFractionDigits: c.digits, maximumFractionDigits: c.digits });
+}
+
+/** The text a cell prints. */
+export function cellText(c: CalcCell): string {
+  if (c === null) return '—';
+  return typeof c === 'string' ? c : formatCalcNumber(c);
+}
+
+const byMark = new Intl.Collator('en-US', { numeric: true, sensitivity: 'base' });
+
+/** Marks in drafting order: level prefix and number compared as numbers (2B2 before 2B10). */
+export function compareMarks(a: string, b: string): number {
+  return byMark.compare(a, b);
+}
+
+const CHECK_TITLE: Record<string, string> = {
+  flexure: 'Flexure',
+  shear: 'Shear',
+  deflectionLive: 'Live-load deflection',
+  deflectionTotal: 'Total-load deflection',
+};
+
+/** Members that fail a check, could not be designed or have a plan problem against them. */
+function attentionReasons(m: SchemeMember, problems: SchemeResult['problems']): string[] {
+  const reasons: string[] = [];
+  if (!m.design) reasons.push('not designed');
+  else if (!m.design.passes) reasons.push(m.design.failure ?? `${CHECK_TITLE[m.design.governing] ?? m.design.governing} ratio ${m.design.ratio.toFixed(3)} > 1.0`);
+  for (const p of problems ?? []) {
+    if (p.elementId !== m.id) continue;
+    // The engine's own "member fails" problem repeats the failure reason above.
+    if (p.code === 'member-fails' && m.design && !m.design.passes) continue;
+    reasons.push(`${p.severity}: ${p.message}`);
+  }
+  if (reasons.length === 0 && !m.passes) reasons.push('does not pass');
+  return reasons;
+}
+
+function describeBracing(m: SchemeMember): string {
+  const b = m.bracing;
+  if (b === 'continuous') return 'continuous (deck across the span)';
+  if (b === 'none') return 'at the supports only';
+  return b.points_ft.length === 0 ? 'at the supports only' : `at ${b.points_ft.map((x) => `${x.toFixed(2)} ft`).join(', ')} (members framing in)`;
+}
+
+function loadRow(l: MemberLoad): CalcCell[] {
+  const src = l.source ?? '';
+  switch (l.kind) {
+    case 'uniform':
+      return [l.case, 'uniform', num(l.w_klf, 3), 'klf', 'full span', src];
+    case 'partial':
+      return [l.case, 'partial uniform', num(l.w_klf, 3), 'klf', `${l.from_ft.toFixed(2)}–${l.to_ft.toFixed(2)} ft`, src];
+    case 'linear':
+      return [l.case, 'linear', num(l.w1_klf, 3), `→ ${l.w2_klf.toFixed(3)} klf`, `${l.from_ft.toFixed(2)}–${l.to_ft.toFixed(2)} ft`, src];
+    case 'point':
+      return [l.case, 'point', num(l.P_kip, 2), 'kip', `at ${l.x_ft.toFixed(2)} ft`, src];
+  }
+}
+
+const resistance = (c: MemberCheck): string =>
+  c.phi !== undefined ? `φ = ${c.phi.toFixed(2)} (LRFD)` : c.omega !== undefined ? `Ω = ${c.omega.toFixed(2)} (ASD)` : '—';
+
+/** The key working of a check: quantity, value, unit, where it comes from. */
+export function checkWorking(c: MemberCheck): CalcCell[][] {
+  const rows: CalcCell[][] = [];
+  const add = (q: string, v: number | null | undefined, digits: number, unit: string, ref: string) => {
+    if (v === undefined) return;
+    rows.push([q, opt(v, digits), unit, ref]);
+  };
+  if (c.name === 'flexure') {
+    if (c.from_ft !== undefined && c.to_ft !== undefined) rows.push(['Segment', `${c.from_ft.toFixed(2)}–${c.to_ft.toFixed(2)} ft`, '', 'governing unbraced segment']);
+    add('λf = bf/2tf', c.lambda_f, 2, '', 'AISC 360-16 Table B4.1b, case 10');
+    add('λpf', c.lambda_pf, 2, '', '0.38√(E/Fy)');
+    add('λrf', c.lambda_rf, 2, '', '1.0√(E/Fy)');
+    if (c.flangeClass) rows.push(['Flange', c.flangeClass, '', 'Table B4.1b']);
+    add('λw = h/tw', c.lambda_w, 2, '', 'AISC 360-16 Table B4.1b, case 15');
+    add('λpw', c.lambda_pw, 2, '', '3.76√(E/Fy)');
+    add('Lp', c.Lp_ft, 2, 'ft', 'Eq. F2-5');
+    add('Lr', c.Lr_ft, 2, 'ft', 'Eq. F2-6');
+    add('Lb', c.Lb_ft, 2, 'ft', 'unbraced length');
+    add('Cb', c.Cb, 3, '', 'Eq. F1-1');
+    add('MA', c.MA_kipft, 1, 'kip-ft', 'quarter points, Eq. F1-1');
+    add('MB', c.MB_kipft, 1, 'kip-ft', 'midpoint');
+    add('MC', c.MC_kipft, 1, 'kip-ft', 'three-quarter point');
+    add('Mp = Fy Zx', c.Mp_kipft, 1, 'kip-ft', 'Eq. F2-1');
+    add('Fcr', c.Fcr_ksi, 2, 'ksi', 'Eq. F2-4 (only where Lb > Lr)');
+    add('Mn (FLB)', c.Mn_FLB_kipft, 1, 'kip-ft', 'Eq. F3-1 (noncompact flange)');
+    add('Mn', c.Mn_kipft, 1, 'kip-ft', `${c.equation}${c.limitState ? `, ${c.limitState}` : ''}`);
+  } else if (c.name === 'shear') {
+    add('Aw = d tw', c.Aw_in2, 2, 'in²', 'AISC 360-16 G2.1');
+    add('h/tw', c.h_tw, 2, '', '');
+    add('limit', c.h_tw_limit, 2, '', c.shearCase === 'G2.1(a)' ? '2.24√(E/Fy), G2.1(a)' : '1.10√(kv E/Fy), Eq. G2-3');
+    if (c.kv !== undefined && c.kv !== null) add('kv', c.kv, 2, '', 'G2.1(b)(2), no stiffeners');
+    add('Cv1', c.Cv1, 3, '', c.shearCase === 'G2.1(a)' ? 'G2.1(a)' : 'Eq. G2-3 / G2-4');
+    add('Vn = 0.6 Fy Aw Cv1', c.Vn_kip, 1, 'kip', 'Eq. G2-1');
+  } else {
+    add('Ix', c.Ix_in4, 0, 'in⁴', 'AISC Shapes Database v15.0');
+    add('Limit span/n, n', c.limit_n, 0, '', 'IBC Table 1604.3');
+    add('Maximum at', c.at_ft, 2, 'ft', 'from the start support');
+    if (c.loadCase) rows.push(['Loads', c.loadCase, '', 'unfactored']);
+  }
+  if (c.phi !== undefined || c.omega !== undefined) rows.push(['Resistance', resistance(c), '', c.name === 'shear' ? 'AISC 360-16 G1, G2.1' : 'AISC 360-16 F1']);
+  return rows;
+}
+
+function memberSection(m: SchemeMember, others: string[], levelName: string, reasons: string[]): CalcSection {
+  const d = m.design;
+  const title = `${m.mark} — ${m.shape ?? 'no shape'} (${m.kind} ${m.id})`;
+  const blocks: CalcBlock[] = [];
+  if (reasons.length > 0) blocks.push({ type: 'caution', text: `Needs attention: ${reasons.join('; ')}` });
+  blocks.push({
+    type: 'fields',
+    rows: [
+      ['Level', levelName],
+      ['Span, ft', num(m.span_ft, 2)],
+      ['Shape', d ? `${d.shape}${d.locked ? ' (locked)' : ' (selected, lightest passing)'}` : (m.shape ?? '—')],
+      ['Self weight, plf', num(m.weight_plf, 0)],
+      ['Tributary width, ft', num(m.tributaryWidth_ft, 2)],
+      ['Tributary area, ft²', num(m.tributaryArea_ft2, 1)],
+      ['AT for live load reduction, ft²', num(m.reducibleArea_ft2, 1)],
+      ['KLL (ASCE 7-16 Table 4.7-1)', num(m.KLL, 0)],
+      ['Live load reduction factor (Eq. 4.7-1)', num(m.liveReductionFactor, 3)],
+      ['Compression flange braced', describeBracing(m)],
+      ...(others.length > 0 ? ([['Same mark, not printed', others.join(', ')]] as [string, CalcCell][]) : []),
+    ],
+  });
+  blocks.push({
+    type: 'table',
+    caption: 'Loads (unfactored; reducible live already reduced)',
+    columns: [
+      { label: 'Case', weight: 0.6 },
+      { label: 'Kind', weight: 1.3 },
+      { label: 'Value', weight: 0.9, align: 'right' },
+      { label: 'Unit', weight: 1 },
+      { label: 'Where', weight: 1.3 },
+      { label: 'Source', weight: 4 },
+    ],
+    rows: m.loads.map(loadRow),
+  });
+  if (!d) {
+    blocks.push({ type: 'paragraph', text: 'This member could not be designed; see Needs attention.', tone: 'strong' });
+    return { id: `member-${m.id}`, title, blocks, memberId: m.id, mark: m.mark };
+  }
+  blocks.push({ type: 'paragraph', text: `Combinations considered (${d.method}): ${d.combinations.map((c) => `${c.name} [${c.clause}]`).join('; ')}.`, tone: 'soft' });
+  blocks.push({
+    type: 'table',
+    caption: 'Unbraced segments (flexure)',
+    columns: [
+      { label: 'From–to, ft', weight: 1.4 },
+      { label: 'Lb, ft', weight: 0.9, align: 'right' },
+      { label: 'Cb', weight: 0.8, align: 'right' },
+      { label: 'Combination', weight: 1.6 },
+      { label: 'Mr, kip-ft', weight: 1.1, align: 'right' },
+      { label: 'Mc, kip-ft', weight: 1.1, align: 'right' },
+      { label: 'Mn, kip-ft', weight: 1.1, align: 'right' },
+      { label: 'Ratio', weight: 0.8, align: 'right' },
+    ],
+    rows: d.segments.map((s) => [
+      `${s.from_ft.toFixed(2)}–${s.to_ft.toFixed(2)}`,
+      num(s.Lb_ft, 2),
+      num(s.Cb, 3),
+      s.combination,
+      num(s.Mr_kipft, 1),
+      num(s.Mc_kipft, 1),
+      num(s.Mn_kipft, 1),
+      num(s.ratio, 3),
+    ]),
+  });
+  blocks.push({
+    type: 'table',
+    caption: `Checks (${d.method === 'LRFD' ? 'capacity = φRn' : 'capacity = Rn/Ω'}; deflection capacity = span/n)`,
+    columns: [
+      { label: 'Check', weight: 1.5 },
+      { label: 'Clause', weight: 1.9 },
+      { label: 'Equation', weight: 1.6 },
+      { label: 'Combination', weight: 1.3 },
+      { label: 'Demand', weight: 0.9, align: 'right' },
+      { label: 'Capacity', weight: 0.9, align: 'right' },
+      { label: 'Unit', weight: 0.7 },
+      { label: 'Ratio', weight: 0.7, align: 'right' },
+    ],
+    rows: d.checks.map((c) => [
+      CHECK_TITLE[c.name] ?? c.name,
+      c.clause,
+      c.equation,
+      c.combination,
+      num(c.demand, c.unit === 'in' ? 3 : 1),
+      num(c.capacity, c.unit === 'in' ? 3 : 1),
+      c.unit,
+      num(c.ratio, 3),
+    ]),
+  });
+  for (const c of d.checks) {
+    const rows = checkWorking(c);
+    if (rows.length === 0) continue;
+    blocks.push({
+      type: 'table',
+      caption: `Working — ${CHECK_TITLE[c.name] ?? c.name} (${c.clause})`,
+      columns: [
+        { label: 'Quantity', weight: 1.8 },
+        { label: 'Value', weight: 1.2, align: 'right' },
+        { label: 'Unit', weight: 0.8 },
+        { label: 'Reference', weight: 3 },
+      ],
+      rows,
+    });
+  }
+  const gov = d.checks.find((c) => c.name === d.governing);
+  blocks.push({
+    type: 'paragraph',
+    tone: 'strong',
+    text: `Governing: ${CHECK_TITLE[d.governing] ?? d.governing}${gov ? ` (${gov.clause}, ${gov.combination})` : ''}, ratio ${d.ratio.toFixed(3)} — ${d.passes ? 'passes' : 'DOES NOT PASS'}.${d.failure ? ` ${d.failure}` : ''}`,
+  });
+  const end = (label: string, r: SchemeMember['reactions']['start']): CalcCell[] => [
+    label,
+    r.supportedBy ?? 'nothing',
+    num(r.D_kip, 2),
+    num(r.L_kip, 2),
+    num(r.Lunreduced_kip, 2),
+    num(r.Lr_kip, 2),
+    num(r.S_kip, 2),
+  ];
+  blocks.push({
+    type: 'table',
+    caption: 'End reactions, unfactored, kip (with self weight)',
+    columns: [
+      { label: 'End', weight: 0.8 },
+      { label: 'Supported by', weight: 1.5 },
+      { label: 'D', weight: 1, align: 'right' },
+      { label: 'L reduced', weight: 1, align: 'right' },
+      { label: 'L unreduced', weight: 1, align: 'right' },
+      { label: 'Lr', weight: 0.8, align: 'right' },
+      { label: 'S', weight: 0.8, align: 'right' },
+    ],
+    rows: [end('start', m.reactions.start), end('end', m.reactions.end)],
+  });
+  return { id: `member-${m.id}`, title, blocks, memberId: m.id, mark: m.mark };
+}
+
+/** Ranks a member for "the one printed for its mark": failing or problem first, then the highest ratio. */
+function workHarder(a: SchemeMember, b: SchemeMember): number {
+  const fa = a.passes ? 0 : 1;
+  const fb = b.passes ? 0 : 1;
+  if (fa !== fb) return fb - fa;
+  return (b.ratio ?? Infinity) - (a.ratio ?? Infinity) || a.id.localeCompare(b.id);
+}
+
+const deflLimit = (n: number | null) => (n === null ? 'not checked' : `span/${n}`);
+
+export function buildCalcBook(input: CalcBookInput): CalcBook {
+  const { plan, design, project, scheme } = input;
+  const membersOption: CalcBookMembers = input.options?.members ?? 'distinct';
+  const levelId = input.options?.levelId;
+  const basis = plan.designBasis;
+  const levelName = new Map(plan.levels.map((l) => [l.id, l.name] as const));
+  const levels = plan.levels.filter((l) => levelId === undefined || l.id === levelId);
+  const members = (design.members ?? []).filter((m) => levelId === undefined || m.level === levelId);
+  const problems = design.problems ?? [];
+
+  const flagged = new Map<string, string[]>();
+  for (const m of members) {
+    const reasons = attentionReasons(m, problems);
+    if (reasons.length > 0) flagged.set(m.id, reasons);
+  }
+
+  const sections: CalcSection[] = [];
+
+  // Cover
+  const failing = members.filter((m) => !m.passes).length;
+  sections.push({
+    id: 'cover',
+    title: 'Calc book',
+    blocks: [
+      { type: 'heading', text: `${project.name} — ${scheme.name}` },
+      {
+        type: 'fields',
+        rows: [
+          ['Project', project.name],
+          ...(project.number ? ([['Project number', project.number]] as [string, CalcCell][]) : []),
+          ...(project.client ? ([['Client', project.client]] as [string, CalcCell][]) : []),
+          ...(project.address ? ([['Address', project.address]] as [string, CalcCell][]) : []),
+          ['Scheme', scheme.name],
+          ['Plan revision', `${scheme.revision}${input.designedRevision !== undefined && input.designedRevision !== scheme.revision ? ` (design is of revision ${input.designedRevision})` : ''}`],
+          ...(input.designedAt ? ([['Designed', input.designedAt.slice(0, 16).replace('T', ' ') + ' UTC']] as [string, CalcCell][]) : []),
+          ['Date', input.date],
+          ['Prepared by', input.preparedBy],
+          ['Design method', basis.method === 'LRFD' ? 'LRFD (load and resistance factor design)' : 'ASD (allowable strength design)'],
+          ['Levels', levels.map((l) => l.name).join(', ') || '—'],
+          ['Members', `${members.length} (${new Set(members.map((m) => m.mark)).size} marks), ${failing} failing`],
+          ['Members printed', membersOption === 'all' ? 'every member' : 'one per mark (the one that works hardest), plus every member that needs attention'],
+        ],
+      },
+      { type: 'caution', text: CALC_BOOK_CAUTION },
+      { type: 'paragraph', tone: 'soft', text: `Engine notice: ${design.caution}` },
+    ],
+  });
+
+  // Needs attention
+  const planWide = problems.filter((p) => !p.elementId || !members.some((m) => m.id === p.elementId)).filter((p) => levelId === undefined || !p.elementId);
+  const attentionRows: CalcCell[][] = members
+    .filter((m) => flagged.has(m.id))
+    .sort((a, b) => compareMarks(a.mark, b.mark) || a.id.localeCompare(b.id))
+    .map((m) => [m.mark, m.id, m.shape ?? '—', opt(m.ratio, 3), m.governing ? (CHECK_TITLE[m.governing] ?? m.governing) : '—', flagged.get(m.id)!.join('; ')]);
+  sections.push({
+    id: 'attention',
+    title: 'Needs attention',
+    blocks:
+      attentionRows.length === 0 && planWide.length === 0
+        ? [{ type: 'paragraph', text: 'Every member printed here passes every check, and the plan has no problems.' }]
+        : [
+            ...(attentionRows.length > 0
+              ? [
+                  {
+                    type: 'table',
+                    columns: [
+                      { label: 'Mark', weight: 0.7 },
+                      { label: 'Member', weight: 0.8 },
+                      { label: 'Shape', weight: 1 },
+                      { label: 'Ratio', weight: 0.7, align: 'right' },
+                      { label: 'Governing', weight: 1.2 },
+                      { label: 'Why', weight: 4.5 },
+                    ],
+                    rows: attentionRows,
+                  } as CalcBlock,
+                ]
+              : []),
+            ...(planWide.length > 0 ? [{ type: 'list', items: planWide.map((p) => `${p.severity}: ${p.message}`) } as CalcBlock] : []),
+          ],
+  });
+
+  // Basis of design
+  sections.push({
+    id: 'basis',
+    title: 'Basis of design',
+    pageBreakBefore: true,
+    blocks: [
+      { type: 'heading', text: 'Code editions' },
+      {
+        type: 'table',
+        columns: [
+          { label: 'Standard', weight: 1.6 },
+          { label: 'Used for', weight: 4 },
+        ],
+        rows: CODE_EDITIONS.map((c) => [c.code, c.scope]),
+      },
+      { type: 'paragraph', tone: 'soft', text: `Engine standards: ${STANDARDS.join(', ')}.` },
+      { type: 'heading', text: 'Project settings' },
+      {
+        type: 'fields',
+        rows: [
+          ['Method', basis.method === 'LRFD' ? 'LRFD, ASCE 7-16 §2.3.1 combinations' : 'ASD, ASCE 7-16 §2.4.1 combinations'],
+          ['Steel Fy, ksi', num(basis.Fy_ksi, 0)],
+          ['E, ksi', num(E_KSI, 0)],
+          ['Live-load deflection limit', deflLimit(basis.deflectionLimits.live)],
+          ['Total-load deflection limit', deflLimit(basis.deflectionLimits.total)],
+          [
+            'Total deflection setting',
+            `${basis.totalDeflectionIncludes === 'superimposedDeadAndLive' ? 'superimposed dead + live' : 'dead + live'}; computed with all loads (see assumptions)`,
+          ],
+          ['Live load reduction (ASCE 7-16 §4.7)', basis.liveLoadReduction ? 'on' : 'off (no reduction taken)'],
+        ],
+      },
+      { type: 'heading', text: 'Assumptions and conservative readings' },
+      { type: 'list', items: [...ENGINE_ASSUMPTIONS] },
+    ],
+  });
+
+  // Load zones
+  const usedZones = new Set(plan.decks.filter((dk) => levelId === undefined || dk.level === levelId).map((dk) => dk.zone));
+  sections.push({
+    id: 'zones',
+    title: 'Load zones',
+    blocks: [
+      {
+        type: 'table',
+        caption: 'Area loads, psf',
+        columns: [
+          { label: 'Zone', weight: 2.2 },
+          { label: 'Dead', weight: 0.8, align: 'right' },
+          { label: 'Superimposed', weight: 1.2, align: 'right' },
+          { label: 'Partitions', weight: 1, align: 'right' },
+          { label: 'Live', weight: 0.8, align: 'right' },
+          { label: 'Reducible', weight: 0.9 },
+          { label: 'Roof live', weight: 0.9, align: 'right' },
+          { label: 'Snow', weight: 0.8, align: 'right' },
+        ],
+        rows: plan.zones
+          .filter((z) => levelId === undefined || usedZones.has(z.id))
+          .map((z) => [z.name || z.id, num(z.dead_psf, 1), num(z.superimposedDead_psf, 1), num(z.partition_psf, 1), num(z.live_psf, 1), z.liveReducible ? 'yes' : 'no', num(z.roofLive_psf, 1), num(z.snow_psf, 1)]),
+      },
+      ...(plan.pointLoads.length + plan.lineLoads.length > 0
+        ? [{ type: 'paragraph', tone: 'soft', text: `Placed loads: ${plan.pointLoads.length} point load(s) and ${plan.lineLoads.length} line load(s); each appears in the loads of the member that carries it, with its source.` } as CalcBlock]
+        : []),
+    ],
+  });
+
+  // Members by level
+  const printed: SchemeMember[] = [];
+  const othersOf = new Map<string, string[]>();
+  const byMarkGroup = new Map<string, SchemeMember[]>();
+  for (const m of members) {
+    const key = `${m.level}|${m.mark}`;
+    const g = byMarkGroup.get(key);
+    if (g) g.push(m);
+    else byMarkGroup.set(key, [m]);
+  }
+  for (const g of byMarkGroup.values()) {
+    const ranked = [...g].sort(workHarder);
+    const chosen = membersOption === 'all' ? ranked : ranked.filter((m, i) => i === 0 || flagged.has(m.id));
+    for (const m of chosen) {
+      printed.push(m);
+      if (membersOption === 'distinct') othersOf.set(m.id, g.filter((x) => !chosen.includes(x)).map((x) => x.id));
+    }
+  }
+  for (const level of levels) {
+    const ofLevel = printed.filter((m) => m.level === level.id).sort((a, b) => compareMarks(a.mark, b.mark) || a.id.localeCompare(b.id));
+    const all = members.filter((m) => m.level === level.id);
+    sections.push({
+      id: `level-${level.id}`,
+      title: `${level.name} — members`,
+      pageBreakBefore: true,
+      blocks: [
+        {
+          type: 'table',
+          caption: `${all.length} member(s), ${new Set(all.map((m) => m.mark)).size} mark(s); elevation ${level.elevation_ft} ft${level.roof ? ', roof' : ''}`,
+          columns: [
+            { label: 'Mark', weight: 0.8 },
+            { label: 'Members', weight: 2.2 },
+            { label: 'Shape', weight: 1.1 },
+            { label: 'Span, ft', weight: 0.9, align: 'right' },
+            { label: 'Ratio', weight: 0.8, align: 'right' },
+            { label: 'Governing', weight: 1.5 },
+          ],
+          rows: [...new Set(all.map((m) => m.mark))].sort(compareMarks).map((mark) => {
+            const g = all.filter((m) => m.mark === mark).sort(workHarder);
+            return [mark, g.map((m) => m.id).join(', '), g[0].shape ?? '—', num(g[0].span_ft, 2), opt(g[0].ratio, 3), g[0].governing ? (CHECK_TITLE[g[0].governing] ?? g[0].governing) : '—'];
+          }),
+        },
+      ],
+    });
+    for (const m of ofLevel) sections.push(memberSection(m, othersOf.get(m.id) ?? [], level.name, flagged.get(m.id) ?? []));
+  }
+
+  // Column stack
+  const columns = (design.columns ?? []).filter((c) => levelId === undefined || c.levels.some((l) => l.level === levelId));
+  sections.push({
+    id: 'columns',
+    title: 'Column stack',
+    pageBreakBefore: true,
+    blocks:
+      columns.length === 0
+        ? [{ type: 'paragraph', text: 'No columns carry framing on the levels printed.' }]
+        : [
+            {
+              type: 'paragraph',
+              tone: 'soft',
+              text: 'Cumulative from the top down, unfactored kip; live reduced on the cumulative AT with KLL = 4 (ASCE 7-16 §4.7.2, Eq. 4.7-1). Pr is the largest combination. Column self weight not included.',
+            },
+            {
+              type: 'table',
+              columns: [
+                { label: 'Column', weight: 1 },
+                { label: 'Level', weight: 1.3 },
+                { label: 'D', weight: 0.9, align: 'right' },
+                { label: 'L reduced', weight: 1, align: 'right' },
+                { label: 'L unreduced', weight: 1, align: 'right' },
+                { label: 'Lr', weight: 0.7, align: 'right' },
+                { label: 'S', weight: 0.7, align: 'right' },
+                { label: 'AT, ft²', weight: 0.9, align: 'right' },
+                { label: 'KLL', weight: 0.5, align: 'right' },
+                { label: 'Factor', weight: 0.7, align: 'right' },
+                { label: 'Pr', weight: 0.9, align: 'right' },
+                { label: 'Combination', weight: 1.4 },
+              ],
+              rows: columns.flatMap((c) =>
+                c.levels.map((l) => [
+                  c.id,
+                  levelName.get(l.level) ?? l.level,
+                  num(l.D_kip, 1),
+                  num(l.L_kip, 1),
+                  num(l.Lunreduced_kip, 1),
+                  num(l.Lr_kip, 1),
+                  num(l.S_kip, 1),
+                  num(l.tributaryArea_ft2, 0),
+                  num(l.KLL, 0),
+                  num(l.liveReductionFactor, 3),
+                  num(l.Pr_kip, 1),
+                  l.combination,
+                ]),
+              ),
+            },
+          ],
+  });
+
+  // Equilibrium
+  const eq = design.equilibrium;
+  sections.push({
+    id: 'equilibrium',
+    title: 'Equilibrium',
+    blocks: [
+      {
+        type: 'paragraph',
+        tone: 'soft',
+        text: 'Whole scheme, every level, per load case: load applied (area × pressure + line + point + self weight) against the sum of column and wall reactions, unfactored kip.',
+      },
+      {
+        type: 'table',
+        columns: [
+          { label: 'Load case', weight: 1.2 },
+          { label: 'Applied', weight: 1, align: 'right' },
+          { label: 'Reactions', weight: 1, align: 'right' },
+          { label: 'Difference', weight: 1, align: 'right' },
+        ],
+        rows: (['D', 'L', 'Lr', 'S'] as const)
+          .filter((k) => eq?.[k])
+          .map((k) => [k, num(eq[k].applied_kip, 2), num(eq[k].reactions_kip, 2), num(eq[k].reactions_kip - eq[k].applied_kip, 3)]),
+      },
+    ],
+  });
+
+  return {
+    title: `Calc book — ${project.name}, ${scheme.name}`,
+    caution: CALC_BOOK_CAUTION,
+    marks: [...new Set(members.map((m) => m.mark))].sort(compareMarks),
+    sections,
+    runningTitle: `Baywright calc book · ${project.name} · ${scheme.name} · rev ${scheme.revision} · ${input.date}`,
+  };
+}

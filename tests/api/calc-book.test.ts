@@ -1,0 +1,106 @@
+import { PDFParse } from 'pdf-parse';
+import type { Response } from 'supertest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { CALC_BOOK_CAUTION } from '../../shared/report/calc-book.report';
+import { makeScheme } from './helpers/schemes-fixture';
+import { createTestApp, type TestApp } from './helpers/test-app';
+
+// Calc book PDF: the printable calculation report of a scheme, for every role of the firm.
+
+let t: TestApp;
+beforeAll(async () => {
+  t = await createTestApp();
+});
+afterAll(async () => {
+  expect(t.serverErrors).toEqual([]);
+  await t.close();
+});
+
+const binary = (res: Response, cb: (err: Error | null, body: Buffer) => void) => {
+  const chunks: Buffer[] = [];
+  res.on('data', (c: Buffer) => chunks.push(c));
+  res.on('end', () => cb(null, Buffer.concat(chunks)));
+};
+
+async function pdfPages(body: Buffer): Promise<string[]> {
+  const parser = new PDFParse({ data: new Uint8Array(body) });
+  const { pages } = await parser.getText();
+  await parser.destroy();
+  return pages.map((p) => p.text);
+}
+
+/** Extracted text with line breaks and runs of spaces made single spaces. */
+const flat = (s: string) => s.replace(/\s+/g, ' ');
+
+async function demoSchemeId(): Promise<string> {
+  const schemes = await t.agents.drafter.get(`/api/projects/${t.seed.projectId}/schemes`);
+  return schemes.body.schemes[0].id as string;
+}
+
+describe('GET /api/schemes/:id/calc-book.pdf', () => {
+  it('when a drafter downloads the demo scheme, then the PDF states the codes, the caution on every page and every distinct mark', async () => {
+    const schemeId = await demoSchemeId();
+    const res = await t.agents.drafter.get(`/api/schemes/${schemeId}/calc-book.pdf`).buffer(true).parse(binary);
+    expect(res.status).toBe(200);
+    expect(res.headers['content-type']).toBe('application/pdf');
+    expect(res.headers['content-disposition']).toMatch(/^attachment; filename=".+-calc-book-r\d+\.pdf"$/);
+    const body = res.body as Buffer;
+    expect(body.subarray(0, 5).toString('latin1')).toBe('%PDF-');
+    const pages = await pdfPages(body);
+    expect(pages.length).toBeGreaterThan(2);
+    const text = flat(pages.join('\n'));
+    expect(text).toContain('AISC 360-16');
+    expect(text).toContain('ASCE 7-16');
+    expect(text).toContain('IBC Table 1604.3');
+    expect(text).toContain(CALC_BOOK_CAUTION);
+    pages.forEach((p, i) => {
+      expect(flat(p)).toContain(CALC_BOOK_CAUTION);
+      expect(flat(p)).toContain(`page ${i + 1} of ${pages.length}`);
+    });
+    const design = await t.agents.drafter.get(`/api/schemes/${schemeId}/design`);
+    const marks = new Set((design.body.members as { mark: string }[]).map((m) => m.mark));
+    expect(marks.size).toBeGreaterThan(3);
+    for (const mark of marks) expect(text).toContain(mark);
+    // Prepared by: the signed-in drafter.
+    expect(text).toContain('Priya Calloway');
+  });
+
+  it('when a manager downloads a fixture scheme with members=all, then it has more pages than the distinct book and every member id', async () => {
+    const { schemeId } = await makeScheme(t, { designed: true });
+    const all = await t.agents.manager.get(`/api/schemes/${schemeId}/calc-book.pdf?members=all`).buffer(true).parse(binary);
+    const distinct = await t.agents.manager.get(`/api/schemes/${schemeId}/calc-book.pdf?members=distinct`).buffer(true).parse(binary);
+    expect(all.status).toBe(200);
+    expect(distinct.status).toBe(200);
+    expect(all.headers['content-disposition']).toBe('attachment; filename="fixture-scheme-calc-book-all-r1.pdf"');
+    const allPages = await pdfPages(all.body as Buffer);
+    const distinctPages = await pdfPages(distinct.body as Buffer);
+    expect(allPages.length).toBeGreaterThan(distinctPages.length);
+    const text = flat(allPages.join('\n'));
+    for (const id of ['gA12', 'gA23', 'gB12', 'gB23', 'b1', 'b2', 'b3', 'b4', 'b5', 'b6', 'b7']) expect(text).toContain(`${id})`);
+  });
+
+  it('when the scheme has no current design, then the calc book designs it first', async () => {
+    const { schemeId } = await makeScheme(t, { designed: false });
+    const res = await t.agents.engineer.get(`/api/schemes/${schemeId}/calc-book.pdf`).buffer(true).parse(binary);
+    expect(res.status).toBe(200);
+    const design = await t.agents.engineer.get(`/api/schemes/${schemeId}/design`);
+    expect(design.status).toBe(200);
+    expect(design.body.stale).toBe(false);
+  });
+
+  it('when the scheme belongs to another firm, then 404', async () => {
+    const { schemeId } = await makeScheme(t, { firm: 'foreign', designed: true });
+    const res = await t.agents.drafter.get(`/api/schemes/${schemeId}/calc-book.pdf`);
+    expect(res.status).toBe(404);
+  });
+
+  it('when members or level are bad, then 400 naming members, and 404 naming the level', async () => {
+    const { schemeId } = await makeScheme(t, { designed: true });
+    const bad = await t.agents.drafter.get(`/api/schemes/${schemeId}/calc-book.pdf?members=some`);
+    expect(bad.status).toBe(400);
+    expect(JSON.stringify(bad.body)).toContain('members must be all or distinct');
+    const level = await t.agents.drafter.get(`/api/schemes/${schemeId}/calc-book.pdf?level=L9`);
+    expect(level.status).toBe(404);
+    expect(level.body.error.message).toBe('Level "L9" is not a level of this scheme.');
+  });
+});
