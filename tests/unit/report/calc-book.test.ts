@@ -213,3 +213,21 @@ describe('buildCalcBook with a failing member', () => {
     expect(textOf(s)).toContain('DOES NOT PASS');
   });
 });
+
+describe('buildCalcBook for an ASD project', () => {
+  const plan = fixture();
+  plan.designBasis = { ...plan.designBasis, method: 'ASD' };
+  const design = designScheme(plan);
+  const b = book(plan, design);
+
+  it('when the basis is ASD, then the basis names §2.4.1 and each strength check prints its Ω from the design', () => {
+    expect(textOf(b.sections.find((s) => s.id === 'basis')!)).toContain('ASD, ASCE 7-16 §2.4.1 combinations');
+    const s = memberSections(b)[0];
+    const m = design.members.find((x) => x.id === s.memberId)!;
+    const flex = m.design!.checks.find((c) => c.name === 'flexure')!;
+    expect(flex.omega).toBeDefined(); // precondition: the engine reports Ωb for ASD
+    const row = tableRows(s, 'Working — Flexure').find((r) => r[0] === 'Resistance')!;
+    expect(row[1]).toBe(`Ω = ${flex.omega!.toFixed(2)} (ASD)`);
+    expect(textOf(s)).toContain('capacity = Rn/Ω');
+  });
+});
