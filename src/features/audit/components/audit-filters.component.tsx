@@ -13,6 +13,7 @@ const AREAS: { value: string; label: string }[] = [
   { value: 'scheme', label: 'Schemes' },
   { value: 'plan', label: 'Plan revisions' },
   { value: 'design', label: 'Design runs' },
+  { value: 'prices', label: 'Unit prices' },
   ...Object.entries(AUDIT_ACTION_LABELS).map(([value, label]) => ({ value, label: `— ${label}` })),
 ];
 

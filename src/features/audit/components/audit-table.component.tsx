@@ -29,15 +29,19 @@ export const AUDIT_ACTION_LABELS: Record<string, string> = {
   'scheme.archived': 'Scheme archived',
   'scheme.unarchived': 'Scheme taken out of the archive',
   'scheme.deleted': 'Scheme deleted',
+  'scheme.status_changed': 'Scheme status changed',
+  'scheme.commented': 'Comment on a scheme',
   'plan.revised': 'Plan saved',
   'plan.restored': 'Plan revision restored',
   'design.run': 'Design run',
+  'prices.changed': 'Unit prices changed',
 };
 
 function describeDetail(event: AuditEvent): string {
   const d = event.detail;
   if (!d) return '';
   if (event.action === 'team.role_changed') return `${String(d.from)} → ${String(d.to)}`;
+  if (event.action === 'scheme.status_changed') return `${String(d.from).replace('_', ' ')} → ${String(d.to).replace('_', ' ')}`;
   if (typeof d.role === 'string') return `role: ${d.role}`;
   return Object.entries(d)
     .filter(([k]) => !/Id$|^replaces$/.test(k))
