@@ -166,6 +166,18 @@ describe('PUT /api/schemes/:id/plan', () => {
     expect(await models().Column.count({ where: { schemeId } })).toBe(6);
   });
 
+  it('when a point load is negative, then 422 naming the load and field, and the saved plan is untouched', async () => {
+    const { schemeId } = await makeScheme(t);
+    const plan = twoBayPlan() as { pointLoads: Record<string, unknown>[] };
+    plan.pointLoads[0] = { ...plan.pointLoads[0], D_kip: -5 };
+    const res = await t.agents.engineer.put(`/api/schemes/${schemeId}/plan`).send({ revision: 1, plan });
+    expect(res.status).toBe(422);
+    expect(res.body.error.code).toBe('plan_invalid');
+    expect(res.body.error.problems[0].path).toBe(`pointLoads[0] (id ${String(plan.pointLoads[0].id)}).D_kip`);
+    expect(res.body.error.message).toContain('must be 0 or more');
+    expect((await models().Scheme.findByPk(schemeId))?.getDataValue('revision')).toBe(1);
+  });
+
   it('when an element id is longer than the store holds, then 422 naming it', async () => {
     const { schemeId } = await makeScheme(t);
     const plan = twoBayPlan() as { decks: Record<string, unknown>[] };
