@@ -21,9 +21,6 @@ export const PLAN_FORMAT = 'baywright-plan' as const;
 const finite = z.number();
 const nonNegative = z.number().nonnegative();
 const positive = z.number().positive();
-// Placed loads are gravity loads: a negative one would be uplift, which no combination here
-// designs for (ASCE 7-16 §2.3.1 and §2.4.1 gravity only), and would quietly lower the demand.
-const gravityLoad = z.number().nonnegative('must be 0 or more (gravity loads only; uplift is not designed)');
 
 export const pointSchema = z.tuple([finite, finite]);
 export type PlanPoint = z.infer<typeof pointSchema>;
@@ -125,10 +122,10 @@ export const pointLoadSchema = z.object({
   level: z.string().min(1),
   x_ft: finite,
   y_ft: finite,
-  D_kip: gravityLoad.default(0),
-  L_kip: gravityLoad.default(0),
-  Lr_kip: gravityLoad.optional(),
-  S_kip: gravityLoad.optional(),
+  D_kip: finite.default(0),
+  L_kip: finite.default(0),
+  Lr_kip: finite.optional(),
+  S_kip: finite.optional(),
 });
 export type PlanPointLoad = z.infer<typeof pointLoadSchema>;
 
@@ -137,10 +134,10 @@ export const lineLoadSchema = z.object({
   level: z.string().min(1),
   start: pointSchema,
   end: pointSchema,
-  D_klf: gravityLoad.default(0),
-  L_klf: gravityLoad.default(0),
-  Lr_klf: gravityLoad.optional(),
-  S_klf: gravityLoad.optional(),
+  D_klf: finite.default(0),
+  L_klf: finite.default(0),
+  Lr_klf: finite.optional(),
+  S_klf: finite.optional(),
 });
 export type PlanLineLoad = z.infer<typeof lineLoadSchema>;
 

@@ -166,16 +166,35 @@ describe('PUT /api/schemes/:id/plan', () => {
     expect(await models().Column.count({ where: { schemeId } })).toBe(6);
   });
 
-  it('when a point load is negative, then 422 naming the load and field, and the saved plan is untouched', async () => {
+  it('when a point or line load is negative, then 422 naming the load and field, and the saved plan is untouched', async () => {
     const { schemeId } = await makeScheme(t);
-    const plan = twoBayPlan() as { pointLoads: Record<string, unknown>[] };
+    const plan = twoBayPlan() as { levels: { id: string }[]; pointLoads: Record<string, unknown>[]; lineLoads: Record<string, unknown>[] };
     plan.pointLoads[0] = { ...plan.pointLoads[0], D_kip: -5 };
+    plan.lineLoads = [{ id: 'w1', level: plan.levels[0].id, start: [0, 0], end: [30, 0], D_klf: 0.2, L_klf: -0.1 }];
     const res = await t.agents.engineer.put(`/api/schemes/${schemeId}/plan`).send({ revision: 1, plan });
     expect(res.status).toBe(422);
     expect(res.body.error.code).toBe('plan_invalid');
-    expect(res.body.error.problems[0].path).toBe(`pointLoads[0] (id ${String(plan.pointLoads[0].id)}).D_kip`);
+    expect(res.body.error.problems).toEqual([
+      expect.objectContaining({ code: 'negative-load', path: `pointLoads[0] (id ${String(plan.pointLoads[0].id)}).D_kip` }),
+      expect.objectContaining({ code: 'negative-load', path: 'lineLoads[0] (id w1).L_klf', elementId: 'w1' }),
+    ]);
     expect(res.body.error.message).toContain('must be 0 or more');
     expect((await models().Scheme.findByPk(schemeId))?.getDataValue('revision')).toBe(1);
+    // zero stays allowed (a placed load with only live, or only dead)
+    plan.pointLoads[0].D_kip = 0;
+    plan.lineLoads = [];
+    expect((await t.agents.engineer.put(`/api/schemes/${schemeId}/plan`).send({ revision: 1, plan })).status).toBe(200);
+  });
+
+  it('when a negative load is imported as a new scheme, then 422 naming it and no scheme is made', async () => {
+    const plan = twoBayPlan() as { pointLoads: Record<string, unknown>[] };
+    plan.pointLoads[0] = { ...plan.pointLoads[0], L_kip: -1 };
+    const projectId = (await makeScheme(t)).projectId;
+    const before = await models().Scheme.count();
+    const res = await t.agents.engineer.post(`/api/projects/${projectId}/schemes`).send({ name: 'Uplift', plan });
+    expect(res.status).toBe(422);
+    expect(res.body.error.problems[0]).toMatchObject({ code: 'negative-load', path: `pointLoads[0] (id ${String(plan.pointLoads[0].id)}).L_kip` });
+    expect(await models().Scheme.count()).toBe(before);
   });
 
   it('when an element id is longer than the store holds, then 422 naming it', async () => {

@@ -24,24 +24,6 @@ describe('parsePlanFile', () => {
     expect(r.problems[0].message).toContain('members[2] (id gB12).end[1]');
   });
 
-  it('when a point or line load is negative, then the plan is refused and the problem names the load and the field', () => {
-    const doc = fixture();
-    doc.pointLoads[0].D_kip = -5;
-    const r = parsePlanFile(doc);
-    expect(r.plan).toBeNull();
-    expect(r.problems[0].path).toBe(`pointLoads[0] (id ${doc.pointLoads[0].id}).D_kip`);
-    expect(r.problems[0].message).toContain('must be 0 or more');
-    const line = fixture();
-    line.lineLoads = [{ id: 'w1', level: line.levels[0].id, start: [0, 0], end: [30, 0], D_klf: 0.2, L_klf: -0.1 }];
-    const rl = parsePlanFile(line);
-    expect(rl.plan).toBeNull();
-    expect(rl.problems[0].path).toBe('lineLoads[0] (id w1).L_klf');
-    // zero stays allowed (a placed load with only live, or only dead)
-    const zero = fixture();
-    zero.pointLoads[0].D_kip = 0;
-    expect(parsePlanFile(zero).problems).toEqual([]);
-  });
-
   it('when the format or version is wrong, then one problem names the field', () => {
     expect(parsePlanFile({ ...fixture(), format: 'other' }).problems[0].path).toBe('format');
     expect(parsePlanFile({ ...fixture(), version: 7 }).problems[0].code).toBe('plan-version-newer');
