@@ -19,6 +19,7 @@ import { useUnderlays } from '../features/underlay/api/get-underlays.api';
 import { UnderlayImage } from '../features/underlay/components/underlay-image.component';
 import { UnderlayPanel } from '../features/underlay/components/underlay-panel.component';
 import { isApiError } from '../lib/api-client';
+import { invalidatePlanResults } from '../lib/plan-change-queries';
 import { canEditProjects } from '../lib/permissions';
 import { useUnits } from '../lib/units-context';
 
@@ -86,11 +87,11 @@ function SchemePlan({ projectId, schemeId, levelId, onLevel }: { projectId: stri
   const onSaved = (revision: number, plan: Plan) => {
     // The server's copy now matches the editor's: keep TanStack Query in step.
     queryClient.setQueryData<EditorScheme>(editorSchemeQueryKey(schemeId), (old) => (old ? { ...old, revision, plan } : old));
-    void queryClient.invalidateQueries({ queryKey: ['projects', projectId, 'schemes'] });
+    void invalidatePlanResults(queryClient, projectId, schemeId);
     if (designTimer.current) clearTimeout(designTimer.current);
     designTimer.current = setTimeout(() => {
       designStoredScheme(schemeId)
-        .then(() => queryClient.invalidateQueries({ queryKey: ['projects', projectId, 'schemes'] }))
+        .then(() => invalidatePlanResults(queryClient, projectId, schemeId))
         .catch(() => undefined); // the live design on screen is unaffected; the next save retries
     }, STORED_DESIGN_DELAY_MS);
   };
