@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import { schemesQueryKey } from './get-schemes.api';
+import { invalidateProjectSchemes } from './get-schemes.api';
 import { schemeResponseSchema, type SchemeSummary } from './scheme.schema';
 
 /** A copy of the scheme's plan and latest design; named "<name> (copy)" unless given. */
@@ -13,6 +13,6 @@ export function useCloneScheme(projectId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: ({ schemeId, name }: { schemeId: string; name?: string }) => cloneScheme(schemeId, name),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: schemesQueryKey(projectId) }),
+    onSuccess: () => invalidateProjectSchemes(queryClient, projectId),
   });
 }

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import { schemesQueryKey } from './get-schemes.api';
+import { invalidateProjectSchemes } from './get-schemes.api';
 import { schemeResponseSchema, type SchemeSummary } from './scheme.schema';
 
 /** A new scheme with an empty plan (one level, the default design basis). */
@@ -13,6 +13,6 @@ export function useCreateScheme(projectId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (name: string) => createScheme(projectId, name),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: schemesQueryKey(projectId) }),
+    onSuccess: () => invalidateProjectSchemes(queryClient, projectId),
   });
 }

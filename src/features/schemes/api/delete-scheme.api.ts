@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import { schemesQueryKey } from './get-schemes.api';
+import { invalidateProjectSchemes } from './get-schemes.api';
 
 export async function deleteScheme(schemeId: string): Promise<void> {
   await api.delete(`/api/schemes/${encodeURIComponent(schemeId)}`);
@@ -10,6 +10,6 @@ export function useDeleteScheme(projectId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: deleteScheme,
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: schemesQueryKey(projectId) }),
+    onSuccess: () => invalidateProjectSchemes(queryClient, projectId),
   });
 }

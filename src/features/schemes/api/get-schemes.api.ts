@@ -1,9 +1,21 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { queryOptions, useQuery, type QueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { api } from '../../../lib/api-client';
 import { schemeSummarySchema, type SchemeSummary } from './scheme.schema';
 
 export const schemesQueryKey = (projectId: string) => ['projects', projectId, 'schemes'] as const;
+
+/**
+ * A scheme was added, copied, renamed, archived or removed: the scheme list and the project's
+ * Tonnage comparison (['projects', id, 'comparison'], spelled here since features do not
+ * import each other) both list schemes, so both go stale.
+ */
+export function invalidateProjectSchemes(queryClient: QueryClient, projectId: string): Promise<void[]> {
+  return Promise.all([
+    queryClient.invalidateQueries({ queryKey: schemesQueryKey(projectId) }),
+    queryClient.invalidateQueries({ queryKey: ['projects', projectId, 'comparison'] }),
+  ]);
+}
 
 const schemesResponseSchema = z.object({ schemes: z.array(schemeSummarySchema) });
 

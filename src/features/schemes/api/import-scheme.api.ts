@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { ApiError } from '../../../lib/api-client';
-import { schemesQueryKey } from './get-schemes.api';
+import { invalidateProjectSchemes } from './get-schemes.api';
 import { schemeSummarySchema, type SchemeSummary } from './scheme.schema';
 
 const importResponseSchema = z.object({
@@ -76,6 +76,6 @@ export function useImportScheme(projectId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: ({ file, name }: { file: File; name?: string }) => importScheme(projectId, file, name),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: schemesQueryKey(projectId) }),
+    onSuccess: () => invalidateProjectSchemes(queryClient, projectId),
   });
 }

@@ -1,8 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { api } from '../../../lib/api-client';
-import { schemesQueryKey } from './get-schemes.api';
-import { revisionsQueryKey } from './get-revisions.api';
+import { invalidatePlanResults } from '../../../lib/plan-change-queries';
 
 const restoreResponseSchema = z.object({
   scheme: z.object({ revision: z.number().int() }).passthrough(),
@@ -22,8 +21,8 @@ export function useRestoreRevision(projectId: string, schemeId: string) {
     mutationFn: (revision: number) => restoreRevision(schemeId, revision),
     onSuccess: () =>
       Promise.all([
-        queryClient.invalidateQueries({ queryKey: revisionsQueryKey(schemeId) }),
-        queryClient.invalidateQueries({ queryKey: schemesQueryKey(projectId) }),
+        // Tonnage, Schedule, plan sheets, revisions and activity are read from the plan.
+        invalidatePlanResults(queryClient, projectId, schemeId),
         // The plan page caches the scheme under its own key; make it read the restored plan.
         queryClient.invalidateQueries({ queryKey: ['editor', 'scheme', schemeId] }),
       ]),

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import { schemesQueryKey } from './get-schemes.api';
+import { invalidateProjectSchemes } from './get-schemes.api';
 import { schemeResponseSchema, type SchemeSummary } from './scheme.schema';
 
 export type SchemePatch = { name?: string; archived?: boolean };
@@ -15,6 +15,6 @@ export function useUpdateScheme(projectId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: ({ schemeId, patch }: { schemeId: string; patch: SchemePatch }) => updateScheme(schemeId, patch),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: schemesQueryKey(projectId) }),
+    onSuccess: () => invalidateProjectSchemes(queryClient, projectId),
   });
 }
