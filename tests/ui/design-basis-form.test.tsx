@@ -57,6 +57,9 @@ describe('DesignBasisForm', () => {
     const fy = screen.getByLabelText('Fy (ksi)');
     await waitFor(() => expect(fy).toHaveAccessibleDescription('Fy must be between 36 and 70 ksi'));
     expect(fy).toHaveAttribute('aria-invalid', 'true');
+    await replace('Fy (ksi)', '-5');
+    await userEvent.click(screen.getByRole('button', { name: 'Save design basis' }));
+    await waitFor(() => expect(fy).toHaveAccessibleDescription('Fy must be between 36 and 70 ksi'));
     await replace('Fy (ksi)', 'fifty');
     await userEvent.click(screen.getByRole('button', { name: 'Save design basis' }));
     await waitFor(() => expect(fy).toHaveAccessibleDescription('Fy must be a number in ksi, such as 50'));

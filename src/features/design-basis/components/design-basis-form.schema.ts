@@ -39,7 +39,8 @@ export const designBasisFormSchema = z
       .string()
       .trim()
       .refine((v) => v !== '', { message: 'Enter Fy in ksi (50 for ASTM A992)' })
-      .refine((v) => v === '' || /^\d+(\.\d+)?$/.test(v), { message: 'Fy must be a number in ksi, such as 50' })
+      // a sign is a number too: -5 reads as out of range, not as "not a number"
+      .refine((v) => v === '' || /^-?\d+(\.\d+)?$/.test(v), { message: 'Fy must be a number in ksi, such as 50' })
       .transform(Number)
       .refine((n) => Number.isNaN(n) || (n >= FY_MIN_KSI && n <= FY_MAX_KSI), {
         message: `Fy must be between ${FY_MIN_KSI} and ${FY_MAX_KSI} ksi`,
