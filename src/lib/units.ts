@@ -164,6 +164,11 @@ function unitSystemOf(kind: QuantityKind, unitText: string): UnitSystem | null {
   return null;
 }
 
+/** "in kip", but "in inches" where the unit is the inch ("Enter a number in in" reads as a typo). */
+function inUnit(unit: string): string {
+  return unit === 'in' ? 'in inches' : `in ${unit}`;
+}
+
 /**
  * Reads what a person typed into a field of this kind and returns the internal US value.
  * Plain numbers are in the chosen system's unit; a unit written after the number (of either
@@ -173,7 +178,7 @@ function unitSystemOf(kind: QuantityKind, unitText: string): UnitSystem | null {
 export function parseQuantity(kind: QuantityKind, text: string, system: UnitSystem): ParseResult {
   const shownUnit = unitLabel(kind, system);
   const raw = text.trim();
-  if (raw === '') return { ok: false, error: `Enter a value in ${shownUnit}` };
+  if (raw === '') return { ok: false, error: `Enter a value ${inUnit(shownUnit)}` };
   if (raw.includes(',')) return { ok: false, error: `Use a point for decimals and no thousands separators (value in ${shownUnit})` };
 
   if (kind === 'length_ft') {
@@ -188,9 +193,9 @@ export function parseQuantity(kind: QuantityKind, text: string, system: UnitSyst
   }
 
   const match = /^([+-]?(?:\d+(?:\.\d*)?|\.\d+))\s*(.*)$/.exec(raw);
-  if (!match || !NUMBER.test(match[1])) return { ok: false, error: `Enter a number in ${shownUnit}` };
+  if (!match || !NUMBER.test(match[1])) return { ok: false, error: `Enter a number ${inUnit(shownUnit)}` };
   const number = Number(match[1]);
-  if (!Number.isFinite(number)) return { ok: false, error: `Enter a number in ${shownUnit}` };
+  if (!Number.isFinite(number)) return { ok: false, error: `Enter a number ${inUnit(shownUnit)}` };
   const unitText = match[2].trim();
   if (unitText === '') return { ok: true, value: fromDisplay(kind, number, system) };
   const written = unitSystemOf(kind, unitText);

@@ -126,6 +126,8 @@ describe('parseQuantity', () => {
   it('when the text is not a number, names a foreign unit or uses a comma, then the error says what is expected', () => {
     expect(parseQuantity('force_kip', '', 'SI')).toEqual({ ok: false, error: 'Enter a value in kN' });
     expect(parseQuantity('force_kip', 'abc', 'US')).toEqual({ ok: false, error: 'Enter a number in kip' });
+    expect(parseQuantity('length_in', 'abc', 'US')).toEqual({ ok: false, error: 'Enter a number in inches' });
+    expect(parseQuantity('length_in', '', 'US')).toEqual({ ok: false, error: 'Enter a value in inches' });
     expect(parseQuantity('force_kip', '12 psf', 'US')).toMatchObject({ ok: false, error: expect.stringContaining('use kip or kN') });
     expect(parseQuantity('pressure_psf', '2,4', 'SI')).toMatchObject({ ok: false, error: expect.stringContaining('point for decimals') });
     expect(parseQuantity('force_kip', '1.2.3', 'US')).toMatchObject({ ok: false });
