@@ -9,7 +9,7 @@ import {
   type PlanFileInput,
   type PlanProblem,
 } from '../../shared/schemas/plan.schema';
-import { planProblem } from '../../shared/schemas/plan-problem.schema';
+import { gravityLoadProblems } from '../../shared/schemas/plan-gravity-loads';
 import { AppError } from '../errors/app-error';
 import type { SchemeAttributes, SchemeStatus } from '../models/scheme.model';
 import type { SchemePatchInput } from '../schemas/scheme.schema';
@@ -121,25 +121,6 @@ async function toDetail(ctx: SchemeServiceContext, row: SchemeRow): Promise<Sche
   const [summary] = await toSummaries(ctx, [attrs]);
   const plan = await readPlan(ctx.db, attrs);
   return { ...summary, plan: exportPlanFile(plan) };
-}
-
-/**
- * Placed point and line loads are gravity loads: a negative one would be uplift, which no
- * combination here designs for (ASCE 7-16 §2.3.1 and §2.4.1, gravity only), and would quietly
- * lower the demand. Checked when a plan is saved or imported, not when a stored one is read,
- * so a plan saved before this rule still opens and can be corrected.
- */
-export function gravityLoadProblems(plan: Plan): PlanProblem[] {
-  const problems: PlanProblem[] = [];
-  const check = (collection: string, i: number, id: string | undefined, field: string, value: number | undefined) => {
-    if (value !== undefined && value < 0) {
-      const path = `${collection}[${i}]${id ? ` (id ${id.slice(0, 40)})` : ''}.${field}`;
-      problems.push(planProblem('error', 'negative-load', `${path}: must be 0 or more (gravity loads only; uplift is not designed)`, { elementId: id, path }));
-    }
-  };
-  plan.pointLoads.forEach((l, i) => (['D_kip', 'L_kip', 'Lr_kip', 'S_kip'] as const).forEach((f) => check('pointLoads', i, l.id, f, l[f])));
-  plan.lineLoads.forEach((l, i) => (['D_klf', 'L_klf', 'Lr_klf', 'S_klf'] as const).forEach((f) => check('lineLoads', i, l.id, f, l[f])));
-  return problems;
 }
 
 /** Reads a plan document through migrations, zod and repair; 422 plan_invalid naming each element. */

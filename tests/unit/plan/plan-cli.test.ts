@@ -33,4 +33,13 @@ describe('npm run calc -- plan', () => {
     expect(r.status).toBe(1);
     expect(JSON.parse(r.stdout).problems.map((p: { code: string; elementId: string }) => `${p.code}:${p.elementId}`)).toContain('member-end-unsupported:b2');
   }, 60_000);
+
+  it('when a placed load is negative (uplift), then it exits 2 naming the load and field', () => {
+    const doc = JSON.parse(readFileSync(new URL('../../fixtures/plans/two-bay.plan.json', import.meta.url), 'utf8'));
+    doc.pointLoads[0].D_kip = -2;
+    const r = run(['-'], JSON.stringify(doc));
+    expect(r.status).toBe(2);
+    const out = JSON.parse(r.stdout);
+    expect(out.error.problems.join('\n')).toMatch(/pointLoads\[0\].*\.D_kip: must be 0 or more/);
+  }, 60_000);
 });
