@@ -1,8 +1,7 @@
-import { PDFParse } from 'pdf-parse';
-import type { Response } from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { CALC_BOOK_CAUTION } from '../../shared/report/calc-book.report';
 import { makeScheme } from './helpers/schemes-fixture';
+import { binary, pdfPages } from './helpers/pdf-response';
 import { createTestApp, type TestApp } from './helpers/test-app';
 
 // Calc book PDF: the printable calculation report of a scheme, for every role of the firm.
@@ -16,18 +15,6 @@ afterAll(async () => {
   await t.close();
 });
 
-const binary = (res: Response, cb: (err: Error | null, body: Buffer) => void) => {
-  const chunks: Buffer[] = [];
-  res.on('data', (c: Buffer) => chunks.push(c));
-  res.on('end', () => cb(null, Buffer.concat(chunks)));
-};
-
-async function pdfPages(body: Buffer): Promise<string[]> {
-  const parser = new PDFParse({ data: new Uint8Array(body) });
-  const { pages } = await parser.getText();
-  await parser.destroy();
-  return pages.map((p) => p.text);
-}
 
 /** Extracted text with line breaks and runs of spaces made single spaces. */
 const flat = (s: string) => s.replace(/\s+/g, ' ');

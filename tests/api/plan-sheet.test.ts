@@ -1,7 +1,6 @@
-import { PDFParse } from 'pdf-parse';
-import type { Response } from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { makeScheme } from './helpers/schemes-fixture';
+import { binary, pdfPages } from './helpers/pdf-response';
 import { createTestApp, type TestApp } from './helpers/test-app';
 
 // Plan sheets: the PDF (a page per level) and the drawing model the screen draws.
@@ -15,18 +14,6 @@ afterAll(async () => {
   await t.close();
 });
 
-const binary = (res: Response, cb: (err: Error | null, body: Buffer) => void) => {
-  const chunks: Buffer[] = [];
-  res.on('data', (c: Buffer) => chunks.push(c));
-  res.on('end', () => cb(null, Buffer.concat(chunks)));
-};
-
-async function pdfPages(body: Buffer): Promise<string[]> {
-  const parser = new PDFParse({ data: new Uint8Array(body) });
-  const { pages } = await parser.getText();
-  await parser.destroy();
-  return pages.map((p) => p.text);
-}
 
 interface DesignMember {
   id: string;
