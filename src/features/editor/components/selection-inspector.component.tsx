@@ -1,9 +1,11 @@
+import { useId, useState } from 'react';
 import { useStore } from 'zustand';
 import { dispatch } from '../actions/action-registry';
 import type { EditorStore } from '../store/editor.store';
-import { parseQuantity, unitLabel, type QuantityKind } from '../../../lib/units';
+import { unitLabel, type QuantityKind, type UnitSystem } from '../../../lib/units';
 import { useUnits } from '../../../lib/units-context';
 import { fieldText } from './field-text';
+import { readQuantityField, type FieldBound } from './field-input.validator';
 
 const INPUT = 'h-8 w-20 rounded-[3px] border border-line bg-paper-raised px-2 text-xs figures font-mono text-ink focus:border-accent focus:outline-none';
 
@@ -17,13 +19,6 @@ export function SelectionInspector({ store, canEdit }: { store: EditorStore; can
   const deck = plan.decks.find((d) => d.id === id);
   const load = plan.pointLoads.find((p) => p.id === id);
   const grid = (plan.grids ?? []).find((g) => g.id === id);
-  // Typed in the reader's units, stored in the plan's (kip, ft).
-  // A field left as shown is not written back (the SI text is rounded; the stored value is not).
-  const commitNumber = (kind: QuantityKind, value: string, storedUS: number, run: (v: number) => void) => {
-    if (value.trim() === fieldText(kind, storedUS, system)) return;
-    const r = parseQuantity(kind, value, system);
-    if (r.ok) run(r.value);
-  };
   if (deck) {
     return (
       <section aria-label="Deck area" className="flex flex-wrap items-center gap-3 border-t border-ink px-3 py-2 text-xs">
@@ -50,14 +45,8 @@ export function SelectionInspector({ store, canEdit }: { store: EditorStore; can
     return (
       <section aria-label="Point load" className="flex flex-wrap items-center gap-3 border-t border-ink px-3 py-2 text-xs">
         <span className="label-caps">Point load {load.id}</span>
-        <label className="flex items-center gap-1">
-          Dead, {unitLabel('force_kip', system)}
-          <input key={`d${load.D_kip}${system}`} readOnly={!canEdit} className={INPUT} defaultValue={fieldText('force_kip', load.D_kip, system)} onBlur={(e) => commitNumber('force_kip', e.target.value, load.D_kip, (D_kip) => D_kip !== load.D_kip && dispatch(store, 'pointLoad.update', { id, D_kip }))} />
-        </label>
-        <label className="flex items-center gap-1">
-          Live, {unitLabel('force_kip', system)}
-          <input key={`l${load.L_kip}${system}`} readOnly={!canEdit} className={INPUT} defaultValue={fieldText('force_kip', load.L_kip, system)} onBlur={(e) => commitNumber('force_kip', e.target.value, load.L_kip, (L_kip) => L_kip !== load.L_kip && dispatch(store, 'pointLoad.update', { id, L_kip }))} />
-        </label>
+        <InspectorQuantity key={`${id}d${load.D_kip}${system}`} label="Dead" name="Dead load" kind="force_kip" bound="nonNegative" valueUS={load.D_kip} system={system} canEdit={canEdit} onCommit={(D_kip) => dispatch(store, 'pointLoad.update', { id, D_kip })} />
+        <InspectorQuantity key={`${id}l${load.L_kip}${system}`} label="Live" name="Live load" kind="force_kip" bound="nonNegative" valueUS={load.L_kip} system={system} canEdit={canEdit} onCommit={(L_kip) => dispatch(store, 'pointLoad.update', { id, L_kip })} />
       </section>
     );
   }
@@ -65,12 +54,55 @@ export function SelectionInspector({ store, canEdit }: { store: EditorStore; can
     return (
       <section aria-label="Grid line" className="flex flex-wrap items-center gap-3 border-t border-ink px-3 py-2 text-xs">
         <span className="label-caps">Grid line {grid.label}</span>
-        <label className="flex items-center gap-1">
-          {grid.axis === 'x' ? 'x' : 'y'}, {unitLabel('length_ft', system)}
-          <input key={`${grid.offset_ft}${system}`} readOnly={!canEdit} className={INPUT} defaultValue={fieldText('length_ft', grid.offset_ft, system)} onBlur={(e) => commitNumber('length_ft', e.target.value, grid.offset_ft, (offset_ft) => offset_ft !== grid.offset_ft && dispatch(store, 'grid.move', { id, offset_ft }))} />
-        </label>
+        {/* A grid line may sit at any offset, negative included (the schema allows any finite value). */}
+        <InspectorQuantity key={`${id}${grid.offset_ft}${system}`} label={grid.axis === 'x' ? 'x' : 'y'} name={`Grid line ${grid.label} position`} kind="length_ft" bound="any" valueUS={grid.offset_ft} system={system} canEdit={canEdit} onCommit={(offset_ft) => dispatch(store, 'grid.move', { id, offset_ft })} />
       </section>
     );
   }
   return null;
+}
+
+/**
+ * One number of the inspector, typed in the reader's units and stored in the plan's (kip, ft).
+ * Read on blur or Enter: a field left as shown is not written back (the SI text is rounded;
+ * the stored value is not); a value that cannot be used shows why beside the field and the
+ * plan keeps its last valid value. Keyed by the stored value, so an edit or undo resets it.
+ */
+function InspectorQuantity(props: { label: string; name: string; kind: QuantityKind; bound: FieldBound; valueUS: number; system: UnitSystem; canEdit: boolean; onCommit: (vUS: number) => void }) {
+  const { label, name, kind, bound, valueUS, system, canEdit, onCommit } = props;
+  const [error, setError] = useState<string | null>(null);
+  const errorId = `${useId()}-error`;
+  const commit = (text: string) => {
+    if (!canEdit) return;
+    if (text.trim() === fieldText(kind, valueUS, system)) return setError(null);
+    const r = readQuantityField(name, kind, text, system, bound);
+    if (!r.ok) return setError(r.error);
+    setError(null);
+    if (r.value !== valueUS) onCommit(r.value);
+  };
+  return (
+    <span className="flex flex-col gap-0.5">
+      <label className="flex items-center gap-1">
+        {label}, {unitLabel(kind, system)}
+        <input
+          readOnly={!canEdit}
+          className={INPUT}
+          inputMode="decimal"
+          defaultValue={fieldText(kind, valueUS, system)}
+          onBlur={(e) => commit(e.target.value)}
+          onKeyDown={(e) => {
+            // Blur reads the value, so Enter commits once.
+            if (e.key === 'Enter') e.currentTarget.blur();
+          }}
+          aria-invalid={error ? true : undefined}
+          aria-describedby={error ? errorId : undefined}
+        />
+      </label>
+      {error ? (
+        <span id={errorId} className="text-xs text-danger" aria-live="polite">
+          {error}
+        </span>
+      ) : null}
+    </span>
+  );
 }

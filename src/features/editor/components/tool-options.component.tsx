@@ -7,7 +7,8 @@ import type { ToolOptions } from '../store/editor.types';
 import { parseGridSpacings } from '../tools/grid-spacings.parser';
 import { ZONE_PRESETS } from '../tools/zone-presets';
 import { fieldText } from './field-text';
-import { formatQuantity, parseQuantity, unitLabel, type QuantityKind, type UnitSystem } from '../../../lib/units';
+import { formatQuantity, unitLabel, type QuantityKind, type UnitSystem } from '../../../lib/units';
+import { readCountField, readQuantityField, type FieldBound } from './field-input.validator';
 import { useUnits } from '../../../lib/units-context';
 
 const HINTS: Partial<Record<string, string>> = {
@@ -37,63 +38,97 @@ function Field({ label, children }: { label: string; children: (id: string) => R
   );
 }
 
-function NumberField({ label, value, onValue, step = 'any', min = 0 }: { label: string; value: number; onValue: (v: number) => void; step?: string; min?: number }) {
+/** Text under a field saying why its value cannot be used; the input points at it. */
+function FieldError({ id, error }: { id: string; error: string | null }) {
+  return error ? (
+    <span id={id} className="text-xs text-danger" aria-live="polite">
+      {error}
+    </span>
+  ) : null;
+}
+
+/** A whole count (Beams per bay); a value that is not one shows why and is not used. */
+function CountField({ label, value, onValue, min }: { label: string; value: number; onValue: (v: number) => void; min: number }) {
   const [text, setText] = useState(String(value));
+  const [error, setError] = useState<string | null>(null);
+  const errorId = `${useId()}-error`;
   return (
-    <Field label={label}>
-      {(id) => (
-        <input
-          id={id}
-          className={INPUT}
-          inputMode="decimal"
-          value={text}
-          step={step}
-          onChange={(e) => {
-            setText(e.target.value);
-            const v = Number(e.target.value);
-            if (e.target.value.trim() !== '' && Number.isFinite(v) && v >= min) onValue(v);
-          }}
-          aria-invalid={!(Number.isFinite(Number(text)) && Number(text) >= min) || undefined}
-        />
-      )}
-    </Field>
+    <span className="flex flex-col gap-0.5">
+      <Field label={label}>
+        {(id) => (
+          <input
+            id={id}
+            className={INPUT}
+            inputMode="numeric"
+            value={text}
+            onChange={(e) => {
+              setText(e.target.value);
+              const r = readCountField(label, e.target.value, min);
+              if (!r.ok) return setError(r.error);
+              setError(null);
+              onValue(r.value);
+            }}
+            aria-invalid={error ? true : undefined}
+            aria-describedby={error ? errorId : undefined}
+          />
+        )}
+      </Field>
+      <FieldError id={errorId} error={error} />
+    </span>
   );
 }
+
+type QuantityFieldProps = {
+  label: string;
+  /** How the message names the field ("Dead load"); the label when not given. */
+  name?: string;
+  kind: QuantityKind;
+  valueUS: number;
+  onValue: (vUS: number) => void;
+  bound: FieldBound;
+  /** Told whether the text shown can be used, for a button that reads the last valid values. */
+  onValidity?: (valid: boolean) => void;
+};
 
 /**
  * A number of a quantity kind in the reader's units (label "Dead, kN" when SI is shown); what
  * is typed is read with parseQuantity and handed on in the plan's US unit. A field left alone
- * keeps the exact US value it was given.
+ * keeps the exact US value it was given; a value that cannot be used says why under the field
+ * and is not handed on, so the last valid one stays.
  */
-function QuantityField({ label, kind, valueUS, onValue, min = 0 }: { label: string; kind: QuantityKind; valueUS: number; onValue: (vUS: number) => void; min?: number }) {
+function QuantityField(props: QuantityFieldProps) {
   const { system } = useUnits();
-  return <QuantityInput key={system} label={label} kind={kind} valueUS={valueUS} onValue={onValue} min={min} system={system} />;
+  return <QuantityInput key={system} {...props} system={system} />;
 }
 
-function QuantityInput({ label, kind, valueUS, onValue, min, system }: { label: string; kind: QuantityKind; valueUS: number; onValue: (vUS: number) => void; min: number; system: UnitSystem }) {
+function QuantityInput({ label, name, kind, valueUS, onValue, bound, onValidity, system }: QuantityFieldProps & { system: UnitSystem }) {
   const [text, setText] = useState(() => fieldText(kind, valueUS, system));
   const [error, setError] = useState<string | null>(null);
+  const errorId = `${useId()}-error`;
   return (
-    <Field label={`${label}, ${unitLabel(kind, system)}`}>
-      {(id) => (
-        <input
-          id={id}
-          className={INPUT}
-          inputMode="decimal"
-          value={text}
-          title={error ?? undefined}
-          onChange={(e) => {
-            setText(e.target.value);
-            const r = parseQuantity(kind, e.target.value, system);
-            if (!r.ok) return setError(r.error);
-            if (!(r.value >= min)) return setError(`${label} must be at least ${formatQuantity(kind, min, system)}`);
-            setError(null);
-            onValue(r.value);
-          }}
-          aria-invalid={error ? true : undefined}
-        />
-      )}
-    </Field>
+    <span className="flex flex-col gap-0.5">
+      <Field label={`${label}, ${unitLabel(kind, system)}`}>
+        {(id) => (
+          <input
+            id={id}
+            className={INPUT}
+            inputMode="decimal"
+            value={text}
+            onChange={(e) => {
+              setText(e.target.value);
+              const r = readQuantityField(name ?? label, kind, e.target.value, system, bound);
+              onValidity?.(r.ok);
+              if (!r.ok) return setError(r.error);
+              setError(null);
+              onValue(r.value);
+            }}
+            aria-invalid={error ? true : undefined}
+            aria-describedby={error ? errorId : undefined}
+          />
+        )}
+      </Field>
+      <FieldError id={errorId} error={error} />
+    </span>
   );
 }
 
@@ -137,9 +172,9 @@ export function ToolOptionsBar({ store }: { store: EditorStore }) {
           )}
         </Field>
         {options.infillMode === 'spacing' ? (
-          <QuantityField key="s" label="Max spacing" kind="length_ft" valueUS={options.infillSpacing_ft} onValue={(v) => v > 0 && set({ infillSpacing_ft: v })} />
+          <QuantityField key="s" label="Max spacing" kind="length_ft" bound="positive" valueUS={options.infillSpacing_ft} onValue={(infillSpacing_ft) => set({ infillSpacing_ft })} />
         ) : (
-          <NumberField key="c" label="Beams per bay" value={options.infillCount} onValue={(v) => Number.isInteger(v) && v >= 1 && set({ infillCount: v })} min={1} />
+          <CountField key="c" label="Beams per bay" value={options.infillCount} onValue={(infillCount) => set({ infillCount })} min={1} />
         )}
         <p className="text-xs text-ink-soft">Click a bay to fill it; clicking again replaces its beams.</p>
       </>
@@ -174,8 +209,8 @@ export function ToolOptionsBar({ store }: { store: EditorStore }) {
   if (tool === 'pointLoad') {
     body = (
       <>
-        <QuantityField label="Dead" kind="force_kip" valueUS={options.pointLoad.D_kip} onValue={(D_kip) => set({ pointLoad: { ...store.getState().options.pointLoad, D_kip } })} />
-        <QuantityField label="Live" kind="force_kip" valueUS={options.pointLoad.L_kip} onValue={(L_kip) => set({ pointLoad: { ...store.getState().options.pointLoad, L_kip } })} />
+        <QuantityField label="Dead" name="Dead load" kind="force_kip" bound="nonNegative" valueUS={options.pointLoad.D_kip} onValue={(D_kip) => set({ pointLoad: { ...store.getState().options.pointLoad, D_kip } })} />
+        <QuantityField label="Live" name="Live load" kind="force_kip" bound="nonNegative" valueUS={options.pointLoad.L_kip} onValue={(L_kip) => set({ pointLoad: { ...store.getState().options.pointLoad, L_kip } })} />
         <p className="text-xs text-ink-soft">{HINTS.pointLoad}</p>
       </>
     );
@@ -183,8 +218,8 @@ export function ToolOptionsBar({ store }: { store: EditorStore }) {
   if (tool === 'lineLoad') {
     body = (
       <>
-        <QuantityField label="Dead" kind="lineLoad_klf" valueUS={options.lineLoad.D_klf} onValue={(D_klf) => set({ lineLoad: { ...store.getState().options.lineLoad, D_klf } })} />
-        <QuantityField label="Live" kind="lineLoad_klf" valueUS={options.lineLoad.L_klf} onValue={(L_klf) => set({ lineLoad: { ...store.getState().options.lineLoad, L_klf } })} />
+        <QuantityField label="Dead" name="Dead load" kind="lineLoad_klf" bound="nonNegative" valueUS={options.lineLoad.D_klf} onValue={(D_klf) => set({ lineLoad: { ...store.getState().options.lineLoad, D_klf } })} />
+        <QuantityField label="Live" name="Live load" kind="lineLoad_klf" bound="nonNegative" valueUS={options.lineLoad.L_klf} onValue={(L_klf) => set({ lineLoad: { ...store.getState().options.lineLoad, L_klf } })} />
         <p className="text-xs text-ink-soft">{HINTS.lineLoad}</p>
       </>
     );
@@ -273,12 +308,24 @@ function ZoneOptions({ store }: { store: EditorStore }) {
   const [key, setKey] = useState(ZONE_PRESETS[0].key);
   const preset = ZONE_PRESETS.find((p) => p.key === key)!;
   const [values, setValues] = useState(preset.zone);
+  // Fields whose text cannot be used: the zone is not added from the last valid values behind them.
+  const [invalid, setInvalid] = useState<string[]>([]);
   const choose = (k: string) => {
     setKey(k);
     setValues(ZONE_PRESETS.find((p) => p.key === k)!.zone);
+    setInvalid([]);
   };
   const num = (field: 'live_psf' | 'partition_psf' | 'superimposedDead_psf' | 'dead_psf' | 'roofLive_psf', label: string) => (
-    <QuantityField key={`${key}-${field}`} label={label} kind="pressure_psf" valueUS={values[field]} onValue={(v) => setValues((old) => ({ ...old, [field]: v }))} />
+    <QuantityField
+      key={`${key}-${field}`}
+      label={label}
+      name={/live$/i.test(label) ? `${label} load` : label}
+      kind="pressure_psf"
+      bound="nonNegative"
+      valueUS={values[field]}
+      onValue={(v) => setValues((old) => ({ ...old, [field]: v }))}
+      onValidity={(valid) => setInvalid((old) => (valid ? old.filter((f) => f !== field) : old.includes(field) ? old : [...old, field]))}
+    />
   );
   return (
     <>
@@ -297,7 +344,7 @@ function ZoneOptions({ store }: { store: EditorStore }) {
       {num('partition_psf', 'Partitions')}
       {num('superimposedDead_psf', 'Superimposed dead')}
       {num('dead_psf', 'Slab and deck')}
-      <Button variant="secondary" className="h-8 text-xs" onClick={() => dispatch(store, 'zone.add', { zone: values })}>
+      <Button variant="secondary" className="h-8 text-xs" disabled={invalid.length > 0} onClick={() => dispatch(store, 'zone.add', { zone: values })}>
         Use this zone
       </Button>
       <ZoneSelect store={store} label="Paint with" />
