@@ -47,9 +47,22 @@ function FieldError({ id, error }: { id: string; error: string | null }) {
   ) : null;
 }
 
-/** A whole count (Beams per bay); a value that is not one shows why and is not used. */
-function CountField({ label, value, onValue, min }: { label: string; value: number; onValue: (v: number) => void; min: number }) {
-  const [text, setText] = useState(String(value));
+type FieldRead = { ok: true; value: number } | { ok: false; error: string };
+
+/**
+ * One checked input: what is typed is read by `read`; a value that cannot be used says why
+ * under the field (aria-invalid + aria-describedby) and is not handed on, so the last valid
+ * one stays.
+ */
+function CheckedInput({ label, inputMode, initialText, read, onValue, onValidity }: {
+  label: string;
+  inputMode: 'numeric' | 'decimal';
+  initialText: string;
+  read: (text: string) => FieldRead;
+  onValue: (v: number) => void;
+  onValidity?: (valid: boolean) => void;
+}) {
+  const [text, setText] = useState(initialText);
   const [error, setError] = useState<string | null>(null);
   const errorId = `${useId()}-error`;
   return (
@@ -59,11 +72,12 @@ function CountField({ label, value, onValue, min }: { label: string; value: numb
           <input
             id={id}
             className={INPUT}
-            inputMode="numeric"
+            inputMode={inputMode}
             value={text}
             onChange={(e) => {
               setText(e.target.value);
-              const r = readCountField(label, e.target.value, min);
+              const r = read(e.target.value);
+              onValidity?.(r.ok);
               if (!r.ok) return setError(r.error);
               setError(null);
               onValue(r.value);
@@ -75,6 +89,19 @@ function CountField({ label, value, onValue, min }: { label: string; value: numb
       </Field>
       <FieldError id={errorId} error={error} />
     </span>
+  );
+}
+
+/** A whole count (Beams per bay); a value that is not one shows why and is not used. */
+function CountField({ label, value, onValue, min }: { label: string; value: number; onValue: (v: number) => void; min: number }) {
+  return (
+    <CheckedInput
+      label={label}
+      inputMode="numeric"
+      initialText={String(value)}
+      read={(text) => readCountField(label, text, min)}
+      onValue={onValue}
+    />
   );
 }
 
@@ -102,33 +129,15 @@ function QuantityField(props: QuantityFieldProps) {
 }
 
 function QuantityInput({ label, name, kind, valueUS, onValue, bound, onValidity, system }: QuantityFieldProps & { system: UnitSystem }) {
-  const [text, setText] = useState(() => fieldText(kind, valueUS, system));
-  const [error, setError] = useState<string | null>(null);
-  const errorId = `${useId()}-error`;
   return (
-    <span className="flex flex-col gap-0.5">
-      <Field label={`${label}, ${unitLabel(kind, system)}`}>
-        {(id) => (
-          <input
-            id={id}
-            className={INPUT}
-            inputMode="decimal"
-            value={text}
-            onChange={(e) => {
-              setText(e.target.value);
-              const r = readQuantityField(name ?? label, kind, e.target.value, system, bound);
-              onValidity?.(r.ok);
-              if (!r.ok) return setError(r.error);
-              setError(null);
-              onValue(r.value);
-            }}
-            aria-invalid={error ? true : undefined}
-            aria-describedby={error ? errorId : undefined}
-          />
-        )}
-      </Field>
-      <FieldError id={errorId} error={error} />
-    </span>
+    <CheckedInput
+      label={`${label}, ${unitLabel(kind, system)}`}
+      inputMode="decimal"
+      initialText={fieldText(kind, valueUS, system)}
+      read={(text) => readQuantityField(name ?? label, kind, text, system, bound)}
+      onValue={onValue}
+      onValidity={onValidity}
+    />
   );
 }
 
