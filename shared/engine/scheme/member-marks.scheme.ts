@@ -27,8 +27,18 @@ export interface MarkInput {
   issuedMark?: string | null;
 }
 
-/** "2" for level "L2" or "2"; otherwise the level id itself. */
-export function levelMarkPrefix(level: Pick<PlanLevel, 'id'>): string {
+/**
+ * The level part of a mark, from what a person calls the level: the first number in its name
+ * ("Level 3" → "3", "L3" → "3"), "R" for a roof, else the name's first letter; the level id
+ * only when the name gives nothing (an internal id must not reach a drawing).
+ */
+export function levelMarkPrefix(level: Pick<PlanLevel, 'id'> & Partial<Pick<PlanLevel, 'name' | 'roof'>>): string {
+  const name = (level.name ?? '').trim();
+  const number = /\d+/.exec(name);
+  if (number) return String(Number(number[0]));
+  if (level.roof || /\broof\b/i.test(name)) return 'R';
+  const letter = /[A-Za-z]/.exec(name);
+  if (letter) return letter[0].toUpperCase();
   const m = /^L(?:evel)?[-_ ]?(\d+)$/i.exec(level.id) ?? /^(\d+)$/.exec(level.id);
   return m ? m[1] : level.id;
 }

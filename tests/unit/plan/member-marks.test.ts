@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { assignMarks, sharedMarkConflicts, withIssuedMarks, type MarkInput } from '../../../shared/engine/scheme/member-marks.scheme';
+import { assignMarks, levelMarkPrefix, sharedMarkConflicts, withIssuedMarks, type MarkInput } from '../../../shared/engine/scheme/member-marks.scheme';
 import { designScheme } from '../../../shared/engine/index';
 import { twoBayPlan } from '../editor/plan-fixture';
 
@@ -103,3 +103,35 @@ describe('a mark shared by members of different designs is said', () => {
   });
 });
 
+describe('the level part of a mark follows the level’s name', () => {
+  it('when a level named "Level 3" has the internal id "L1", then its marks start 3 (added or copied levels alike)', () => {
+    expect(levelMarkPrefix({ id: 'L1', name: 'Level 3' })).toBe('3');
+    expect(levelMarkPrefix({ id: 'L7', name: 'L12' })).toBe('12');
+    expect(levelMarkPrefix({ id: 'R', name: 'Roof', roof: true })).toBe('R');
+    expect(levelMarkPrefix({ id: 'L5', name: 'Mezzanine' })).toBe('M');
+    const marks = assignMarks([{ ...beam('a', 'W16X26', 0, 0), level: 'L1' }, { ...beam('g', 'W21X44', 0, 5), level: 'L1', kind: 'girder' }], [{ id: 'L1', name: 'Level 3' }]);
+    expect(Object.fromEntries(marks)).toEqual({ a: '3B1', g: '3G1' });
+  });
+});
+
+describe('marks of added and copied levels', () => {
+  it('when "Level 3" is added at 28 ft and Level 2 is copied to it, then its members are marked 3G…/3B… and Level 2 keeps 2G…/2B…', async () => {
+    const { createEditorStore } = await import('../../../src/features/editor/store/editor.store');
+    const { dispatch } = await import('../../../src/features/editor/actions/action-registry');
+    const store = createEditorStore({ plan: twoBayPlan() });
+    dispatch(store, 'level.add', { name: 'Level 3', elevation_ft: 28 });
+    const l3 = store.getState().levelId;
+    expect(l3).not.toBe('L3'); // an internal id unrelated to the name
+    dispatch(store, 'level.show', { levelId: 'L2' });
+    // Marks issued on Level 2 are stored before the copy, as the Plan does.
+    const first = designScheme(store.getState().plan);
+    store.setState({ plan: withIssuedMarks(store.getState().plan, new Map(first.members.map((m) => [m.id, m.mark]))) });
+    dispatch(store, 'level.copyTo', { targets: [l3] });
+    const result = designScheme(store.getState().plan);
+    const onL3 = result.members.filter((m) => m.level === l3);
+    expect(onL3).toHaveLength(11);
+    for (const m of onL3) expect(m.mark, m.id).toMatch(m.kind === 'girder' ? /^3G\d+$/ : /^3B\d+$/);
+    expect(onL3.find((m) => m.kind === 'girder')!.mark).toBe('3G1');
+    for (const m of result.members.filter((x) => x.level === 'L2')) expect(m.mark).toBe(first.members.find((x) => x.id === m.id)!.mark);
+  });
+});
