@@ -12,7 +12,11 @@ import type { Point } from './polygon.geometry';
 /** Most cells an item is bucketed under, and most cells a query walks. */
 export const SPATIAL_INDEX_MAX_CELLS = 256;
 
-interface CellRange { x0: number; x1: number; y0: number; y1: number; cells: number }
+/**
+ * Cells x0…x1 × y0…y1, walked by count (nx × ny): past 2^53 ft/cell, ix + 1 === ix, so a loop
+ * "ix <= x1; ix++" would never end.
+ */
+interface CellRange { x0: number; x1: number; y0: number; y1: number; nx: number; ny: number; cells: number }
 
 export class SegmentGridIndex<T> {
   private readonly buckets = new Map<number, T[]>();
@@ -38,7 +42,9 @@ export class SegmentGridIndex<T> {
     const x1 = Math.floor((Math.max(ax, bx) + padFt) / this.cellFt);
     const y0 = Math.floor((Math.min(ay, by) - padFt) / this.cellFt);
     const y1 = Math.floor((Math.max(ay, by) + padFt) / this.cellFt);
-    return { x0, x1, y0, y1, cells: (x1 - x0 + 1) * (y1 - y0 + 1) };
+    const nx = x1 - x0 + 1;
+    const ny = y1 - y0 + 1;
+    return { x0, x1, y0, y1, nx, ny, cells: nx * ny };
   }
 
   /** Insert an item under every cell its segment's box (grown by padFt) touches. */
@@ -49,9 +55,9 @@ export class SegmentGridIndex<T> {
       this.wide.push(item);
       return;
     }
-    for (let ix = r.x0; ix <= r.x1; ix++) {
-      for (let iy = r.y0; iy <= r.y1; iy++) {
-        const k = this.key(ix, iy);
+    for (let i = 0; i < r.nx; i++) {
+      for (let j = 0; j < r.ny; j++) {
+        const k = this.key(r.x0 + i, r.y0 + j);
         const list = this.buckets.get(k);
         if (list) list.push(item);
         else this.buckets.set(k, [item]);
@@ -83,9 +89,9 @@ export class SegmentGridIndex<T> {
       for (const item of this.scanItems(r)) if (test(item, arg)) return item;
       return null;
     }
-    for (let ix = r.x0; ix <= r.x1; ix++) {
-      for (let iy = r.y0; iy <= r.y1; iy++) {
-        const list = this.buckets.get(this.key(ix, iy));
+    for (let i = 0; i < r.nx; i++) {
+      for (let j = 0; j < r.ny; j++) {
+        const list = this.buckets.get(this.key(r.x0 + i, r.y0 + j));
         if (!list) continue;
         for (let i = 0; i < list.length; i++) if (test(list[i], arg)) return list[i];
       }
@@ -99,9 +105,9 @@ export class SegmentGridIndex<T> {
     const r = this.range(a[0], a[1], b[0], b[1], 0);
     if (!(r.cells <= SPATIAL_INDEX_MAX_CELLS)) return this.scanItems(r);
     const out = new Set<T>();
-    for (let ix = r.x0; ix <= r.x1; ix++) {
-      for (let iy = r.y0; iy <= r.y1; iy++) {
-        for (const item of this.buckets.get(this.key(ix, iy)) ?? []) out.add(item);
+    for (let i = 0; i < r.nx; i++) {
+      for (let j = 0; j < r.ny; j++) {
+        for (const item of this.buckets.get(this.key(r.x0 + i, r.y0 + j)) ?? []) out.add(item);
       }
     }
     for (const item of this.wide) out.add(item);
