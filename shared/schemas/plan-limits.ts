@@ -27,6 +27,10 @@ export const PLAN_LIMITS = {
   deflectionDenominator: 100_000,
   /** Depth limits, in. (the deepest W-shape is about 44 in.). */
   depth_in: 100,
+  /** Any other magnitude (slab and stud properties): far past any real value, so nothing overflows. */
+  magnitude: 1_000_000,
+  /** Studs on one member. */
+  studs: 10_000,
   counts: {
     levels: 200,
     grids: 2_000,
@@ -52,7 +56,7 @@ const within = (max: number, unit: string, what: string) =>
 const upTo = (max: number, unit: string, what: string) =>
   number(what)
     .min(0, { error: `must be 0 or more (${what})` })
-    .max(max, { error: `must be at most ${max} ${unit} (${what})` });
+    .max(max, { error: `must be at most ${max}${unit ? ` ${unit}` : ''} (${what})` });
 
 /** A plan coordinate, ft. */
 export const coordinateFt = within(PLAN_LIMITS.coordinate_ft, 'ft', 'plan extent');
@@ -71,6 +75,15 @@ export const depthIn = number('depth')
   .positive({ error: 'must be a positive depth in inches' })
   .max(PLAN_LIMITS.depth_in, { error: `must be at most ${PLAN_LIMITS.depth_in} in` });
 export const alongSpanFt = upTo(PLAN_LIMITS.span_ft, 'ft', 'position along the member');
+/** Other magnitudes (slab, stud and composite settings). */
+export const positiveMagnitude = number('magnitude')
+  .positive({ error: 'must be more than 0' })
+  .max(PLAN_LIMITS.magnitude, { error: `must be at most ${PLAN_LIMITS.magnitude}` });
+export const nonNegativeMagnitude = upTo(PLAN_LIMITS.magnitude, '', 'magnitude');
+export const studCount = number('stud count')
+  .int({ error: 'must be a whole number of studs' })
+  .min(0, { error: 'must be 0 or more (stud count)' })
+  .max(PLAN_LIMITS.studs, { error: `must be at most ${PLAN_LIMITS.studs} studs` });
 
 /** A list of at most `max` items, the message naming what it counts. */
 export function boundedList<T extends z.ZodType>(item: T, max: number, what: string) {

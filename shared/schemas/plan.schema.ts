@@ -1,5 +1,5 @@
 /**
- * The Baywright plan file ("baywright-plan", version 1): the scheme the app exports and
+ * The Baywright plan file ("baywright-plan", version 2; version 1 files migrate on read): the scheme the app exports and
  * imports and `calc plan` reads. Field names follow shared/reference/calc-interface.md and
  * are a contract: fields may be added, none renamed.
  *
@@ -15,7 +15,7 @@ import { repairPlan } from './plan-repair';
 import { planProblem, type PlanProblem } from './plan-problem.schema';
 import {
   PLAN_LIMITS, alongSpanFt, boundedList, coordinateFt, deflectionDenominator, depthIn, elevationFt, fyKsi, lineLoadKlf,
-  planLimitProblems, pointLoadKip, pressurePsf,
+  nonNegativeMagnitude, planLimitProblems, pointLoadKip, positiveMagnitude, pressurePsf, studCount,
 } from './plan-limits';
 
 export type { PlanProblem } from './plan-problem.schema';
@@ -23,12 +23,42 @@ export { CURRENT_PLAN_VERSION } from './plan-migrations';
 export const PLAN_FORMAT = 'baywright-plan' as const;
 
 const LIMIT = PLAN_LIMITS.counts;
+const positive = positiveMagnitude;
+const nonNegative = nonNegativeMagnitude;
 
 export const pointSchema = z.tuple([coordinateFt, coordinateFt]);
 export type PlanPoint = z.infer<typeof pointSchema>;
 
 export const polygonSchema = boundedList(pointSchema, LIMIT.polygonPoints, 'points');
 export type PlanPolygon = z.infer<typeof polygonSchema>;
+
+/**
+ * designBasis.composite (plan file version 2, calc-interface.md "Additions"). Version 1 files
+ * migrate to enabled: false. studEquivalentWeight_lb is the steel weight one stud counts as
+ * when selection compares shapes (design-basis §6a, common practice about 10 lb).
+ */
+export const compositeSettingsSchema = z.object({
+  enabled: z.boolean(),
+  studDiameter_in: positive.default(0.75),
+  studFu_ksi: positive.default(65),
+  minPercentComposite: z.number().min(0).max(1).default(0.25),
+  constructionLive_psf: pressurePsf.default(20),
+  shored: z.boolean().default(false),
+  camber: z.boolean().default(true),
+  studEquivalentWeight_lb: nonNegative.optional(),
+});
+export type PlanCompositeSettings = z.infer<typeof compositeSettingsSchema>;
+
+/** The defaults of calc-interface.md "Additions" (what a version 1 file migrates to, with enabled: false). */
+export const DEFAULT_COMPOSITE_SETTINGS: PlanCompositeSettings = {
+  enabled: false,
+  studDiameter_in: 0.75,
+  studFu_ksi: 65,
+  minPercentComposite: 0.25,
+  constructionLive_psf: 20,
+  shored: false,
+  camber: true,
+};
 
 export const designBasisSchema = z.object({
   method: z.enum(['LRFD', 'ASD']),
@@ -40,8 +70,11 @@ export const designBasisSchema = z.object({
   }),
   /** What "total" deflection includes (design-basis §5): all dead + live, or superimposed dead + live. */
   totalDeflectionIncludes: z.enum(['deadAndLive', 'superimposedDeadAndLive']).optional(),
+  /** Composite beams (AISC 360-16 Chapter I; design-basis §6, §6a). Absent = not composite. */
+  composite: compositeSettingsSchema.optional(),
 });
 export type PlanDesignBasis = z.infer<typeof designBasisSchema>;
+
 
 export const levelSchema = z.object({
   id: z.string().min(1),
@@ -66,6 +99,10 @@ export const columnSchema = z.object({
   y_ft: coordinateFt,
   /** Level ids at which the column supports framing. */
   levels: boundedList(z.string().min(1), LIMIT.columnLevels, 'levels'),
+  /** Version 2: a locked column size, or null (or absent) to size it. */
+  shape: z.string().nullable().optional(),
+  /** Version 2 (optional): level ids where a new column tier starts. */
+  spliceLevels: boundedList(z.string().min(1), LIMIT.columnLevels, 'splice levels').optional(),
 });
 export type PlanColumn = z.infer<typeof columnSchema>;
 
@@ -94,6 +131,10 @@ export const memberSchema = z.object({
   bracing: bracingSchema.nullable().optional(),
   mark: z.string().nullable().optional(),
   markLocked: z.boolean().optional(),
+  /** Version 2: null (or absent) follows designBasis.composite; true/false forces composite on/off. */
+  composite: z.boolean().nullable().optional(),
+  /** Version 2: null (or absent) designs the studs; a count is checked (total on the member). */
+  studs: studCount.nullable().optional(),
 });
 export type PlanMember = z.infer<typeof memberSchema>;
 
@@ -110,12 +151,30 @@ export const zoneSchema = z.object({
 });
 export type PlanZone = z.infer<typeof zoneSchema>;
 
+/**
+ * decks[].slab (version 2): concrete on fluted deck. Where present the slab weight comes from
+ * it and replaces the zone's dead_psf (calc-interface.md "Additions").
+ */
+export const slabSchema = z.object({
+  ribHeight_in: positive,
+  toppingThickness_in: positive,
+  ribAvgWidth_in: positive,
+  ribSpacing_in: positive,
+  concreteWeight_pcf: positive,
+  fc_ksi: positive,
+  deckWeight_psf: nonNegative,
+  /** The library profile it started from (Baywright's own names), for the screens only. */
+  profile: z.string().optional(),
+}).refine((s) => s.ribAvgWidth_in <= s.ribSpacing_in, { message: 'ribAvgWidth_in must not exceed ribSpacing_in', path: ['ribAvgWidth_in'] });
+export type PlanSlab = z.infer<typeof slabSchema>;
+
 export const deckSchema = z.object({
   id: z.string().min(1),
   level: z.string().min(1),
   polygon: polygonSchema,
   spanDirection: z.enum(['x', 'y']),
   zone: z.string().min(1),
+  slab: slabSchema.optional(),
 });
 export type PlanDeck = z.infer<typeof deckSchema>;
 
@@ -152,7 +211,7 @@ export type PlanOpening = z.infer<typeof openingSchema>;
 
 export const planSchema = z.object({
   format: z.literal(PLAN_FORMAT),
-  version: z.literal(1),
+  version: z.literal(2),
   name: z.string(),
   designBasis: designBasisSchema,
   grids: boundedList(gridSchema, LIMIT.grids, 'grid lines').optional(),
