@@ -1,5 +1,5 @@
 import type { WhereOptions } from 'sequelize';
-import { buildFramingTopology } from '../../shared/engine/index';
+import { buildFramingTopology, deckOverlapProblems } from '../../shared/engine/index';
 import {
   DEFAULT_COMPOSITE_SETTINGS,
   exportPlanFile,
@@ -155,7 +155,7 @@ export function acceptPlan(
  */
 function topologyProblems(plan: Plan): PlanProblem[] {
   try {
-    return buildFramingTopology(plan).problems;
+    return [...buildFramingTopology(plan).problems, ...deckOverlapProblems(plan)];
   } catch {
     return [];
   }
