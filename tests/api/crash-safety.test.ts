@@ -106,11 +106,22 @@ describe.skipIf(testDialect !== 'sqlite')('crash safety: SIGKILL during plan sav
   }
 
   it('when the server is killed at several moments of a stream of saves, then every restart finds a whole last revision', async () => {
-    // Kill after the first request is sent (0 ms) and at moments spread over later saves.
-    for (const killAfterMs of [0, 40, 150, 400]) {
+    // Kill right after the first request is sent, then after 1, 2 and 3 answered saves at
+    // moments spread over the next one (its start, a quarter, half and nine tenths of a save's
+    // measured time), so the kills land before, inside and at the end of the transaction.
+    const savesBeforeKill: number[] = [];
+    const moments = [
+      { afterSaves: 0, fraction: 0 },
+      { afterSaves: 1, fraction: 0.25 },
+      { afterSaves: 2, fraction: 0.5 },
+      { afterSaves: 3, fraction: 0.9 },
+    ];
+    for (const { afterSaves, fraction } of moments) {
+      const moment = `after ${afterSaves} saves + ${fraction} of one`;
       const api = await engineer(server!);
       const start = (await api.call('GET', `/api/schemes/${schemeId}`)).body.scheme.revision as number;
       const acknowledged: number[] = [];
+      const saveMs: number[] = [];
       let sent = start;
       const stream = (async () => {
         for (let revision = start; revision < start + 1000; revision++) {
@@ -118,8 +129,10 @@ describe.skipIf(testDialect !== 'sqlite')('crash safety: SIGKILL during plan sav
           plan.zones[0].superimposedDead_psf = markerFor(revision + 1);
           sent = revision + 1;
           try {
+            const began = performance.now();
             const res = await api.call('PUT', `/api/schemes/${schemeId}/plan`, { revision, plan });
             if (res.status !== 200) throw new Error(`save gave ${res.status}: ${res.text}`);
+            saveMs.push(performance.now() - began);
             acknowledged.push(res.body.revision);
           } catch (err) {
             if (err instanceof Error && err.message.startsWith('save gave')) throw err;
@@ -127,11 +140,16 @@ describe.skipIf(testDialect !== 'sqlite')('crash safety: SIGKILL during plan sav
           }
         }
       })();
-      await new Promise((r) => setTimeout(r, killAfterMs));
+      let streaming = true;
+      void stream.finally(() => (streaming = false)).catch(() => undefined);
+      while (streaming && acknowledged.length < afterSaves) await new Promise((r) => setTimeout(r, 2));
+      const typicalMs = saveMs.length ? Math.min(...saveMs) : 0;
+      await new Promise((r) => setTimeout(r, fraction * typicalMs));
       const state = await inspectAfterKill(server!);
       await stream;
 
-      expect(state.integrity, `kill at ${killAfterMs} ms`).toBe('ok');
+      expect(state.integrity, `kill ${moment}`).toBe('ok');
+      savesBeforeKill.push(acknowledged.length);
       const lastAcked = acknowledged.at(-1) ?? start;
       // Every acknowledged save survived; at most the one in flight committed without an answer.
       expect(state.revision).toBeGreaterThanOrEqual(lastAcked);
@@ -151,6 +169,9 @@ describe.skipIf(testDialect !== 'sqlite')('crash safety: SIGKILL during plan sav
       expect(read.body.scheme.revision).toBe(state.revision);
       expect(markerOf(read.body.scheme.plan)).toBe(state.snapshots.at(-1)!.marker);
     }
+    // The kills landed at different points of the stream: before any answer and after several.
+    expect(savesBeforeKill[0]).toBe(0);
+    expect(savesBeforeKill.slice(1).every((n, i) => n >= i + 1)).toBe(true);
   }, 300_000);
 
   it('when the server is killed during design runs, then no half-written run is visible and the next run is stored whole', async () => {
@@ -178,9 +199,12 @@ describe.skipIf(testDialect !== 'sqlite')('crash safety: SIGKILL during plan sav
   it('when the server dies before an edit is saved, then the Plan kept on the device recovers it after the restart and saves it', async () => {
     const api = await engineer(server!);
     const realFetch = globalThis.fetch;
-    // The browser client's own save call, pointed at the process with this person's cookie.
-    globalThis.fetch = ((path: string, init: RequestInit = {}) =>
-      realFetch(`${server!.url}${path}`, { ...init, headers: { ...(init.headers as Record<string, string>), Cookie: api.cookie, Origin: api.origin } })) as typeof fetch;
+    // The browser client's own save call (a same-origin path), sent to the process as this person.
+    let session = api;
+    globalThis.fetch = ((input: string | URL | Request, init: RequestInit = {}) =>
+      typeof input === 'string' && input.startsWith('/')
+        ? realFetch(`${server!.url}${input}`, { ...init, headers: { ...(init.headers as Record<string, string>), Cookie: session.cookie, Origin: session.origin } })
+        : realFetch(input, init)) as typeof fetch;
     try {
       const storage = new Map<string, string>();
       const deviceStorage = { getItem: (k: string) => storage.get(k) ?? null, setItem: (k: string, v: string) => void storage.set(k, v), removeItem: (k: string) => void storage.delete(k) };
@@ -206,8 +230,7 @@ describe.skipIf(testDialect !== 'sqlite')('crash safety: SIGKILL during plan sav
       // A new page load after the restart: the server has the old plan, the device has the edit.
       await start();
       const api2 = await engineer(server!);
-      globalThis.fetch = ((path: string, init: RequestInit = {}) =>
-        realFetch(`${server!.url}${path}`, { ...init, headers: { ...(init.headers as Record<string, string>), Cookie: api2.cookie, Origin: api2.origin } })) as typeof fetch;
+      session = api2;
       const reloaded = (await api2.call('GET', `/api/schemes/${schemeId}`)).body.scheme;
       expect(reloaded.revision).toBe(loaded.revision);
       expect(reloaded.plan.members).toHaveLength(membersBefore);
