@@ -105,7 +105,7 @@ export async function writeFramingIfc(input: IfcExportInput): Promise<Uint8Array
       ] as never),
     );
     const worldPlacement = placement3(origin);
-    const context = write(new I.IfcGeometricRepresentationContext(null, label('Model'), new I.IfcDimensionCount(3), 1e-5, worldPlacement as never, direction([0, 1, 0]) as never));
+    const context = write(new I.IfcGeometricRepresentationContext(null, label('Model'), new I.IfcDimensionCount(3), new I.IfcReal(1e-5) as never, worldPlacement as never, direction([0, 1, 0]) as never));
     const body = write(new I.IfcGeometricRepresentationSubContext(label('Body'), label('Model'), context as never, null, I.IfcGeometricProjectionEnum.MODEL_VIEW, null));
 
     const project = write(
