@@ -87,7 +87,7 @@ async function main() {
     const members = (demoPlan.members as unknown[]).length;
 
     // One project and scheme (a copy of the demo plan) per client, designed once.
-    const clients = [];
+    const clients: { api: Awaited<ReturnType<typeof signedInClient>>; email: string; schemeId: string; revision: number; edits: number }[] = [];
     for (let i = 0; i < CLIENTS; i++) {
       const api = await signedInClient(server.url, ENGINEERS[i % ENGINEERS.length], PASSWORD);
       const project = await api.call('POST', '/api/projects', { name: `Load client ${i + 1}` });
