@@ -27,10 +27,10 @@ async function withFreshDb(fn: (db: Awaited<ReturnType<typeof connectDatabase>>)
 describe(`database (${testDialect}): migrations and demo seed`, () => {
   it('when migrations run twice, then the second run applies nothing and every one is recorded', async () => {
     await withFreshDb(async (db) => {
-      expect(await migrateToLatest(db.sequelize)).toEqual(['0001-accounts', '0002-projects', '0003-schemes-plans', '0004-team-mail-audit', '0005-underlays', '0006-scheme-status-prices']);
+      expect(await migrateToLatest(db.sequelize)).toEqual(['0001-accounts', '0002-projects', '0003-schemes-plans', '0004-team-mail-audit', '0005-underlays', '0006-scheme-status-prices', '0007-plan-v2-composite-columns']);
       expect(await migrateToLatest(db.sequelize)).toEqual([]);
       const executed = await createMigrator(db.sequelize).executed();
-      expect(executed.map((m) => m.name)).toEqual(['0001-accounts', '0002-projects', '0003-schemes-plans', '0004-team-mail-audit', '0005-underlays', '0006-scheme-status-prices']);
+      expect(executed.map((m) => m.name)).toEqual(['0001-accounts', '0002-projects', '0003-schemes-plans', '0004-team-mail-audit', '0005-underlays', '0006-scheme-status-prices', '0007-plan-v2-composite-columns']);
     });
   });
 
