@@ -2,6 +2,7 @@ import { mkdirSync } from 'node:fs';
 import { dirname } from 'node:path';
 import { Sequelize } from 'sequelize';
 import { defineModels, type Db } from '../models/models';
+import { serializeSqliteTransactions } from './sqlite-serial';
 
 export type DatabaseTarget =
   | { dialect: 'sqlite'; storage: string; inMemory: boolean }
@@ -24,6 +25,7 @@ export async function connectDatabase(databaseUrl: string): Promise<Db> {
   if (target.dialect === 'sqlite') {
     if (!target.inMemory) mkdirSync(dirname(target.storage), { recursive: true });
     sequelize = new Sequelize({ dialect: 'sqlite', storage: target.storage, logging: false });
+    serializeSqliteTransactions(sequelize);
   } else {
     // Needs the `pg` package installed; nothing in the models or migrations is SQLite-only.
     sequelize = new Sequelize(target.url, { dialect: 'postgres', logging: false });

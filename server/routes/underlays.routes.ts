@@ -42,7 +42,11 @@ function receiveUpload(req: Request, res: Response): Promise<void> {
         if (err.code === 'LIMIT_UNEXPECTED_FILE') {
           return reject(AppError.badRequest(`Send one image in the multipart part named "file" (got "${err.field ?? ''}").`, { file: 'Send one image as "file"' }));
         }
-        return reject(AppError.badRequest(`The upload could not be read: ${err.message}.`));
+        return reject(AppError.badRequest(`The upload could not be read: ${err.message}.`, { file: 'Send one image as "file" with a "level" field' }));
+      }
+      // The multipart parser's own errors (a truncated or malformed body) are the client's.
+      if (err instanceof Error && !(err instanceof AppError)) {
+        return reject(AppError.badRequest(`The upload could not be read: ${err.message}.`, { file: 'Send a complete multipart/form-data body' }));
       }
       reject(err);
     });
@@ -72,6 +76,9 @@ const underlayPatchBody = z
   })
   .strict()
   .refine((b) => b.placement !== undefined || b.opacity !== undefined || b.visible !== undefined, 'Send placement, opacity or visible');
+
+/** Paths (under /api) whose write takes a multipart body; every other write body is JSON. */
+export const UNDERLAY_UPLOAD_PATHS: readonly RegExp[] = [/^\/schemes\/[^/]+\/underlays\/?$/];
 
 export function underlaysRoutes(ctx: AppContext): Router {
   const router = Router();
