@@ -184,9 +184,9 @@ function caseArbitrary(r: PreparedRoute): fc.Arbitrary<FuzzCase> {
       fc.tuple(fc.integer({ min: 16_385, max: 2 ** 31 - 1 }), fc.integer({ min: 1, max: 2 ** 31 - 1 }), fc.boolean()).map(([w, h, swap]) => ({
         kind: 'upload-huge-dimensions', certain: true, path, multipart: { fields: level, file: { field: 'file', content: swap ? pngHeader(h, w) : pngHeader(w, h), filename: 'huge.png' } },
       })),
-      fc.tuple(fc.constantFrom('file', 'image', ''), fc.oneof(anyUnicode, fc.constant(''))).map(([field, lvl]) => ({
+      fc.tuple(fc.constantFrom('file', 'image', ''), fc.oneof(anyUnicode, fc.constant(''))).map(([field, lvl]): FuzzCase => ({
         kind: 'upload-bad-parts', certain: field !== 'file' || lvl.trim() === '', path,
-        multipart: { fields: lvl === '' ? {} : { level: lvl }, file: field === '' ? undefined : { field, content: tinyPng(2, 2), filename: 'ok.png' } },
+        multipart: { fields: lvl === '' ? ({} as Record<string, string>) : { level: lvl }, file: field === '' ? undefined : { field, content: tinyPng(2, 2), filename: 'ok.png' } },
       })),
       fc.constantFrom('--fuzz\r\nContent-Disposition: form-data; name="file"; filename="a.png"\r\n\r\n\x89PNG', 'garbage', '--fuzz--', '--fuzz\r\nContent-Disposition: form-data\r\n\r\nx\r\n--fuzz--\r\n').map((text) => ({
         kind: 'upload-broken-multipart', certain: true, path, raw: { contentType: 'multipart/form-data; boundary=fuzz', text },
