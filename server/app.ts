@@ -4,6 +4,7 @@ import type { AppContext } from './app-context';
 import { createLucia } from './auth/lucia';
 import { createSignInLimiters } from './auth/rate-limiter';
 import type { Config } from './config';
+import { setDesignRunsKept } from './services/design-run-storage';
 import { errorHandler } from './middleware/error.middleware';
 import { requestLog } from './middleware/request-log.middleware';
 import { securityHeaders } from './middleware/security.middleware';
@@ -34,6 +35,8 @@ export function createApp(options: CreateAppOptions): Express {
     lucia: createLucia(models, { cookieSecure: config.cookieSecure }),
     limiters: createSignInLimiters({ relaxed: config.rateLimitRelaxed }),
   };
+
+  setDesignRunsKept(sequelize, config.designRunsKept);
 
   const app = express();
   app.disable('x-powered-by');
