@@ -61,7 +61,7 @@ test('an engineer uploads an architect’s PDF: its page is drawn under the plan
   expect((await underlayPixels(page)).opaque).toBe(0);
 
   await page.getByLabel('Upload a plan (image or PDF)').setInputFiles({ name: 'A-102 level 2.pdf', mimeType: 'application/pdf', buffer: await sheetPdf() });
-  await expect(page.getByText(/PDF page 1 of 2 · 1224 × 792 pt/)).toBeVisible({ timeout: 20_000 });
+  await expect(page.getByText(/PDF page 1 of 2 · 1224 × 792 pt/)).toBeVisible({ timeout: 90_000 }); // the server opens the PDF first
   await expect(page.getByTestId('pdf-page-ready')).toHaveText('Page 1 drawn.', { timeout: 30_000 });
   // The rendered page is on the plan's underlay layer: white paper (opaque) with black grid lines.
   await expect.poll(async () => (await underlayPixels(page)).opaque, { timeout: 15_000 }).toBeGreaterThan(1000);
@@ -70,7 +70,7 @@ test('an engineer uploads an architect’s PDF: its page is drawn under the plan
   await page.screenshot({ path: `${SCREENSHOT_DIR}/pdf-underlay.png` });
 
   await page.getByRole('combobox', { name: 'Page' }).selectOption('2');
-  await expect(page.getByText(/PDF page 2 of 2 · 792 × 612 pt/)).toBeVisible();
+  await expect(page.getByText(/PDF page 2 of 2 · 792 × 612 pt/)).toBeVisible({ timeout: 60_000 });
   await expect(page.getByTestId('pdf-page-ready')).toHaveText('Page 2 drawn.', { timeout: 30_000 });
 
   await page.getByRole('checkbox', { name: 'Lock' }).check();

@@ -193,7 +193,7 @@ export async function writeFramingIfc(input: IfcExportInput): Promise<Uint8Array
       const position = placement3(point3(0, (-m.profile.d_in / 2) * IN_TO_M, 0));
       const shape = bodyShape(m.profile, position, m.length_ft * FT_TO_M);
       const beam = write(
-        new I.IfcBeam(guid(`member:${m.id}`), null, label(m.mark || m.id), text(`${m.kind} ${m.mark} ${m.size}`), label(m.size), placement as never, shape as never, new I.IfcIdentifier(m.id), m.kind === 'girder' ? I.IfcBeamTypeEnum.BEAM : I.IfcBeamTypeEnum.JOIST),
+        new I.IfcBeam(guid(`member:${m.id}`), null, label(m.mark || m.id), text(`${m.kind} ${m.mark} ${m.size}`), label(m.size), placement as never, shape as never, new I.IfcIdentifier(m.id), I.IfcBeamTypeEnum.BEAM),
       );
       const r = m.reactions;
       pset(`member:${m.id}`, 'Baywright_Member', beam, [
