@@ -1,16 +1,16 @@
-import type { Request, Response } from 'express';
 import { Router } from 'express';
-import multer from 'multer';
 import { z } from 'zod';
 import type { AppContext } from '../app-context';
 import { authOf, requireRole } from '../auth/auth.middleware';
-import { AppError } from '../errors/app-error';
+import { receiveCheckedUpload } from '../middleware/upload.middleware';
+import { isPdf } from '../pdf/pdf-pages.reader';
 import { idParams, validate } from '../middleware/validate.middleware';
 import {
   createUnderlay,
   deleteUnderlay,
   getUnderlayImage,
   listUnderlays,
+  sniffImage,
   UNDERLAY_MAX_BYTES,
   updateUnderlay,
 } from '../services/underlays.service';
@@ -21,33 +21,17 @@ import {
 // PATCH  /api/underlays/:id           { placement?, opacity?, visible?, locked?, page? }   owner, engineer
 // DELETE /api/underlays/:id                                                           owner, engineer
 
-const upload = multer({
-  storage: multer.memoryStorage(),
-  limits: { fileSize: UNDERLAY_MAX_BYTES, files: 1, fields: 5, fieldSize: 1024, parts: 8 },
-});
-
-const MB = UNDERLAY_MAX_BYTES / (1024 * 1024);
-
-/** Reads the multipart body; multer's limits become clear 413/400 answers. */
-function receiveUpload(req: Request, res: Response): Promise<void> {
-  return new Promise((resolve, reject) => {
-    upload.single('file')(req, res, (err: unknown) => {
-      if (!err) return resolve();
-      if (err instanceof multer.MulterError) {
-        if (err.code === 'LIMIT_FILE_SIZE') {
-          return reject(new AppError(413, 'payload_too_large', `The file is larger than ${MB} MB. Reduce the image's resolution, save it as JPEG, or keep only the plan pages of the PDF, and try again.`, {
-            fields: { file: `At most ${MB} MB` },
-          }));
-        }
-        if (err.code === 'LIMIT_UNEXPECTED_FILE') {
-          return reject(AppError.badRequest(`Send one image or PDF in the multipart part named "file" (got "${err.field ?? ''}").`, { file: 'Send one file as "file"' }));
-        }
-        return reject(AppError.badRequest(`The upload could not be read: ${err.message}.`));
-      }
-      reject(err);
-    });
-  });
-}
+/**
+ * Underlay files: checked by content before anything is stored. Images are walked whole here
+ * (PNG or JPEG structure and size); a PDF is recognised by its header here and read whole by
+ * pdfjs (pages, encryption, damage) in createUnderlay before it is stored.
+ */
+const underlayUpload = {
+  field: 'file',
+  maxBytes: UNDERLAY_MAX_BYTES,
+  what: 'a PNG or JPEG image or a PDF',
+  check: (buf: Buffer) => (isPdf(buf) ? ('pdf' as const) : sniffImage(buf)),
+};
 
 const pageNumber = z.number({ error: 'page must be a whole number from 1' }).int('page must be a whole number from 1').min(1, 'page must be a whole number from 1').max(100000, 'page is out of range');
 
@@ -92,12 +76,12 @@ export function underlaysRoutes(ctx: AppContext): Router {
 
   router.post('/schemes/:id/underlays', requireRole('plan:write'), async (req, res) => {
     const { params } = validate(req, { params: idParams });
-    await receiveUpload(req, res);
+    const file = await receiveCheckedUpload(req, res, underlayUpload);
     const { body } = validate(req, { body: uploadFields });
     const underlay = await createUnderlay(db, storage, authOf(res), params.id, {
       levelId: body.level,
       page: body.page,
-      file: req.file ? { buffer: req.file.buffer, originalName: req.file.originalname } : null,
+      file: file ? { buffer: file.buffer, originalName: file.originalName } : null,
     });
     res.status(201).json({ underlay });
   });

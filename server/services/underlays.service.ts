@@ -14,6 +14,7 @@ import { AppError } from '../errors/app-error';
 import { isPdf, readPdfPage } from '../pdf/pdf-pages.reader';
 import type { Db } from '../models/models';
 import type { UnderlayAttributes, UnderlayCreation } from '../models/underlay.model';
+import { checkJpegEnd, checkPngStructure, looksLikeJpeg, looksLikePng, unsupportedContent } from './file-content.service';
 
 export const UNDERLAY_MAX_BYTES = 10 * 1024 * 1024;
 /** Larger sides do not draw reliably in browser canvases. */
@@ -73,15 +74,7 @@ export interface UnderlayPatch {
   page?: number;
 }
 
-const PNG_SIGNATURE = [0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a];
-
-function startsWith(buf: Uint8Array, bytes: readonly number[]): boolean {
-  return buf.length >= bytes.length && bytes.every((b, i) => buf[i] === b);
-}
-
-function unsupported(message: string): AppError {
-  return new AppError(415, 'unsupported_media_type', message, { fields: { file: message } });
-}
+const unsupported = (message: string) => unsupportedContent(message);
 
 /** PNG: 8-byte signature, then the IHDR chunk (PNG spec §11.2.2) with width and height. */
 function readPng(buf: Buffer): ImageInfo {
@@ -123,8 +116,8 @@ function readJpeg(buf: Buffer): ImageInfo {
  */
 export function sniffImage(buf: Buffer): ImageInfo {
   let info: ImageInfo;
-  if (startsWith(buf, PNG_SIGNATURE)) info = readPng(buf);
-  else if (startsWith(buf, [0xff, 0xd8, 0xff])) info = readJpeg(buf);
+  if (looksLikePng(buf)) info = readPng(buf);
+  else if (looksLikeJpeg(buf)) info = readJpeg(buf);
   else {
     throw unsupported('The file is not a PNG or JPEG image or a PDF (its content was checked, not its name).');
   }
@@ -134,6 +127,9 @@ export function sniffImage(buf: Buffer): ImageInfo {
       file: `Largest side accepted: ${UNDERLAY_MAX_SIDE_PX} px`,
     });
   }
+  // The whole file, not only its header: a damaged or disguised file is never stored.
+  if (info.mime === 'image/png') checkPngStructure(buf);
+  else checkJpegEnd(buf);
   return info;
 }
 

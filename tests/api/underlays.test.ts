@@ -80,6 +80,19 @@ describe('underlays API: upload', () => {
     expect(await t.ctx.db.models.Underlay.count()).toBe(rows);
   });
 
+  it('when a real PNG carries a second file after its end, then 415 names the hidden bytes and nothing is stored', async () => {
+    const before = stored().length;
+    const rows = await t.ctx.db.models.Underlay.count();
+    const polyglot = Buffer.concat([tinyPng(2, 2), Buffer.from('<script>alert(document.cookie)</script>')]);
+    const res = await upload(t.agents.engineer, schemeId, polyglot, 'plan.png', 'L2', 'image/png');
+    expect(res.status).toBe(415);
+    expect(res.body.error).toMatchObject({ code: 'unsupported_media_type', message: expect.stringContaining('39 bytes follow the IEND chunk') });
+    expect(res.body.error.fields.file).toMatch(/IEND/);
+    expect(stored().length).toBe(before);
+    expect(await t.ctx.db.models.Underlay.count()).toBe(rows);
+  });
+
+
   it('when the file is larger than 10 MB, then 413 with a clear message and nothing is stored', async () => {
     const before = stored().length;
     const big = Buffer.concat([tinyPng(2, 2), Buffer.alloc(UNDERLAY_MAX_BYTES + 1 - tinyPng(2, 2).length + 1)]);
@@ -239,6 +252,32 @@ describe('sniffImage: type and size from the content', () => {
     expect(cleanFilename('C:\\drawings\\level\u0007 2.png', 'png')).toBe('level 2.png');
     expect(cleanFilename('../../etc/passwd', 'png')).toBe('passwd');
     expect(cleanFilename('', 'jpg')).toBe('underlay.jpg');
+  });
+});
+
+describe('sniffImage: the whole file is checked, not only its header', () => {
+  it('when a PNG has a corrupted byte, is cut short, or has bytes after IEND, then 415 names the damage', () => {
+    const good = tinyPng(4, 3);
+    expect(sniffImage(good)).toMatchObject({ widthPx: 4, heightPx: 3 });
+    const flipped = Buffer.from(good);
+    flipped[45] ^= 0xff; // inside the IDAT data
+    expect(() => sniffImage(flipped)).toThrow(/chunk IDAT fails its CRC check/);
+    expect(() => sniffImage(good.subarray(0, good.length - 12))).toThrow(/ends before its IEND chunk/);
+    const hidden = Buffer.concat([good, Buffer.from('<html><script>alert(1)</script></html>')]);
+    expect(() => sniffImage(hidden)).toThrow(/38 bytes follow the IEND chunk/);
+    try {
+      sniffImage(hidden);
+    } catch (e) {
+      expect((e as { status: number; fields: Record<string, string> }).status).toBe(415);
+      expect((e as { fields: Record<string, string> }).fields.file).toMatch(/IEND/);
+    }
+  });
+
+  it('when a JPEG does not end with its end-of-image marker, then 415; zero padding after it is accepted', () => {
+    const good = jpegHeader(800, 600);
+    expect(sniffImage(Buffer.concat([good, Buffer.alloc(16)]))).toMatchObject({ widthPx: 800, heightPx: 600 });
+    expect(() => sniffImage(good.subarray(0, good.length - 2))).toThrow(/does not end with the end-of-image marker/);
+    expect(() => sniffImage(Buffer.concat([good, Buffer.from('PK\u0003\u0004zip')]))).toThrow(/does not end with the end-of-image marker/);
   });
 });
 

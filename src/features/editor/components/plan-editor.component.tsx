@@ -9,6 +9,7 @@ import { ACTIONS, actionForKey, dispatch, keyOf, type ActionId } from '../action
 import { savePlan } from '../api/save-plan.api';
 import { PlanCanvas, type PlanViewArgs } from '../canvas/plan-canvas.component';
 import { LiveDesign } from '../design/live-design';
+import { keepIssuedMarks } from '../design/issued-marks';
 import { MemberList } from '../members/member-list.component';
 import { createEditorStore, type EditorStore } from '../store/editor.store';
 import { PlanAutosave, type AutosaveSnapshot } from '../sync/plan-autosave';
@@ -129,9 +130,11 @@ export function PlanEditor(props: PlanEditorProps) {
       previous = s.plan;
       design.request(s.plan);
     });
+    const unsubMarks = design.subscribe(() => keepIssuedMarks(store, design.getSnapshot(), (from, to) => autosave.absorb(from, to)));
     autosave.start();
     return () => {
       unsub();
+      unsubMarks();
       autosave.stop();
       design.dispose();
     };
