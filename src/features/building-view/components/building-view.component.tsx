@@ -97,6 +97,7 @@ export function BuildingView({ plan, design, selection, onSelect }: BuildingView
       if (simplified) setSimplifiedMotion(true);
       if (framesPerSecond !== null) {
         el.dataset.fps = framesPerSecond.toFixed(1);
+        el.dataset.frameP95Ms = scene.slowestFrameMs?.toFixed(1) ?? '';
         setFps(Math.round(framesPerSecond));
       }
     };

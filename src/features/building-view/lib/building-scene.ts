@@ -54,6 +54,8 @@ export class BuildingScene {
   private readonly raycaster = new Raycaster();
   private turning = false;
   private frameTimes: number[] = [];
+  /** 95th percentile of the recent frame intervals while turning, ms. */
+  slowestFrameMs: number | null = null;
   private moving = false;
   private lines: LineSegments | null = null;
   /** Each piece's centreline ends, in batch order, for the motion view. */
@@ -251,8 +253,13 @@ export class BuildingScene {
     if (this.turning) {
       if (this.lastFrameAt > 0) this.frameTimes.push(now - this.lastFrameAt);
       this.lastFrameAt = now;
-      if (this.frameTimes.length > 60) this.frameTimes.shift();
-      if (this.frameTimes.length >= 5) framesPerSecond = 1000 / (this.frameTimes.reduce((s, t) => s + t, 0) / this.frameTimes.length);
+      if (this.frameTimes.length > 120) this.frameTimes.shift();
+      if (this.frameTimes.length >= 5) {
+        // The typical frame (median interval), so one long pause (a new design arriving) does not hide the rate.
+        const sorted = [...this.frameTimes].sort((a, b) => a - b);
+        framesPerSecond = 1000 / sorted[Math.floor(sorted.length / 2)];
+        this.slowestFrameMs = sorted[Math.min(sorted.length - 1, Math.ceil(sorted.length * 0.95) - 1)];
+      }
       this.requestFrame();
     }
     this.onFrame?.({ framesPerSecond, pieces: this.axes.length, simplified });
