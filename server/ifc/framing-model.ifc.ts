@@ -69,6 +69,22 @@ export interface IfcExportInput {
 
 type Line = { expressID: number };
 
+/**
+ * The file header names Baywright as the originating system and web-ifc as the preprocessor
+ * (ISO 10303-21 §8.2.2 FILE_NAME), without the library's banner comment. Only the HEADER
+ * section is touched; the file is ASCII (web-ifc escapes other characters as \X2\…\X0\).
+ */
+export function ownHeader(bytes: Uint8Array): Uint8Array {
+  const text = Buffer.from(bytes).toString('latin1');
+  const dataAt = text.indexOf('\nDATA;');
+  if (dataAt < 0) return bytes;
+  const header = text
+    .slice(0, dataAt)
+    .replace(/\/\*[\s\S]*?\*\/\r?\n?/g, '')
+    .replace(/^(FILE_NAME\(.*),'[^']*','[^']*',('[^']*'\);)$/m, "$1,'web-ifc','Baywright',$2");
+  return new Uint8Array(Buffer.from(header + text.slice(dataAt), 'latin1'));
+}
+
 /** Writes the model and returns the STEP file bytes (ISO 10303-21). */
 export async function writeFramingIfc(input: IfcExportInput): Promise<Uint8Array> {
   const api = await ifcApi();
@@ -193,7 +209,7 @@ export async function writeFramingIfc(input: IfcExportInput): Promise<Uint8Array
       const position = placement3(point3(0, (-m.profile.d_in / 2) * IN_TO_M, 0));
       const shape = bodyShape(m.profile, position, m.length_ft * FT_TO_M);
       const beam = write(
-        new I.IfcBeam(guid(`member:${m.id}`), null, label(m.mark || m.id), text(`${m.kind} ${m.mark} ${m.size}`), label(m.size), placement as never, shape as never, new I.IfcIdentifier(m.id), m.kind === 'girder' ? I.IfcBeamTypeEnum.BEAM : I.IfcBeamTypeEnum.JOIST),
+        new I.IfcBeam(guid(`member:${m.id}`), null, label(m.mark || m.id), text(`${m.kind} ${m.mark} ${m.size}`), label(m.size), placement as never, shape as never, new I.IfcIdentifier(m.id), I.IfcBeamTypeEnum.BEAM),
       );
       const r = m.reactions;
       pset(`member:${m.id}`, 'Baywright_Member', beam, [
@@ -245,7 +261,7 @@ export async function writeFramingIfc(input: IfcExportInput): Promise<Uint8Array
       return column;
     }
 
-    return api.SaveModel(modelId);
+    return ownHeader(api.SaveModel(modelId));
   } finally {
     api.CloseModel(modelId);
   }

@@ -17,11 +17,12 @@ export const paths = {
   },
   projectPlan: {
     path: '/projects/:projectId/plan',
-    /** The Plan, optionally of one scheme and level: /projects/7/plan?scheme=12&level=L2. */
-    href: (projectId: string | number, at: { scheme?: string | number | null; level?: string | null } = {}) => {
+    /** The Plan, optionally of one scheme and level, or its Building (3D) view: /projects/7/plan?scheme=12&level=L2&view=building. */
+    href: (projectId: string | number, at: { scheme?: string | number | null; level?: string | null; view?: 'building' | null } = {}) => {
       const q = new URLSearchParams();
       if (at.scheme != null && at.scheme !== '') q.set('scheme', String(at.scheme));
       if (at.level) q.set('level', at.level);
+      if (at.view) q.set('view', at.view);
       const query = q.toString();
       return `${paths.project.href(projectId)}/plan${query ? `?${query}` : ''}`;
     },

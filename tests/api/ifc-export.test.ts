@@ -131,6 +131,10 @@ describe('GET /api/schemes/:id/model.ifc', () => {
     expect(text).toContain("FILE_SCHEMA(('IFC4'));");
     expect(text).toMatch(/FILE_DESCRIPTION\(\('ViewDefinition \[ReferenceView\]','Baywright results must be checked by a licensed engineer/);
     expect(model.schema).toBe('IFC4');
+    // ISO 10303-21 FILE_NAME: preprocessor web-ifc, originating system Baywright; no banner comment.
+    const header = text.slice(0, text.indexOf('DATA;'));
+    expect(header).toMatch(/FILE_NAME\('Scheme C two levels\.ifc','[^']+',\('Baywright'\),\('Baywright'\),'web-ifc','Baywright','none'\);/);
+    expect(header).not.toContain('/*');
   });
 
   it('when read back, then there is one project, site and building and a storey per level at its elevation', () => {

@@ -65,6 +65,7 @@ describe('project schemes page', () => {
     expect(within(row).getByText('220 pcs')).toBeInTheDocument();
     expect(within(row).getByText('Stale · rev 2')).toBeInTheDocument();
     expect(within(row).getByRole('link', { name: 'Open plan' })).toHaveAttribute('href', `/projects/${PROJECT}/plan?scheme=s-1`);
+    expect(within(row).getByRole('link', { name: 'Building (3D)' })).toHaveAttribute('href', `/projects/${PROJECT}/plan?scheme=s-1&view=building`);
     expect(within(row).getByRole('link', { name: 'Export' })).toHaveAttribute('href', '/api/schemes/s-1/export');
   });
 

@@ -17,7 +17,7 @@ import { buildingModel, type BuildingDesignInput, type BuildingModel, type Build
 import { Button } from '../../../components/ui/button.ui';
 import { utilisation, UTILISATION_LIMITS, type UtilisationBand } from '../../../lib/utilisation';
 import { BuildingScene, type ScenePiece } from '../lib/building-scene';
-import { webglAvailable } from '../lib/webgl-support';
+import { webglSupport } from '../lib/webgl-support';
 
 export interface BuildingViewProps {
   plan: BuildingPlanInput;
@@ -49,7 +49,8 @@ export function pieceText(model: BuildingModel, key: string): string {
 }
 
 export function BuildingView({ plan, design, selection, onSelect }: BuildingViewProps) {
-  const [webgl] = useState(() => webglAvailable());
+  const [support] = useState(() => webglSupport());
+  const webgl = support.available;
   const model = useMemo(() => buildingModel(plan, design), [plan, design]);
   const canvasRef = useRef<HTMLCanvasElement>(null);
   const wrapRef = useRef<HTMLDivElement>(null);
@@ -59,6 +60,7 @@ export function BuildingView({ plan, design, selection, onSelect }: BuildingView
   const [hover, setHover] = useState<{ x: number; y: number; text: string } | null>(null);
   const [turning, setTurning] = useState(false);
   const [fps, setFps] = useState<number | null>(null);
+  const [simplifiedMotion, setSimplifiedMotion] = useState(false);
   const [failed, setFailed] = useState<string | null>(null);
   const down = useRef<{ x: number; y: number } | null>(null);
   const hoverFrame = useRef<number | null>(null);
@@ -80,19 +82,22 @@ export function BuildingView({ plan, design, selection, onSelect }: BuildingView
     if (!webgl || !canvasRef.current || !wrapRef.current) return;
     let scene: BuildingScene;
     try {
-      scene = new BuildingScene(canvasRef.current, cssColour('--color-paper-raised', '#fbf9f4'));
+      scene = new BuildingScene(canvasRef.current, cssColour('--color-paper-raised', '#fbf9f4'), !support.software);
     } catch (error) {
       setFailed(error instanceof Error ? error.message : 'WebGL could not start.');
       return;
     }
     sceneRef.current = scene;
-    scene.onFrame = ({ framesPerSecond, pieces }) => {
+    scene.onFrame = ({ framesPerSecond, pieces, simplified }) => {
       const el = wrapRef.current;
       if (!el) return;
       el.dataset.frames = String(Number(el.dataset.frames ?? 0) + 1);
       el.dataset.pieces = String(pieces);
+      el.dataset.simplified = String(simplified);
+      if (simplified) setSimplifiedMotion(true);
       if (framesPerSecond !== null) {
         el.dataset.fps = framesPerSecond.toFixed(1);
+        el.dataset.frameP95Ms = scene.slowestFrameMs?.toFixed(1) ?? '';
         setFps(Math.round(framesPerSecond));
       }
     };
@@ -190,6 +195,7 @@ export function BuildingView({ plan, design, selection, onSelect }: BuildingView
               {turning ? 'Stop turning' : 'Turn'}
             </Button>
             {turning && fps !== null ? <span className="figures font-mono text-ink-soft">{fps} frames/s</span> : null}
+            {simplifiedMotion ? <span className="text-ink-soft">Large building: centrelines while the view moves, W-shapes when it stops.</span> : null}
           </div>
         ) : null}
       </div>

@@ -2,8 +2,11 @@
 // W-shapes (one InstancedMesh per profile and kind of piece, so ten thousand members are a
 // few dozen draw calls), coloured per piece, picked by ray, orbited with OrbitControls.
 // Frames are drawn on demand (after a change or while the camera moves), not continuously.
+// While the camera moves through a large building (more than MOTION_LOD_PIECES pieces), each
+// piece is drawn as its centreline in its colour, and the W-shapes come back the moment the
+// camera stops: orbiting stays smooth even where WebGL is rendered in software.
 import {
-  AmbientLight, Box3, BufferGeometry, Color, DirectionalLight, HemisphereLight, InstancedMesh, Matrix4, MeshLambertMaterial,
+  AmbientLight, Box3, BufferAttribute, BufferGeometry, Color, LineBasicMaterial, LineSegments, DirectionalLight, HemisphereLight, InstancedMesh, Matrix4, MeshLambertMaterial,
   PerspectiveCamera, Quaternion, Raycaster, Scene, Vector2, Vector3, WebGLRenderer,
 } from 'three';
 import { OrbitControls } from 'three/examples/jsm/controls/OrbitControls.js';
@@ -32,6 +35,8 @@ interface Batch {
 }
 
 const HIDDEN = new Matrix4().makeScale(0, 0, 0);
+/** Above this many pieces, a moving camera draws centrelines instead of W-shapes. */
+export const MOTION_LOD_PIECES = 2000;
 const Z_UP = new Vector3(0, 0, 1);
 
 export class BuildingScene {
@@ -49,12 +54,22 @@ export class BuildingScene {
   private readonly raycaster = new Raycaster();
   private turning = false;
   private frameTimes: number[] = [];
+  /** 95th percentile of the recent frame intervals while turning, ms. */
+  slowestFrameMs: number | null = null;
+  private moving = false;
+  private lines: LineSegments | null = null;
+  /** Each piece's centreline ends, in batch order, for the motion view. */
+  private axes: { batch: number; index: number; a: Vector3; b: Vector3; level: string; key: string }[] = [];
+  private readonly lineMaterial = new LineBasicMaterial({ vertexColors: true });
   private lastFrameAt = 0;
   /** Called after each drawn frame with the recent frames per second (while turning) . */
-  onFrame: ((stats: { framesPerSecond: number | null; pieces: number }) => void) | null = null;
+  onFrame: ((stats: { framesPerSecond: number | null; pieces: number; simplified: boolean }) => void) | null = null;
 
-  constructor(readonly canvas: HTMLCanvasElement, background: string) {
-    this.renderer = new WebGLRenderer({ canvas, antialias: true, powerPreference: 'high-performance' });
+  /** Whether the last frame drew centrelines (the camera was moving through a large building). */
+  lastFrameSimplified = false;
+
+  constructor(readonly canvas: HTMLCanvasElement, background: string, antialias = true) {
+    this.renderer = new WebGLRenderer({ canvas, antialias, powerPreference: 'high-performance' });
     this.renderer.setPixelRatio(Math.min(window.devicePixelRatio || 1, 2));
     this.scene.background = new Color(background);
     this.camera = new PerspectiveCamera(40, 1, 0.5, 20000);
@@ -62,6 +77,13 @@ export class BuildingScene {
     this.controls = new OrbitControls(this.camera, canvas);
     this.controls.enableDamping = false;
     this.controls.addEventListener('change', () => this.requestFrame());
+    this.controls.addEventListener('start', () => {
+      this.moving = true;
+    });
+    this.controls.addEventListener('end', () => {
+      this.moving = false;
+      this.requestFrame();
+    });
     this.scene.add(new HemisphereLight(0xffffff, 0x8a8170, 1.6));
     this.scene.add(new AmbientLight(0xffffff, 0.35));
     const sun = new DirectionalLight(0xffffff, 1.4);
@@ -91,6 +113,12 @@ export class BuildingScene {
       g.matrices.push(matrix);
     };
     const q = new Quaternion();
+    const axisOf = new Map<string, [Vector3, Vector3]>();
+    for (const m of model.members) {
+      const z = m.topElevation_ft - m.profile.d_in / 24;
+      axisOf.set(m.id, [new Vector3(m.start[0], m.start[1], z), new Vector3(m.end[0], m.end[1], z)]);
+    }
+    for (const c of model.columns) axisOf.set(c.id, [new Vector3(c.x_ft, c.y_ft, c.baseElevation_ft), new Vector3(c.x_ft, c.y_ft, c.topElevation_ft)]);
     for (const m of model.members) {
       const yaw = Math.atan2(m.end[1] - m.start[1], m.end[0] - m.start[0]);
       q.setFromAxisAngle(Z_UP, yaw);
@@ -111,6 +139,20 @@ export class BuildingScene {
       this.batches.push(batch);
       this.scene.add(mesh);
     }
+    this.axes = [];
+    this.batches.forEach((b, bi) =>
+      b.pieces.forEach((p, i) => {
+        const [a, e] = axisOf.get(p.key)!;
+        this.axes.push({ batch: bi, index: i, a, b: e, level: p.level, key: p.key });
+      }),
+    );
+    const lineGeometry = new BufferGeometry();
+    lineGeometry.setAttribute('position', new BufferAttribute(new Float32Array(this.axes.length * 6), 3));
+    lineGeometry.setAttribute('color', new BufferAttribute(new Float32Array(this.axes.length * 6), 3));
+    this.lines = new LineSegments(lineGeometry, this.lineMaterial);
+    this.lines.visible = false;
+    this.lines.frustumCulled = false;
+    this.scene.add(this.lines);
     this.refreshInstances();
     if (fit) this.fit();
     this.requestFrame();
@@ -202,16 +244,25 @@ export class BuildingScene {
   private readonly frame = (now: number) => {
     this.frameRequested = false;
     if (this.turning) this.controls.update();
+    const simplified = (this.moving || this.turning) && this.axes.length > MOTION_LOD_PIECES;
+    for (const b of this.batches) b.mesh.visible = !simplified;
+    if (this.lines) this.lines.visible = simplified;
+    this.lastFrameSimplified = simplified;
     this.renderer.render(this.scene, this.camera);
     let framesPerSecond: number | null = null;
     if (this.turning) {
       if (this.lastFrameAt > 0) this.frameTimes.push(now - this.lastFrameAt);
       this.lastFrameAt = now;
-      if (this.frameTimes.length > 60) this.frameTimes.shift();
-      if (this.frameTimes.length >= 5) framesPerSecond = 1000 / (this.frameTimes.reduce((s, t) => s + t, 0) / this.frameTimes.length);
+      if (this.frameTimes.length > 120) this.frameTimes.shift();
+      if (this.frameTimes.length >= 5) {
+        // The typical frame (median interval), so one long pause (a new design arriving) does not hide the rate.
+        const sorted = [...this.frameTimes].sort((a, b) => a - b);
+        framesPerSecond = 1000 / sorted[Math.floor(sorted.length / 2)];
+        this.slowestFrameMs = sorted[Math.min(sorted.length - 1, Math.ceil(sorted.length * 0.95) - 1)];
+      }
       this.requestFrame();
     }
-    this.onFrame?.({ framesPerSecond, pieces: this.batches.reduce((s, b) => s + b.pieces.length, 0) });
+    this.onFrame?.({ framesPerSecond, pieces: this.axes.length, simplified });
   };
 
   private refreshInstances(): void {
@@ -220,6 +271,16 @@ export class BuildingScene {
       b.mesh.instanceMatrix.needsUpdate = true;
       b.mesh.computeBoundingBox();
       b.mesh.computeBoundingSphere();
+    }
+    if (this.lines) {
+      const pos = this.lines.geometry.getAttribute('position') as BufferAttribute;
+      this.axes.forEach((x, i) => {
+        const hide = this.hiddenLevels.has(x.level);
+        pos.setXYZ(2 * i, x.a.x, x.a.y, x.a.z);
+        const end = hide ? x.a : x.b; // a hidden piece collapses to a point, drawn as nothing
+        pos.setXYZ(2 * i + 1, end.x, end.y, end.z);
+      });
+      pos.needsUpdate = true;
     }
     this.refreshColours();
   }
@@ -237,6 +298,15 @@ export class BuildingScene {
       b.pieces.forEach((p, i) => b.mesh.setColorAt(i, this.selectedKeys.has(p.key) ? selected : colour(this.colours!.colourOf(p.key))));
       if (b.mesh.instanceColor) b.mesh.instanceColor.needsUpdate = true;
     }
+    if (this.lines) {
+      const col = this.lines.geometry.getAttribute('color') as BufferAttribute;
+      this.axes.forEach((x, i) => {
+        const c = this.selectedKeys.has(x.key) ? selected : colour(this.colours!.colourOf(x.key));
+        col.setXYZ(2 * i, c.r, c.g, c.b);
+        col.setXYZ(2 * i + 1, c.r, c.g, c.b);
+      });
+      col.needsUpdate = true;
+    }
   }
 
   private clearBatches(): void {
@@ -245,6 +315,12 @@ export class BuildingScene {
       b.mesh.dispose();
     }
     this.batches = [];
+    if (this.lines) {
+      this.scene.remove(this.lines);
+      this.lines.geometry.dispose();
+      this.lines = null;
+    }
+    this.axes = [];
   }
 
   dispose(): void {
@@ -252,6 +328,7 @@ export class BuildingScene {
     for (const g of this.geometries.values()) g.dispose();
     this.geometries.clear();
     this.material.dispose();
+    this.lineMaterial.dispose();
     this.controls.dispose();
     this.renderer.dispose();
   }

@@ -92,6 +92,9 @@ function SchemeActions({ scheme, mayWrite }: { scheme: SchemeSummary; mayWrite: 
         <Link to={paths.projectSchemePlan.href(scheme.projectId, scheme.id)} className={buttonClasses('secondary', 'h-8')}>
           Open plan
         </Link>
+        <Link to={paths.projectPlan.href(scheme.projectId, { scheme: scheme.id, view: 'building' })} className={buttonClasses('quiet', 'h-8')}>
+          Building (3D)
+        </Link>
         <a href={schemeExportUrl(scheme.id)} download className={buttonClasses('quiet', 'h-8')}>
           Export
         </a>
