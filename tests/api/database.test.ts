@@ -12,9 +12,9 @@ import { freshTestDatabase, testDialect } from './helpers/test-database';
 const tmp = mkdtempSync(join(tmpdir(), 'baywright-db-'));
 afterAll(() => rmSync(tmp, { recursive: true, force: true }));
 
-/** A fresh, empty database on the dialect under test (SQLite in memory, or PostgreSQL), dropped after. */
+/** A fresh database on the dialect under test (SQLite in memory, or PostgreSQL), dropped after. */
 async function withFreshDb(fn: (db: Awaited<ReturnType<typeof connectDatabase>>) => Promise<void>): Promise<void> {
-  const target = await freshTestDatabase({ empty: true });
+  const target = await freshTestDatabase();
   const db = await connectDatabase(target.url);
   try {
     await fn(db);
@@ -27,10 +27,10 @@ async function withFreshDb(fn: (db: Awaited<ReturnType<typeof connectDatabase>>)
 describe(`database (${testDialect}): migrations and demo seed`, () => {
   it('when migrations run twice, then the second run applies nothing and every one is recorded', async () => {
     await withFreshDb(async (db) => {
-      expect(await migrateToLatest(db.sequelize)).toEqual(['0001-accounts', '0002-projects', '0003-schemes-plans', '0004-team-mail-audit', '0005-underlays', '0006-scheme-status-prices', '0007-plan-v2-composite-columns']);
+      expect(await migrateToLatest(db.sequelize)).toEqual(['0001-accounts', '0002-projects', '0003-schemes-plans', '0004-team-mail-audit', '0005-underlays', '0006-scheme-status-prices', '0007-plan-v2-composite-columns', '0008-underlay-pdf-pages']);
       expect(await migrateToLatest(db.sequelize)).toEqual([]);
       const executed = await createMigrator(db.sequelize).executed();
-      expect(executed.map((m) => m.name)).toEqual(['0001-accounts', '0002-projects', '0003-schemes-plans', '0004-team-mail-audit', '0005-underlays', '0006-scheme-status-prices', '0007-plan-v2-composite-columns']);
+      expect(executed.map((m) => m.name)).toEqual(['0001-accounts', '0002-projects', '0003-schemes-plans', '0004-team-mail-audit', '0005-underlays', '0006-scheme-status-prices', '0007-plan-v2-composite-columns', '0008-underlay-pdf-pages']);
     });
   });
 
