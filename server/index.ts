@@ -54,6 +54,12 @@ async function main(): Promise<void> {
     log(`listening on http://localhost:${config.port} (${config.nodeEnv})`);
   });
 
+  // Keep idle connections open longer than a reverse proxy's usual 60 s idle timeout, so the
+  // server never closes a kept-alive connection just as the proxy (or a client) reuses it,
+  // which the client sees as a reset request (common practice for Node behind a proxy).
+  server.keepAliveTimeout = 65_000;
+  server.headersTimeout = 66_000;
+
   // Expired sessions are refused anyway; this only keeps the table small.
   const sweep = setInterval(() => {
     getAppContext(app).lucia.deleteExpiredSessions().catch((err) => console.error(err));

@@ -53,14 +53,48 @@ export function toDesignSummary(run: DesignRunAttributes, schemeRevision: number
   };
 }
 
-function toDesignView(run: DesignRunRow, schemeRevision: number): SchemeDesignView {
-  const r = run.get({ plain: true });
-  const result = unpackDesignResult(r.result);
+/** A stored run without its result (lists and lookups never parse the result to find it). */
+type RunMeta = Omit<DesignRunAttributes, 'result'>;
+
+/**
+ * Parsed results of stored runs, by run id: a run never changes once stored, and its result
+ * (about 1 MB of JSON for the demo building) costs more to read and parse than everything
+ * else a design read does. A few, most recently used first; deep-frozen, because every reader
+ * shares the one copy (a reader that changed it would throw, not corrupt the others).
+ */
+const RESULT_CACHE_SIZE = 8;
+const resultCache = new Map<string, Record<string, unknown>>();
+
+function deepFreeze<T>(value: T): T {
+  if (value && typeof value === 'object' && !Object.isFrozen(value)) {
+    Object.freeze(value);
+    for (const child of Object.values(value as Record<string, unknown>)) deepFreeze(child);
+  }
+  return value;
+}
+
+function remember(id: string, result: Record<string, unknown>): Record<string, unknown> {
+  resultCache.delete(id);
+  resultCache.set(id, deepFreeze(result));
+  while (resultCache.size > RESULT_CACHE_SIZE) resultCache.delete(resultCache.keys().next().value as string);
+  return result;
+}
+
+async function resultOf(db: Db, runId: string, transaction?: Transaction): Promise<Record<string, unknown>> {
+  const cached = resultCache.get(runId);
+  if (cached) return remember(runId, cached);
+  const row = await db.models.DesignRun.findByPk(runId, { attributes: ['id', 'result'], transaction });
+  if (!row) throw AppError.notFound('Design');
+  const raw = row.getDataValue('result') as unknown;
+  return remember(runId, unpackDesignResult(raw));
+}
+
+function toDesignView(run: RunMeta, result: Record<string, unknown>, schemeRevision: number): SchemeDesignView {
   return {
     ...result,
-    revision: r.revision,
-    designedAt: new Date(r.createdAt).toISOString(),
-    stale: r.revision !== schemeRevision,
+    revision: run.revision,
+    designedAt: new Date(run.createdAt).toISOString(),
+    stale: run.revision !== schemeRevision,
   };
 }
 
@@ -80,12 +114,14 @@ export async function latestDesignRuns(db: Db, schemeIds: string[]): Promise<Map
   return out;
 }
 
-async function latestRun(db: Db, schemeId: string, transaction?: Transaction): Promise<DesignRunRow | null> {
-  return db.models.DesignRun.findOne({
+async function latestRun(db: Db, schemeId: string, transaction?: Transaction): Promise<RunMeta | null> {
+  const row = await db.models.DesignRun.findOne({
     where: { schemeId },
+    attributes: { exclude: ['result'] },
     order: [['createdAt', 'DESC'], ['revision', 'DESC']],
     transaction,
   });
+  return row ? (row.get({ plain: true }) as RunMeta) : null;
 }
 
 /**
@@ -182,7 +218,9 @@ export async function designSchemeNow(
   });
   // The scheme may have been saved while the engine ran: compare with the revision now.
   const now = await ctx.db.models.Scheme.findByPk(schemeId, { attributes: ['revision'] });
-  return toDesignView(run, now?.getDataValue('revision') ?? attrs.revision);
+  // The stored row holds the packed form; the engine's own output is what readers get.
+  const { result: _packed, ...meta } = stored;
+  return toDesignView(meta, remember(stored.id, result as unknown as Record<string, unknown>), now?.getDataValue('revision') ?? attrs.revision);
 }
 
 /** GET /api/schemes/:id/design: the latest stored run (404 not_designed when none). */
@@ -203,8 +241,8 @@ export async function getSchemeDesign(
   const scheme = await findOwnScheme(ctx, schemeId);
   const revision = scheme.getDataValue('revision');
   const run = await latestRun(ctx.db, schemeId);
-  if (run && (run.getDataValue('revision') === revision || !options.designIfStale)) {
-    return toDesignView(run, revision);
+  if (run && (run.revision === revision || !options.designIfStale)) {
+    return toDesignView(run, await resultOf(ctx.db, run.id), revision);
   }
   if (!options.designIfStale) {
     throw new AppError(404, 'not_designed', 'This scheme has not been designed yet.');

@@ -95,7 +95,7 @@ describe.skipIf(testDialect !== 'sqlite')('crash safety: SIGKILL during plan sav
     const exported = await api.call('GET', `/api/schemes/${schemeId}/export`);
     basePlan = exported.body as Plan;
     designRunsBefore.push((await inspectAfterKill(s)).designRuns.length);
-  }, 180_000);
+  }, 600_000);
 
   /** Kills the running server, checks the file, starts it again. */
   async function inspectAfterKill(s: ServerProcess): Promise<StoredState> {
@@ -172,7 +172,7 @@ describe.skipIf(testDialect !== 'sqlite')('crash safety: SIGKILL during plan sav
     // The kills landed at different points of the stream: before any answer and after several.
     expect(savesBeforeKill[0]).toBe(0);
     expect(savesBeforeKill.slice(1).every((n, i) => n >= i + 1)).toBe(true);
-  }, 300_000);
+  }, 600_000);
 
   it('when the server is killed during design runs, then no half-written run is visible and the next run is stored whole', async () => {
     for (const killAfterMs of [5, 120]) {
@@ -194,7 +194,7 @@ describe.skipIf(testDialect !== 'sqlite')('crash safety: SIGKILL during plan sav
     const state = await inspectAfterKill(server!);
     expect(state.designRuns.length).toBeGreaterThan(designRunsBefore[0]);
     expect(state.designRuns.every((r) => r.ok)).toBe(true);
-  }, 300_000);
+  }, 600_000);
 
   it('when the server dies before an edit is saved, then the Plan kept on the device recovers it after the restart and saves it', async () => {
     const api = await engineer(server!);
@@ -258,5 +258,5 @@ describe.skipIf(testDialect !== 'sqlite')('crash safety: SIGKILL during plan sav
     } finally {
       globalThis.fetch = realFetch;
     }
-  }, 180_000);
+  }, 600_000);
 });

@@ -4,6 +4,9 @@
 // Extra arguments go to vitest (e.g. a test file). Without PostgreSQL's server binaries the
 // pass is skipped with a notice, except under CI=true, where that is a failure.
 import { spawn } from 'node:child_process';
+import { connectDatabase } from '../../server/db/connection';
+import { migrateToLatest } from '../../server/db/migrator';
+import { seedDemo } from '../../server/db/seed-demo';
 import { findPgBinDir, startPgCluster } from './pg-cluster';
 
 const binDir = findPgBinDir();
@@ -28,10 +31,25 @@ const stop = () => {
 };
 process.on('exit', stop);
 
+// The template every test app is copied from: migrated and seeded once.
+const TEMPLATE = 'bw_template';
+const pg = (await import('pg')).default;
+const admin = new pg.Client({ connectionString: cluster.adminUrl });
+await admin.connect();
+await admin.query(`CREATE DATABASE ${TEMPLATE}`);
+await admin.end();
+const templateUrl = new URL(cluster.adminUrl);
+templateUrl.pathname = `/${TEMPLATE}`;
+const templateDb = await connectDatabase(templateUrl.toString());
+await migrateToLatest(templateDb.sequelize);
+await seedDemo(templateDb);
+await templateDb.sequelize.close();
+
 const child = spawn(
   process.execPath,
-  ['node_modules/vitest/vitest.mjs', 'run', '--project', 'api', ...process.argv.slice(2)],
-  { stdio: 'inherit', env: { ...process.env, TEST_PG_URL: cluster.adminUrl } },
+  // Longer limits than on SQLite: each test app also creates a database over a socket.
+  ['node_modules/vitest/vitest.mjs', 'run', '--project', 'api', '--hookTimeout', '60000', '--testTimeout', '60000', ...process.argv.slice(2)],
+  { stdio: 'inherit', env: { ...process.env, TEST_PG_URL: cluster.adminUrl, TEST_PG_TEMPLATE: TEMPLATE } },
 );
 for (const signal of ['SIGINT', 'SIGTERM'] as const) {
   process.on(signal, () => {

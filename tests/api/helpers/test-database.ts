@@ -6,6 +6,12 @@ import pg from 'pg';
 // tests/support/run-api-on-postgres.ts): a fresh PostgreSQL database per app, dropped on close.
 
 export const TEST_PG_URL = process.env.TEST_PG_URL || undefined;
+/**
+ * A database already migrated and seeded with the demo (built once per pass by the runner):
+ * test apps are copied from it, which is much faster than migrating and seeding each one. The
+ * seed is idempotent, so createTestApp still runs migrate and seed and gets the same ids back.
+ */
+export const TEST_PG_TEMPLATE = process.env.TEST_PG_TEMPLATE || undefined;
 export const testDialect: 'sqlite' | 'postgres' = TEST_PG_URL ? 'postgres' : 'sqlite';
 
 export interface TestDatabase {
@@ -23,11 +29,15 @@ async function withAdmin<T>(fn: (client: pg.Client) => Promise<T>): Promise<T> {
   }
 }
 
-/** A new, empty database on the test dialect. */
-export async function freshTestDatabase(): Promise<TestDatabase> {
+/**
+ * A new database on the test dialect: empty, or (PostgreSQL with a template, unless `empty`)
+ * a copy of the migrated and seeded template.
+ */
+export async function freshTestDatabase(options: { empty?: boolean } = {}): Promise<TestDatabase> {
   if (!TEST_PG_URL) return { url: 'sqlite::memory:', drop: async () => {} };
   const name = `bw_test_${process.pid}_${randomBytes(6).toString('hex')}`;
-  await withAdmin((c) => c.query(`CREATE DATABASE ${name}`));
+  const template = !options.empty && TEST_PG_TEMPLATE ? ` TEMPLATE ${TEST_PG_TEMPLATE}` : '';
+  await withAdmin((c) => c.query(`CREATE DATABASE ${name}${template}`));
   const url = new URL(TEST_PG_URL);
   url.pathname = `/${name}`;
   return {
