@@ -106,4 +106,18 @@ describe('design runs off the request thread, within a budget', () => {
     expect(ok.status).toBe(200);
     expect(ok.body.members).toHaveLength(11);
   }, 60_000);
+
+  it('when a design needs more memory than its budget, then it is stopped with 422 design_budget_exceeded naming the budget', async () => {
+    configureDesignRuns({ memoryMb: 4 });
+    try {
+      const res = await t.agents.engineer.post(`/api/schemes/${heavyId}/design`).send({});
+      expect(res.status).toBe(422);
+      expect(res.body.error).toEqual({
+        code: 'design_budget_exceeded',
+        message: 'The design needed more than its 4 MB memory budget and was stopped. Design a smaller part of the scheme, or split it into schemes.',
+      });
+    } finally {
+      configureDesignRuns({});
+    }
+  }, 60_000);
 });
