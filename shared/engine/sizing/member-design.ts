@@ -113,23 +113,28 @@ function alternative(ev: ShapeEvaluation): AlternativeShape {
 }
 
 /**
- * For a design, the next lighter candidate (immediately lighter in the selection order, checked)
- * and the lightest passing candidate of a smaller nominal depth, with their ratios.
+ * For a design, the next lighter candidate (the heaviest candidate strictly lighter than the
+ * shape, checked), a candidate of the same weight when there is one (named as such, never as
+ * lighter), and the lightest passing candidate of a smaller nominal depth, with their ratios.
  */
 export function memberAlternatives(
   input: MemberDesignInput, shape: string,
-): { nextLighter: AlternativeShape | null; nextShallower: AlternativeShape | null } {
+): { nextLighter: AlternativeShape | null; nextShallower: AlternativeShape | null; sameWeight: AlternativeShape | null } {
   assertValidMemberInput({ ...input, shape });
   const ctx = buildMemberContext(input);
   const k = shapeConstantsFor(shape, input.Fy_ksi)!;
   const candidates = candidateShapes({ ...input, shape: null }).filter((c) => c.webCompact);
   let lighter: WShapeConstants | null = null;
+  let same: WShapeConstants | null = null;
+  // Candidates run lightest first: the last strictly lighter one is the next lighter.
   for (const c of candidates) {
-    if (c.weightPlf < k.weightPlf || (c.weightPlf === k.weightPlf && c.dIn < k.dIn)) lighter = c;
-    else break;
+    if (c.weightPlf < k.weightPlf) lighter = c;
+    else if (c.weightPlf > k.weightPlf) break;
+    else if (c.label !== k.label && same === null) same = c;
   }
   const nextLighter = lighter ? alternative(evaluateShape(ctx, lighter, false)) : null;
+  const sameWeight = same ? alternative(evaluateShape(ctx, same, false)) : null;
   const shallower = candidates.filter((c) => c.nominalDepthIn < k.nominalDepthIn);
   const sel = selectLightest(ctx, shallower);
-  return { nextLighter, nextShallower: sel ? alternative(sel) : null };
+  return { nextLighter, nextShallower: sel ? alternative(sel) : null, sameWeight };
 }
