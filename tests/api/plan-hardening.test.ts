@@ -17,7 +17,7 @@ beforeAll(async () => {
   const res = await t.agents.engineer.post(`/api/projects/${t.seed.projectId}/schemes`).send({ name: 'Hardening', plan: twoBayDoc() });
   expect(res.status).toBe(201);
   schemeId = res.body.scheme.id;
-});
+}, 120_000);
 afterAll(async () => {
   expect(t.serverErrors).toEqual([]);
   configureDesignRuns({});
@@ -72,7 +72,7 @@ describe('design runs off the request thread, within a budget', () => {
     const res = await t.agents.engineer.post(`/api/projects/${t.seed.projectId}/schemes`).send({ name: 'Heavy', plan: heavyPlan() });
     expect(res.status, JSON.stringify(res.body).slice(0, 500)).toBe(201);
     heavyId = res.body.scheme.id;
-  });
+  }, 60_000);
 
   it('when a heavy design is running, then a second request is answered before it finishes', async () => {
     const order: string[] = [];
