@@ -24,6 +24,9 @@ const MIGRATIONS: { name: string; up: Migration; down: Migration }[] = [
   { name: '0008-underlay-pdf-pages', ...m0008 },
 ];
 
+/** The migration names in the order they run. */
+export const MIGRATION_NAMES: readonly string[] = MIGRATIONS.map((m) => m.name);
+
 export function createMigrator(sequelize: Sequelize) {
   return new Umzug({
     migrations: MIGRATIONS,

@@ -1,6 +1,8 @@
 /** `npm run bench`: runs each benchmark module and prints its figures. Add plan benchmarks beside member. */
 import { runMemberBench, type BenchReport } from './member.bench';
 import { runPlanBench } from './plan.bench';
+import { runCliBench } from './cli.bench';
+import { runServerBench } from './server.bench';
 
 const benches: (() => BenchReport)[] = [runMemberBench];
 
@@ -15,3 +17,8 @@ for (const run of benches) {
 }
 
 runPlanBench();
+// BAYWRIGHT_BENCH=engine skips the command-line and server figures (they take a minute on a shared machine).
+if (process.env.BAYWRIGHT_BENCH !== 'engine') {
+  runCliBench();
+  await runServerBench();
+}
