@@ -17,7 +17,7 @@ beforeAll(async () => {
   const res = await t.agents.engineer.post(`/api/projects/${t.seed.projectId}/schemes`).send({ name: 'Hardening', plan: twoBayDoc() });
   expect(res.status).toBe(201);
   schemeId = res.body.scheme.id;
-});
+}, 120_000);
 afterAll(async () => {
   expect(t.serverErrors).toEqual([]);
   configureDesignRuns({});
@@ -72,7 +72,7 @@ describe('design runs off the request thread, within a budget', () => {
     const res = await t.agents.engineer.post(`/api/projects/${t.seed.projectId}/schemes`).send({ name: 'Heavy', plan: heavyPlan() });
     expect(res.status, JSON.stringify(res.body).slice(0, 500)).toBe(201);
     heavyId = res.body.scheme.id;
-  });
+  }, 60_000);
 
   it('when a heavy design is running, then a second request is answered before it finishes', async () => {
     const order: string[] = [];
@@ -105,5 +105,19 @@ describe('design runs off the request thread, within a budget', () => {
     const ok = await t.agents.engineer.post(`/api/schemes/${schemeId}/design`).send({});
     expect(ok.status).toBe(200);
     expect(ok.body.members).toHaveLength(11);
+  }, 60_000);
+
+  it('when a design needs more memory than its budget, then it is stopped with 422 design_budget_exceeded naming the budget', async () => {
+    configureDesignRuns({ memoryMb: 4 });
+    try {
+      const res = await t.agents.engineer.post(`/api/schemes/${heavyId}/design`).send({});
+      expect(res.status).toBe(422);
+      expect(res.body.error).toEqual({
+        code: 'design_budget_exceeded',
+        message: 'The design needed more than its 4 MB memory budget and was stopped. Design a smaller part of the scheme, or split it into schemes.',
+      });
+    } finally {
+      configureDesignRuns({});
+    }
   }, 60_000);
 });
