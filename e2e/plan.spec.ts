@@ -106,11 +106,12 @@ test.describe('plan', () => {
     await page.screenshot({ path: `${SCREENSHOT_DIR}/plan-member-sheet.png` });
     // The Design basis opens as a panel beside the canvas too; the canvas does not move down.
     const canvasTop = (await canvas.boundingBox())!.y;
-    await page.getByRole('button', { name: 'Design basis' }).click();
+    const basisToggle = page.locator('button[aria-expanded]', { hasText: 'Design basis' });
+    await basisToggle.click();
     await expect(page.getByRole('complementary', { name: 'Design basis panel' })).toBeVisible();
     expect((await canvas.boundingBox())!.y).toBe(canvasTop);
     await page.screenshot({ path: `${SCREENSHOT_DIR}/plan-design-basis.png` });
-    await page.getByRole('button', { name: 'Design basis' }).click();
+    await basisToggle.click();
 
     // A drafter opens the same plan: read only, no tools.
     const url = page.url();

@@ -9,6 +9,7 @@
 import type { Plan, PlanGrid } from '../schemas/plan.schema';
 import { formatFeetInches, gridIntersectionLabel } from './grid-location.drafting';
 import { factoredReaction, type DesignMethod } from './schedule.drafting';
+import { LabelPlacer, rotatedBox, type LabelBox } from './label-placement.drafting';
 import {
   estimateTextWidth,
   PT_PER_IN,
@@ -123,6 +124,18 @@ function levelExtents(input: PlanSheetInput): Box | null {
   return { minX: Math.min(...xs), maxX: Math.max(...xs), minY: Math.min(...ys), maxY: Math.max(...ys) };
 }
 
+/** The box a sheet text covers (baseline at y; rotation in degrees about its anchor). */
+export function sheetTextBox(p: Extract<SheetPrimitive, { type: 'text' }>): LabelBox {
+  const w = estimateTextWidth(p.text, p.size, p.font);
+  const h = p.size;
+  const along = p.anchor === 'start' ? w / 2 : p.anchor === 'end' ? -w / 2 : 0;
+  const rad = ((p.rotate ?? 0) * Math.PI) / 180;
+  // Centre: half the width along the reading direction from the anchor, a third of the size above the baseline.
+  const cx = p.x + Math.cos(rad) * along + Math.sin(rad) * (h * 0.35);
+  const cy = p.y + Math.sin(rad) * along - Math.cos(rad) * (h * 0.35);
+  return rotatedBox(cx, cy, w, h, rad, p.ref ?? p.text);
+}
+
 /** Reading angle of a member's text on the sheet, kept in (-90°, 90°] so text reads left to right or bottom to top. */
 function readingAngle(x1: number, y1: number, x2: number, y2: number): number {
   let deg = (Math.atan2(y2 - y1, x2 - x1) * 180) / Math.PI;
@@ -195,7 +208,9 @@ export function buildPlanSheet(input: PlanSheetInput): PlanSheet {
     dimensionStrings(out, xGrids, 'x', top, sx);
     dimensionStrings(out, yGrids, 'y', left, sy);
 
-    // Openings: outline with a cross (drafting convention for a hole in the floor).
+    // Openings: outline with a cross (drafting convention for a hole in the floor); the word
+    // OPENING is placed after the member texts, where it covers none of them.
+    const openingLabels: { id: string; x0: number; x1: number; y0: number; y1: number }[] = [];
     for (const o of plan.openings) {
       if (o.level !== levelId || o.polygon.length < 3) continue;
       const pts = o.polygon.map(([x, y]) => [sx(x), sy(y)] as [number, number]);
@@ -205,7 +220,7 @@ export function buildPlanSheet(input: PlanSheetInput): PlanSheet {
       const [x0, x1, y0, y1] = [Math.min(...xs), Math.max(...xs), Math.min(...ys), Math.max(...ys)];
       out.push({ type: 'line', x1: x0, y1: y0, x2: x1, y2: y1, weight: LINE_WEIGHTS.thin });
       out.push({ type: 'line', x1: x0, y1: y1, x2: x1, y2: y0, weight: LINE_WEIGHTS.thin });
-      out.push({ type: 'text', x: (x0 + x1) / 2, y: y1 + 8, text: 'OPENING', size: 5.5, font: 'sans', anchor: 'middle' });
+      openingLabels.push({ id: o.id, x0, x1, y0, y1 });
     }
 
     // Deck span symbols: a double-headed arrow across the span between the beams it spans to.
@@ -281,6 +296,21 @@ export function buildPlanSheet(input: PlanSheetInput): PlanSheet {
           const startsAtText = (ux * rx + uy * ry > 0) === (end === 'start');
           out.push({ type: 'text', x: px, y: py, text, size: 5, font: 'mono', anchor: startsAtText ? 'start' : 'end', rotate: angle, ref: m.id });
         }
+      }
+    }
+
+    const placer = new LabelPlacer(0.5);
+    for (const p of out) if (p.type === 'text' && p.ref) placer.reserve(sheetTextBox(p));
+    for (const o of openingLabels) {
+      const cx = (o.x0 + o.x1) / 2;
+      const candidates = [o.y1 + 8, o.y0 - 3, (o.y0 + o.y1) / 2 + 2, o.y1 + 16, o.y0 - 11].map(
+        (y): Extract<SheetPrimitive, { type: 'text' }> => ({ type: 'text', x: cx, y, text: 'OPENING', size: 5.5, font: 'sans', anchor: 'middle', ref: `opening:${o.id}` }),
+      );
+      const spot = candidates.find((c) => placer.fits(sheetTextBox(c)));
+      // An opening too crowded to name keeps its cross (the drafting symbol says it all).
+      if (spot) {
+        placer.reserve(sheetTextBox(spot));
+        out.push(spot);
       }
     }
 

@@ -2,6 +2,7 @@ import { useQueryClient } from '@tanstack/react-query';
 import { useEffect, useRef, useState } from 'react';
 import { Link, useNavigate, useParams, useSearchParams } from 'react-router-dom';
 import type { Plan } from '../../shared/schemas/plan.schema';
+import { describeProblem, planNamer } from '../../shared/drafting/element-names.drafting';
 import { Button } from '../components/ui/button.ui';
 import { EmptyState } from '../components/ui/empty-state.ui';
 import { FormAlert } from '../components/ui/form-alert.ui';
@@ -155,7 +156,8 @@ function SchemePlan({
               onLockShape={lockShape}
               onConstraints={setConstraints}
               onClose={close}
-              problems={result.problems.filter((p) => p.elementId === member.id).map((p) => p.message)}
+              names={planNamer(plan, new Map(result.members.map((m) => [m.id, m.mark])))}
+              problems={result.problems.filter((p) => p.elementId === member.id).map((p) => describeProblem(p.message, planNamer(plan, new Map(result.members.map((m) => [m.id, m.mark])))))}
             />
           )}
         />

@@ -13,6 +13,7 @@ import type { UnitSystem } from '../../../lib/units';
 import { MONO, SANS, lengthText, lineLoadText, pointLoadText, type PlanTheme } from './plan-theme';
 import { toScreen, visibleBounds } from './view-transform';
 import { memberChipTexts } from '../members/member-status';
+import { LabelPlacer, rotatedBox, type LabelBox } from '../../../../shared/drafting/label-placement.drafting';
 
 const BUBBLE_R = 11;
 const LINE_PAST_PX = 26;
@@ -22,7 +23,7 @@ export const MEMBER_WIDTH_PX = { girder: 4.5, beam: 2 } as const;
 export const LABEL_MIN_PX = 80;
 
 /** Returns how many member labels (size and ratio) were drawn. */
-export function drawStatic(ctx: CanvasRenderingContext2D, plan: Plan, geo: StaticGeometry, view: View, theme: PlanTheme, system: UnitSystem = 'US'): number {
+export function drawStatic(ctx: CanvasRenderingContext2D, plan: Plan, geo: StaticGeometry, view: View, theme: PlanTheme, system: UnitSystem = 'US', labelBoxes?: LabelBox[]): number {
   // The paper is the container's background, so an underlay can show beneath.
   ctx.save();
   const extents = gridExtents(plan, geo);
@@ -91,18 +92,29 @@ export function drawStatic(ctx: CanvasRenderingContext2D, plan: Plan, geo: Stati
     const [sx, sy] = toScreen(view, c);
     ctx.fillRect(sx - colSize / 2, sy - colSize / 2, colSize, colSize);
   }
-  const labelled = drawMemberLabels(ctx, geo, view, theme, onScreen);
-  for (const p of geo.pointLoads) if (onScreen(p.at)) drawPointLoad(ctx, toScreen(view, p.at), pointLoadText(p.D_kip, p.L_kip, system), theme);
+  // Text is placed so no label covers another: point-load symbols sit where the load is;
+  // member labels next (moved along or across their member to clear a symbol); then the
+  // load values and zone names, each in the first free spot, left out when none is free.
+  const placer = new LabelPlacer(2);
+  const points = geo.pointLoads.filter((p) => onScreen(p.at)).map((p) => ({ p, at: toScreen(view, p.at) }));
+  for (const { p, at } of points) placer.reserve({ x0: at[0] - 8, y0: at[1] - 8, x1: at[0] + 8, y1: at[1] + 8, what: `point load ${p.id} symbol` });
+  const labelled = drawMemberLabels(ctx, geo, view, theme, onScreen, placer);
+  for (const { p, at } of points) drawPointLoad(ctx, at, pointLoadText(p.D_kip, p.L_kip, system), theme, placer, p.id);
   ctx.font = `10px ${MONO}`;
   ctx.fillStyle = theme.load;
+  ctx.textAlign = 'left';
+  ctx.textBaseline = 'top';
   for (const w of geo.lineLoads) {
     const mid: PlanPoint = [(w.start[0] + w.end[0]) / 2, (w.start[1] + w.end[1]) / 2];
     if (!onScreen(mid)) continue;
     const [sx, sy] = toScreen(view, mid);
-    ctx.textAlign = 'center';
-    ctx.textBaseline = 'top';
-    ctx.fillText(lineLoadText(w.D_klf, w.L_klf, system), sx, sy + 6);
+    const text = lineLoadText(w.D_klf, w.L_klf, system);
+    const tw = ctx.measureText(text).width;
+    const spot = placer.place([0, -20, 20, -36, 36].map((dy) => ({ x0: sx - tw / 2, y0: sy + 6 + dy, x1: sx + tw / 2, y1: sy + 18 + dy, what: `line load ${w.id}` })));
+    if (spot) ctx.fillText(text, spot.x0, spot.y0);
   }
+  for (const d of geo.decks) drawZoneName(ctx, d, view, theme, placer);
+  labelBoxes?.push(...placer.placed);
   ctx.restore();
   return labelled;
 }
@@ -206,19 +218,39 @@ function drawDeckArrow(ctx: CanvasRenderingContext2D, d: StaticGeometry['decks']
     ctx.fill();
   }
   ctx.restore();
-  // The zone's name in the deck's north-west corner, clear of the member labels at midspans.
-  const [nx, ny] = toScreen(view, [Math.min(...xs), Math.max(...ys)]);
+}
+
+/** The zone's name in the deck's north-west corner (or another corner), where no label is. */
+function drawZoneName(ctx: CanvasRenderingContext2D, d: StaticGeometry['decks'][number], view: View, theme: PlanTheme, placer: LabelPlacer) {
+  const xs = d.polygon.map((p) => p[0]);
+  const ys = d.polygon.map((p) => p[1]);
   const widthPx = (Math.max(...xs) - Math.min(...xs)) * view.scale;
   if (widthPx < 90) return;
   ctx.save();
   ctx.font = `italic 10px ${SANS}`;
-  ctx.textAlign = 'left';
-  ctx.textBaseline = 'top';
-  ctx.lineWidth = 4;
-  ctx.strokeStyle = zoneTint(d.zoneIndex);
-  ctx.fillStyle = theme.inkSoft;
-  ctx.strokeText(d.zoneName, nx + 8, ny + 7);
-  ctx.fillText(d.zoneName, nx + 8, ny + 7);
+  const tw = ctx.measureText(d.zoneName).width;
+  const corners: [number, number, 'left' | 'right', 'top' | 'bottom'][] = [
+    [Math.min(...xs), Math.max(...ys), 'left', 'top'],
+    [Math.max(...xs), Math.max(...ys), 'right', 'top'],
+    [Math.min(...xs), Math.min(...ys), 'left', 'bottom'],
+    [Math.max(...xs), Math.min(...ys), 'right', 'bottom'],
+  ];
+  const candidates = corners.map(([x, y, h, v]) => {
+    const [cx, cy] = toScreen(view, [x, y]);
+    const x0 = h === 'left' ? cx + 8 : cx - 8 - tw;
+    const y0 = v === 'top' ? cy + 7 : cy - 7 - 12;
+    return { x0, y0, x1: x0 + tw, y1: y0 + 12, what: `zone ${d.zoneName} (deck ${d.id})` };
+  });
+  const spot = placer.place(candidates);
+  if (spot) {
+    ctx.textAlign = 'left';
+    ctx.textBaseline = 'top';
+    ctx.lineWidth = 4;
+    ctx.strokeStyle = zoneTint(d.zoneIndex);
+    ctx.fillStyle = theme.inkSoft;
+    ctx.strokeText(d.zoneName, spot.x0, spot.y0);
+    ctx.fillText(d.zoneName, spot.x0, spot.y0);
+  }
   ctx.restore();
 }
 
@@ -302,7 +334,7 @@ function dimensionRow(ctx: CanvasRenderingContext2D, at: number[], across: numbe
   }
 }
 
-function drawMemberLabels(ctx: CanvasRenderingContext2D, geo: StaticGeometry, view: View, theme: PlanTheme, onScreen: (p: PlanPoint) => boolean): number {
+function drawMemberLabels(ctx: CanvasRenderingContext2D, geo: StaticGeometry, view: View, theme: PlanTheme, onScreen: (p: PlanPoint) => boolean, placer: LabelPlacer): number {
   let drawn = 0;
   ctx.save();
   ctx.font = `500 10.5px ${MONO}`;
@@ -313,7 +345,6 @@ function drawMemberLabels(ctx: CanvasRenderingContext2D, geo: StaticGeometry, vi
     const mid: PlanPoint = [(l.start[0] + l.end[0]) / 2, (l.start[1] + l.end[1]) / 2];
     if (!onScreen(mid)) continue;
     const s = l.status;
-    const [sx, sy] = toScreen(view, mid);
     const [ax, ay] = toScreen(view, l.start);
     const [bx, by] = toScreen(view, l.end);
     let angle = Math.atan2(by - ay, bx - ax);
@@ -325,23 +356,36 @@ function drawMemberLabels(ctx: CanvasRenderingContext2D, geo: StaticGeometry, vi
     const chip = memberChipTexts(s).find((text) => ctx.measureText(text).width + 8 + markW <= lengthPx - 12);
     if (chip === undefined) continue;
     const chipW = ctx.measureText(chip).width + 8;
+    const w = chipW + markW;
+    const off = MEMBER_WIDTH_PX[l.kind] / 2 + 9;
+    // Candidate spots: midspan on the reading side, then the other side, then along the span.
+    const spots = [0.5, 0.3, 0.7].flatMap((t) => [-1, 1].map((side) => ({ t, side })));
+    const box = (t: number, side: number) => {
+      const cx = ax + (bx - ax) * t - Math.sin(angle) * side * off;
+      const cy = ay + (by - ay) * t + Math.cos(angle) * side * off;
+      return { cx, cy, box: rotatedBox(cx, cy, w, 15, angle, `member ${l.id}`) };
+    };
+    let chosen = spots.map((sp) => ({ ...sp, ...box(sp.t, sp.side) })).find((c) => placer.fits(c.box));
+    // Every member keeps its label (the size and ratio are the point of the plan); when no spot
+    // is free it stays at midspan.
+    if (!chosen) chosen = { t: 0.5, side: -1, ...box(0.5, -1) };
+    placer.reserve(chosen.box);
     ctx.save();
-    ctx.translate(sx, sy);
+    ctx.translate(chosen.cx, chosen.cy);
     ctx.rotate(angle);
-    const y = -(MEMBER_WIDTH_PX[l.kind] / 2 + 9);
-    const x0 = -(chipW + markW) / 2;
+    const x0 = -w / 2;
     if (mark) {
       ctx.fillStyle = theme.ink;
       ctx.textAlign = 'left';
-      ctx.fillText(mark, x0, y);
+      ctx.fillText(mark, x0, 0);
     }
     const colours = theme.util[s.util.band];
     ctx.fillStyle = colours.fill;
-    roundRect(ctx, x0 + markW, y - 7.5, chipW, 15, 2.5);
+    roundRect(ctx, x0 + markW, -7.5, chipW, 15, 2.5);
     ctx.fill();
     ctx.fillStyle = colours.ink;
     ctx.textAlign = 'left';
-    ctx.fillText(chip, x0 + markW + 4, y + 0.5);
+    ctx.fillText(chip, x0 + markW + 4, 0.5);
     ctx.restore();
     if (s.state !== 'designing') drawn++;
   }
@@ -349,7 +393,7 @@ function drawMemberLabels(ctx: CanvasRenderingContext2D, geo: StaticGeometry, vi
   return drawn;
 }
 
-function drawPointLoad(ctx: CanvasRenderingContext2D, [x, y]: [number, number], text: string, theme: PlanTheme) {
+function drawPointLoad(ctx: CanvasRenderingContext2D, [x, y]: [number, number], text: string, theme: PlanTheme, placer: LabelPlacer, id: string) {
   ctx.save();
   ctx.strokeStyle = theme.load;
   ctx.fillStyle = theme.paper;
@@ -366,9 +410,16 @@ function drawPointLoad(ctx: CanvasRenderingContext2D, [x, y]: [number, number], 
   ctx.stroke();
   ctx.fillStyle = theme.load;
   ctx.font = `600 10px ${MONO}`;
-  ctx.textAlign = 'left';
   ctx.textBaseline = 'middle';
-  ctx.fillText(text, x + 11, y - 9);
+  const tw = ctx.measureText(text).width;
+  // Right and up of the symbol, else right-down, left-up, left-down; left out when all are taken.
+  const spot = placer.place(
+    [[11, -9], [11, 9], [-11 - tw, -9], [-11 - tw, 9]].map(([dx, dy]) => ({ x0: x + dx, y0: y + dy - 6, x1: x + dx + tw, y1: y + dy + 6, what: `point load ${id}` })),
+  );
+  if (spot) {
+    ctx.textAlign = 'left';
+    ctx.fillText(text, spot.x0, spot.y0 + 6);
+  }
   ctx.restore();
 }
 

@@ -1,3 +1,4 @@
+import { planNamer } from '../../../../shared/drafting/element-names.drafting';
 import { useEffect, useRef, useState, useSyncExternalStore } from 'react';
 import { Layer, Shape, Stage } from 'react-konva';
 import type Konva from 'konva';
@@ -249,9 +250,10 @@ function useTooltip(store: EditorStore, design: LiveDesign, containerRef: React.
       }
       const snap = design.getSnapshot();
       const m = s.plan.members.find((x) => x.id === hit.id)!;
-      const st = memberStatus(hit.id, snap.byId.get(hit.id), snap.result, snap.pending);
+      const names = planNamer(s.plan, new Map((snap.result?.members ?? []).map((x) => [x.id, x.mark])));
+      const st = memberStatus(hit.id, snap.byId.get(hit.id), snap.result, snap.pending, names);
       const ratio = st.ratio === null ? '' : ` · ratio ${st.util.printed}`;
-      const text = `${st.mark || m.id} ${m.kind} · ${st.size}${ratio} · ${st.words}`;
+      const text = `${names.member(m.id) ?? m.kind} · ${st.size}${ratio} · ${st.words}`;
       if (!content || content.text !== text || Math.abs(content.x - p.sx) > 2 || Math.abs(content.y - p.sy) > 2) setContent({ x: p.sx, y: p.sy, text });
     },
   };

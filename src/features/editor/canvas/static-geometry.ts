@@ -1,3 +1,4 @@
+import { planNamer } from '../../../../shared/drafting/element-names.drafting';
 /**
  * The committed drawing of one level, prepared once per plan/design change and cached:
  * members grouped into one path per (kind, utilisation band) so thousands of members stroke
@@ -32,9 +33,10 @@ export interface StaticGeometry {
 export function buildStaticGeometry(plan: Plan, levelId: string, design: LiveDesignSnapshot): StaticGeometry {
   const groups = new Map<string, { kind: 'girder' | 'beam'; band: UtilisationBand; path: Path2D; count: number }>();
   const labels: MemberLabel[] = [];
+  const names = planNamer(plan, new Map((design.result?.members ?? []).map((x) => [x.id, x.mark])));
   for (const m of plan.members) {
     if (m.level !== levelId) continue;
-    const status = memberStatus(m.id, design.byId.get(m.id), design.result, design.pending);
+    const status = memberStatus(m.id, design.byId.get(m.id), design.result, design.pending, names);
     const band = status.util.band;
     const key = `${m.kind}:${band}`;
     let g = groups.get(key);

@@ -1,3 +1,4 @@
+import { planNamer } from '../../../../shared/drafting/element-names.drafting';
 import { memo, useEffect, useMemo, useRef, useSyncExternalStore } from 'react';
 import { useStore } from 'zustand';
 import { dispatch } from '../actions/action-registry';
@@ -26,10 +27,11 @@ export function MemberList({ store, design }: { store: EditorStore; design: Live
 
   const rows: Row[] = useMemo(() => {
     const out: Row[] = [];
+    const names = planNamer(plan, new Map((snap.result?.members ?? []).map((x) => [x.id, x.mark])));
     for (const m of plan.members) {
       if (m.level !== levelId) continue;
       const sm = snap.byId.get(m.id);
-      out.push({ id: m.id, kind: m.kind, span_ft: sm?.span_ft ?? Math.hypot(m.end[0] - m.start[0], m.end[1] - m.start[1]), status: memberStatus(m.id, sm, snap.result, snap.pending) });
+      out.push({ id: m.id, kind: m.kind, span_ft: sm?.span_ft ?? Math.hypot(m.end[0] - m.start[0], m.end[1] - m.start[1]), status: memberStatus(m.id, sm, snap.result, snap.pending, names) });
     }
     return out.sort((a, b) => (a.kind === b.kind ? naturalMark(a.status.mark || a.id, b.status.mark || b.id) : a.kind === 'girder' ? -1 : 1));
   }, [plan, levelId, snap]);

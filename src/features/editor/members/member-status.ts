@@ -1,6 +1,7 @@
 // The words, size and ratio shown for a member in the list, on the canvas and in tooltips.
 import type { SchemeMember, SchemeResult } from '../../../../shared/engine/index';
 import { utilisation, type Utilisation } from '../../../lib/utilisation';
+import { describeProblem, type PlanNamer } from '../../../../shared/drafting/element-names.drafting';
 
 export interface MemberStatus {
   mark: string;
@@ -26,20 +27,21 @@ export function governingWords(governing: string | null | undefined): string {
   return governing ? (GOVERNING_WORDS[governing] ?? governing) : 'no check';
 }
 
-export function memberStatus(id: string, member: SchemeMember | undefined, result: SchemeResult | null, pending: boolean): MemberStatus {
+/** `names` (optional) turns the ids in problem sentences into marks, grid locations and level names. */
+export function memberStatus(id: string, member: SchemeMember | undefined, result: SchemeResult | null, pending: boolean, names?: PlanNamer): MemberStatus {
   if (!result || (!member && pending)) {
     return { mark: '', size: '…', ratio: null, util: utilisation(Number.NaN), words: 'Designing…', shortReason: null, state: 'designing' };
   }
   const problem = result.problems.find((p) => p.elementId === id && p.severity === 'error');
   if (!member || !member.design) {
-    const reason = cleanReason(problem?.message ?? 'the engine could not design it', id);
+    const reason = named(cleanReason(problem?.message ?? 'the engine could not design it', id), names);
     return { mark: member?.mark ?? '', size: member?.shape ?? '—', ratio: null, util: utilisation(Number.NaN), words: `Not designed — ${reason}`, shortReason: shorten(reason), state: 'not-designed' };
   }
   const ratio = member.ratio ?? member.design.ratio;
   const util = utilisation(ratio);
   // A size that "passes" on a member the engine flags (no support at an end, …) is not a pass.
   if (problem && problem.code !== 'member-fails') {
-    const reason = cleanReason(problem.message, id);
+    const reason = named(cleanReason(problem.message, id), names);
     return { mark: member.mark, size: member.shape ?? '—', ratio, util, words: `Problem — ${reason}`, shortReason: shorten(reason), state: 'problem' };
   }
   if (member.passes) {
@@ -62,6 +64,8 @@ export function memberChipTexts(s: MemberStatus): string[] {
   if (s.state === 'problem') return [`${sized} problem`, `${s.size} problem`];
   return sized === s.size ? [sized] : [sized, s.size];
 }
+
+const named = (text: string, names?: PlanNamer) => (names ? describeProblem(text, names) : text);
 
 /** Drop the "Member m7: " prefix the engine puts on plan problems. */
 function cleanReason(message: string, id: string): string {

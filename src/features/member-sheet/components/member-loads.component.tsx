@@ -39,7 +39,7 @@ function position(l: MemberLoad, span_ft: number, units: UnitSystem): string {
 
 const KIND_NAME: Record<MemberLoad['kind'], string> = { uniform: 'uniform', partial: 'partial uniform', linear: 'linearly varying', point: 'point' };
 
-export function MemberLoadsTable({ member, units }: { member: SchemeMember; units: UnitSystem }) {
+export function MemberLoadsTable({ member, units, names }: { member: SchemeMember; units: UnitSystem; names?: SourceNames }) {
   return (
     <div className="flex flex-col gap-2">
       <dl className="figures m-0 grid grid-cols-2 gap-x-6 gap-y-1 text-sm sm:grid-cols-4">
@@ -87,7 +87,7 @@ export function MemberLoadsTable({ member, units }: { member: SchemeMember; unit
               <td className="py-1.5 pr-3">{KIND_NAME[l.kind]}</td>
               <td className="figures whitespace-nowrap py-1.5 pr-3 text-right font-mono">{magnitude(l, units)}</td>
               <td className="figures whitespace-nowrap py-1.5 pr-3 font-mono">{position(l, member.span_ft, units)}</td>
-              <td className="py-1.5 text-ink-soft">{l.source ? loadSourceText(l.source, units) : '—'}</td>
+              <td className="py-1.5 text-ink-soft">{l.source ? loadSourceText(l.source, units, names) : '—'}</td>
             </tr>
           ))}
         </tbody>

@@ -37,6 +37,7 @@ import {
 import { MemberChecksTable, MemberSegmentsTable } from './member-checks.component';
 import { MemberDiagramsPanel } from './member-diagrams.component';
 import { MemberLoadsTable, MemberReactionsTable } from './member-loads.component';
+import type { PlanNamer } from '../../../../shared/drafting/element-names.drafting';
 import { ConstraintsSummary, DepthConstraintsForm, ShapeLock } from './member-lock.component';
 
 export interface MemberSheetProps {
@@ -49,6 +50,8 @@ export interface MemberSheetProps {
   onConstraints: (constraints: MemberConstraints) => void;
   onClose: () => void;
   problems?: string[];
+  /** Names for the sheet's sentences (marks, grid locations, level and zone names), from the plan. */
+  names?: PlanNamer;
 }
 
 const CHECK_WORDS: Record<string, string> = {
@@ -96,7 +99,7 @@ function AlternativeRow({ label, alt, units, empty }: { label: string; alt: Alte
   );
 }
 
-export function MemberSheet({ member, designBasis, planMember, units, canEdit, onLockShape, onConstraints, onClose, problems = [] }: MemberSheetProps) {
+export function MemberSheet({ member, designBasis, planMember, units, canEdit, onLockShape, onConstraints, onClose, problems = [], names }: MemberSheetProps) {
   const design = member.design;
   const idBase = `member-sheet-${member.id}`;
 
@@ -137,7 +140,8 @@ export function MemberSheet({ member, designBasis, planMember, units, canEdit, o
       <header className="flex items-start justify-between gap-3 border-b-2 border-ink pb-3">
         <div className="min-w-0">
           <p className="label-caps">
-            {member.kind === 'girder' ? 'Girder' : 'Beam'} · {member.level} · id {member.id}
+            {member.kind === 'girder' ? 'Girder' : 'Beam'} · {names?.level(member.level) ?? member.level}
+            {names?.member(member.id)?.includes(' at ') ? ` · ${names.member(member.id)!.slice(names.member(member.id)!.indexOf(' at ') + 1)}` : ''}
           </p>
           <h2 className="flex flex-wrap items-baseline gap-x-3 text-xl font-semibold tracking-tight">
             <span className="font-mono">{member.mark || member.id}</span>
@@ -185,7 +189,7 @@ export function MemberSheet({ member, designBasis, planMember, units, canEdit, o
       ) : null}
 
       <Section title="Loads and where they come from" id={`${idBase}-loads`}>
-        <MemberLoadsTable member={member} units={units} />
+        <MemberLoadsTable member={member} units={units} names={names} />
       </Section>
 
       {design && diagrams ? (
