@@ -1,6 +1,7 @@
 /** `npm run bench`: runs each benchmark module and prints its figures. Add plan benchmarks beside member. */
 import { runMemberBench, type BenchReport } from './member.bench';
 import { runPlanBench } from './plan.bench';
+import { runStudyBench } from './study.bench';
 
 const benches: (() => BenchReport)[] = [runMemberBench];
 
@@ -15,3 +16,4 @@ for (const run of benches) {
 }
 
 runPlanBench();
+runStudyBench();
