@@ -6,6 +6,7 @@ import * as m0003 from './migrations/0003-schemes-plans';
 import * as m0004 from './migrations/0004-team-mail-audit';
 import * as m0005 from './migrations/0005-underlays';
 import * as m0006 from './migrations/0006-scheme-status-prices';
+import * as m0015 from './migrations/0015-bay-studies';
 
 export type Migration = MigrationFn<QueryInterface>;
 
@@ -18,6 +19,7 @@ const MIGRATIONS: { name: string; up: Migration; down: Migration }[] = [
   { name: '0004-team-mail-audit', ...m0004 },
   { name: '0005-underlays', ...m0005 },
   { name: '0006-scheme-status-prices', ...m0006 },
+  { name: '0015-bay-studies', ...m0015 },
 ];
 
 export function createMigrator(sequelize: Sequelize) {

@@ -4,6 +4,7 @@ import { loadSession } from '../auth/auth.middleware';
 import { requireSameOrigin } from '../middleware/csrf.middleware';
 import { apiNotFound } from '../middleware/error.middleware';
 import { auditRoutes } from './audit.routes';
+import { bayStudiesRoutes } from './bay-studies.routes';
 import { calcBookRoutes } from './calc-book.routes';
 import { comparisonRoutes } from './comparison.routes';
 import { firmsRoutes } from './firms.routes';
@@ -48,6 +49,8 @@ export function apiRoutes(ctx: AppContext): Router {
   api.use('/schemes', schemeStatusRoutes(ctx));
   api.use('/schemes', schemeCommentsRoutes(ctx));
   api.use('/projects', comparisonRoutes(ctx));
+  // Bay studies (issue 15).
+  api.use('/schemes', bayStudiesRoutes(ctx));
   api.use('/unit-prices', unitPricesRoutes(ctx));
   api.use('/invitations', invitationsRoutes(ctx));
   api.use('/password-resets', passwordResetRoutes(ctx));
