@@ -18,6 +18,8 @@ import { useSchemes } from '../features/schemes/api/get-schemes.api';
 import { useUnderlays } from '../features/underlay/api/get-underlays.api';
 import { UnderlayImage } from '../features/underlay/components/underlay-image.component';
 import { UnderlayPanel } from '../features/underlay/components/underlay-panel.component';
+import { StudyPanel } from '../features/bay-study/components/study-panel.component';
+import { useUnitPrices } from '../features/unit-prices/api/unit-prices.api';
 import { isApiError } from '../lib/api-client';
 import { invalidatePlanResults } from '../lib/plan-change-queries';
 import { canEditProjects } from '../lib/permissions';
@@ -60,6 +62,7 @@ function SchemePlan({ projectId, schemeId, levelId, onLevel }: { projectId: stri
   const scheme = useEditorScheme(schemeId);
   const queryClient = useQueryClient();
   const { system } = useUnits();
+  const prices = useUnitPrices();
   const designTimer = useRef<ReturnType<typeof setTimeout> | null>(null);
   useEffect(() => () => void (designTimer.current && clearTimeout(designTimer.current)), []);
 
@@ -119,6 +122,15 @@ function SchemePlan({ projectId, schemeId, levelId, onLevel }: { projectId: stri
           onSaved={onSaved}
           renderUnderlayPanel={(level) => <UnderlayPanel schemeId={schemeId} levelId={level} canEdit={canEdit} units={system} />}
           renderUnderlayImages={(level, view) => <LevelUnderlays schemeId={schemeId} levelId={level} view={view} />}
+          renderStudyPanel={(args) => (
+            <StudyPanel
+              {...args}
+              projectId={projectId}
+              schemeId={schemeId}
+              prices={prices.data?.prices ? { steel_usd_per_ton: prices.data.prices.steel_usd_per_ton, connection_usd_each: prices.data.prices.connection_usd_each } : null}
+              tonnageHref={paths.projectTonnage.href(projectId)}
+            />
+          )}
           renderDesignBasis={({ designBasis, canEdit: can, submit }) => <DesignBasisForm value={designBasis} canEdit={can} onSubmit={submit} units={system} />}
           renderMemberSheet={({ member, planMember, plan, result, canEdit: can, lockShape, setConstraints, close }) => (
             <MemberSheet

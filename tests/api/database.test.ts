@@ -15,10 +15,10 @@ describe('database: migrations and demo seed', () => {
   it('when migrations run twice, then the second run applies nothing and every one is recorded', async () => {
     const db = await connectDatabase('sqlite::memory:');
     try {
-      expect(await migrateToLatest(db.sequelize)).toEqual(['0001-accounts', '0002-projects', '0003-schemes-plans', '0004-team-mail-audit', '0005-underlays', '0006-scheme-status-prices']);
+      expect(await migrateToLatest(db.sequelize)).toEqual(['0001-accounts', '0002-projects', '0003-schemes-plans', '0004-team-mail-audit', '0005-underlays', '0006-scheme-status-prices', '0015-bay-studies']);
       expect(await migrateToLatest(db.sequelize)).toEqual([]);
       const executed = await createMigrator(db.sequelize).executed();
-      expect(executed.map((m) => m.name)).toEqual(['0001-accounts', '0002-projects', '0003-schemes-plans', '0004-team-mail-audit', '0005-underlays', '0006-scheme-status-prices']);
+      expect(executed.map((m) => m.name)).toEqual(['0001-accounts', '0002-projects', '0003-schemes-plans', '0004-team-mail-audit', '0005-underlays', '0006-scheme-status-prices', '0015-bay-studies']);
     } finally {
       await db.sequelize.close();
     }

@@ -11,6 +11,7 @@ import { PlanCanvas, type PlanViewArgs } from '../canvas/plan-canvas.component';
 import { LiveDesign } from '../design/live-design';
 import { MemberList } from '../members/member-list.component';
 import { createEditorStore, type EditorStore } from '../store/editor.store';
+import type { StudyPreview } from '../store/editor.types';
 import { PlanAutosave, type AutosaveSnapshot } from '../sync/plan-autosave';
 import { createToolController } from '../tools/tool-controller';
 import { ConflictBanner } from './conflict-banner.component';
@@ -37,6 +38,20 @@ export interface DesignBasisSlotArgs {
   submit: (next: Plan['designBasis']) => void;
 }
 
+export interface StudyPanelSlotArgs {
+  plan: Plan;
+  levelId: string;
+  /** Ids selected on the Plan (a deck or member selects its bay). */
+  selection: string[];
+  /** The revision on the server and whether the plan on screen is that revision. */
+  savedRevision: number;
+  saved: boolean;
+  canEdit: boolean;
+  /** Draw a trial option (or only its bays) over the plan; null clears it. */
+  setPreview: (preview: StudyPreview | null) => void;
+  close: () => void;
+}
+
 export interface PlanEditorProps {
   schemeId: string;
   schemeName: string;
@@ -54,6 +69,8 @@ export interface PlanEditorProps {
   renderUnderlayPanel?: (levelId: string) => ReactNode;
   /** Underlay images (Konva nodes) for the level shown, under the plan. */
   renderUnderlayImages?: (levelId: string, view: PlanViewArgs) => ReactNode;
+  /** The trial framings panel (bay study, composed by the page). */
+  renderStudyPanel?: (args: StudyPanelSlotArgs) => ReactNode;
   /** Save function (tests pass their own); defaults to PUT /api/schemes/:id/plan. */
   save?: typeof savePlan;
 }
@@ -92,6 +109,8 @@ export function PlanEditor(props: PlanEditorProps) {
   const [recovered, setRecovered] = useState(() => autosave.readLocalDraft());
   const [showBasis, setShowBasis] = useState(false);
   const [showUnderlay, setShowUnderlay] = useState(false);
+  const [showStudy, setShowStudy] = useState(false);
+  const closeStudy = () => (setShowStudy(false), store.setState({ studyPreview: null }));
 
   // Design after every change of the plan; publish the edit → sizes time for tests and the status line.
   useEffect(() => {
@@ -178,6 +197,11 @@ export function PlanEditor(props: PlanEditorProps) {
               Underlay
             </Button>
           ) : null}
+          {props.renderStudyPanel ? (
+            <Button variant="quiet" className="h-8 text-xs" aria-expanded={showStudy} onClick={() => (showStudy ? closeStudy() : setShowStudy(true))}>
+              Trial framings
+            </Button>
+          ) : null}
           {props.renderDesignBasis ? (
             <Button variant="quiet" className="h-8 text-xs" aria-expanded={showBasis} onClick={() => setShowBasis((v) => !v)}>
               Design basis
@@ -200,6 +224,20 @@ export function PlanEditor(props: PlanEditorProps) {
       {showBasis && props.renderDesignBasis ? (
         <div className="border-b border-ink bg-paper px-4 py-3">
           {props.renderDesignBasis({ designBasis: plan.designBasis, canEdit, submit: (designBasis) => dispatch(store, 'plan.setDesignBasis', { designBasis }) })}
+        </div>
+      ) : null}
+      {showStudy && props.renderStudyPanel ? (
+        <div className="border-b border-ink bg-paper px-4 py-3" data-testid="study-panel-slot">
+          {props.renderStudyPanel({
+            plan,
+            levelId,
+            selection,
+            savedRevision: saveState.revision,
+            saved: saveState.status === 'saved' || saveState.status === 'readonly',
+            canEdit,
+            setPreview: (studyPreview) => store.setState({ studyPreview }),
+            close: closeStudy,
+          })}
         </div>
       ) : null}
       {canEdit ? <ToolOptionsBar store={store} /> : null}
