@@ -21,7 +21,7 @@ test('when an engineer studies a bay and makes the lightest option a scheme, the
   const schemeName = `Study E2E ${Date.now().toString(36).slice(-4).toUpperCase()}`;
   await page.goto('/projects');
   await page.goto(await schemeWithPlan(page, plan, schemeName));
-  const canvas = await planCanvas(page);
+  const canvas = await planCanvas(page, 90_000);
   await expect(page.getByTestId('design-status')).toContainText('members sized', { timeout: 30_000 });
 
   // Select a beam in the middle bay (2–3 / B–C): the study starts from its bay.
