@@ -60,7 +60,7 @@ export function defineModels(sequelize: Sequelize) {
     UnitPrice: defineUnitPriceModel(sequelize),
     // Plan images under a level (0005-underlays).
     Underlay: defineUnderlayModel(sequelize),
-    // Bay studies of a scheme (0015-bay-studies).
+    // Bay studies of a scheme (0009-bay-studies).
     BayStudy: defineBayStudyModel(sequelize),
   };
 }
