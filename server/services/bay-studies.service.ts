@@ -1,7 +1,7 @@
 import type { Model } from 'sequelize';
 import { exportPlanFile } from '../../shared/schemas/plan.schema';
 import { parseStudySpec, type StudySpec } from '../../shared/schemas/study.schema';
-import { runStudy, StudyInputError, type StudyOptionResult, type StudyResult } from '../../shared/engine/study/run-study.study';
+import type { StudyOptionResult, StudyResult } from '../../shared/engine/study/run-study.study';
 import { applyStudyOption } from '../../shared/engine/study/apply-option.study';
 import { regionBays } from '../../shared/engine/study/study-region.study';
 import { studyOptionSpecs } from '../../shared/engine/study/run-study.study';
@@ -11,6 +11,7 @@ import { findOwnScheme, readPlan, type SchemeServiceContext } from './plan-store
 import { designSchemeNow } from './scheme-design.service';
 import { createScheme, type SchemeDetail } from './schemes.service';
 import { getUnitPrices } from './unit-prices.service';
+import { designPool } from './design-runs/design-pool';
 
 // Bay studies of a scheme: the scheme's current plan through the study engine
 // (shared/engine/study), priced with the firm's unit prices, kept against the revision.
@@ -87,13 +88,10 @@ export async function runSchemeStudy(ctx: SchemeServiceContext, schemeId: string
   });
   if (!spec) throw studyInputError(problems);
   const plan = await readPlan(ctx.db, attrs);
-  let result: StudyResult;
-  try {
-    result = runStudy(plan, spec);
-  } catch (e) {
-    if (e instanceof StudyInputError) throw studyInputError(e.problems);
-    throw new AppError(422, 'study_failed', `The study could not run: ${e instanceof Error ? e.message : String(e)}`);
-  }
+  const region = regionBays(plan, spec.region);
+  if (region.problems.length > 0) throw studyInputError(region.problems);
+  // In a design worker, off the request thread and within the design time and memory budget.
+  const result = await designPool().runStudy(plan, spec);
   const row = await ctx.db.models.BayStudy.create({
     schemeId,
     revision: attrs.revision,
