@@ -30,15 +30,15 @@ test('when an engineer studies a bay and makes the lightest option a scheme, the
   const panel = page.getByTestId('study-panel');
   await expect(panel.getByRole('checkbox', { name: 'Bay 2–3 / B–C (30 × 40 ft)' })).toBeChecked();
   await expect(panel.getByRole('checkbox', { name: 'Bay 1–2 / A–B (30 × 40 ft)' })).not.toBeChecked();
-  await panel.getByLabel('From').fill('6');
-  await panel.getByLabel('To').fill('15');
-  await panel.getByLabel('Step').fill('1');
+  await panel.getByLabel('From', { exact: true }).fill('6');
+  await panel.getByLabel('To', { exact: true }).fill('15');
+  await panel.getByLabel('Step', { exact: true }).fill('1');
 
   // A step of 0 is refused, naming the field.
-  await panel.getByLabel('Step').fill('0');
+  await panel.getByLabel('Step', { exact: true }).fill('0');
   await panel.getByRole('button', { name: 'Run study' }).click();
   await expect(panel.getByRole('alert')).toContainText('spacing_ft.step: must be more than 0 ft (got 0)');
-  await panel.getByLabel('Step').fill('1');
+  await panel.getByLabel('Step', { exact: true }).fill('1');
   await panel.getByRole('button', { name: 'Run study' }).click();
 
   const results = panel.getByTestId('study-results');

@@ -1,7 +1,7 @@
 import { parsePlanFile } from '../../shared/schemas/plan.schema';
 import { gravityLoadProblems } from '../../shared/schemas/plan-gravity-loads';
 import { parseStudySpec } from '../../shared/schemas/study.schema';
-import { runStudy, StudyInputError } from '../../shared/engine/study/run-study.study';
+import { runStudy, StudyInputError } from '../../shared/engine/index';
 import { EXIT_DESIGN_FAILS, EXIT_OK, errorOutcome, readJsonArgument, type CommandOutcome } from './cli-io';
 
 /**

@@ -1,10 +1,7 @@
 import type { Model } from 'sequelize';
 import { exportPlanFile } from '../../shared/schemas/plan.schema';
 import { parseStudySpec, type StudySpec } from '../../shared/schemas/study.schema';
-import type { StudyOptionResult, StudyResult } from '../../shared/engine/study/run-study.study';
-import { applyStudyOption } from '../../shared/engine/study/apply-option.study';
-import { regionBays } from '../../shared/engine/study/study-region.study';
-import { studyOptionSpecs } from '../../shared/engine/study/run-study.study';
+import { applyStudyOption, regionBays, studyOptionSpecs, type StudyOptionResult, type StudyResult } from '../../shared/engine/index';
 import { AppError } from '../errors/app-error';
 import type { BayStudyAttributes, BayStudyCreation } from '../models/bay-study.model';
 import { findOwnScheme, readPlan, type SchemeServiceContext } from './plan-store.service';

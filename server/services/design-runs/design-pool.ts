@@ -5,10 +5,9 @@
  */
 import { availableParallelism } from 'node:os';
 import { Worker } from 'node:worker_threads';
-import type { SchemeResult } from '../../../shared/engine/index';
+import type { SchemeResult, StudyResult } from '../../../shared/engine/index';
 import type { Plan } from '../../../shared/schemas/plan.schema';
 import type { StudySpec } from '../../../shared/schemas/study.schema';
-import type { StudyResult } from '../../../shared/engine/study/run-study.study';
 import { AppError } from '../../errors/app-error';
 import type { DesignReply } from './design.worker';
 

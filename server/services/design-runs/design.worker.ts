@@ -1,8 +1,7 @@
 // One design-run worker thread: receives plans, answers with the `calc plan` result (plain
 // data), so a long design never blocks the server's request thread.
 import { parentPort } from 'node:worker_threads';
-import { designScheme } from '../../../shared/engine/index';
-import { runStudy } from '../../../shared/engine/study/run-study.study';
+import { designScheme, runStudy } from '../../../shared/engine/index';
 import type { Plan } from '../../../shared/schemas/plan.schema';
 import type { StudySpec } from '../../../shared/schemas/study.schema';
 

@@ -1,5 +1,5 @@
 import { api } from '../../../lib/api-client';
-import type { StudyResult } from '../../../../shared/engine/study/run-study.study';
+import type { StudyResult } from '../../../../shared/engine/index';
 
 // POST /api/schemes/:id/studies: the server runs the study on the saved plan and keeps it.
 

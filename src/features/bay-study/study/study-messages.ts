@@ -1,4 +1,4 @@
-import type { StudyResult } from '../../../../shared/engine/study/run-study.study';
+import type { StudyResult } from '../../../../shared/engine/index';
 import type { Plan } from '../../../../shared/schemas/plan.schema';
 import type { StudySpec } from '../../../../shared/schemas/study.schema';
 

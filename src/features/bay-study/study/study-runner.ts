@@ -3,7 +3,7 @@
  * component tests), with progress and cancel. Cancel terminates the worker; the next run
  * starts a fresh one.
  */
-import { runStudy, StudyInputError, type StudyResult } from '../../../../shared/engine/study/run-study.study';
+import { runStudy, StudyInputError, type StudyResult } from '../../../../shared/engine/index';
 import type { Plan } from '../../../../shared/schemas/plan.schema';
 import type { StudySpec } from '../../../../shared/schemas/study.schema';
 import type { StudyReplyMessage } from './study-messages';

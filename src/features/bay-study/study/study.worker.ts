@@ -1,6 +1,6 @@
 // Runs a bay study off the main thread, posting progress after each option. Cancelling
 // terminates the worker (the study is one synchronous loop).
-import { runStudy, StudyInputError } from '../../../../shared/engine/study/run-study.study';
+import { runStudy, StudyInputError } from '../../../../shared/engine/index';
 import type { StudyReplyMessage, StudyRequestMessage } from './study-messages';
 
 const scope = self as unknown as { onmessage: ((e: MessageEvent<StudyRequestMessage>) => void) | null; postMessage(message: StudyReplyMessage): void };

@@ -10,7 +10,7 @@ import {
   EditError, addColumn, addDeck, addGridLine, addLevel, addLineLoad, addMember, addOpening, addPointLoad,
   columnsAtAllIntersections, copyLevel, deleteElements, ensureZone, moveGridLine, setDeck, setGridFromSpacings, updatePointLoad, updateZone,
 } from './plan-edits';
-import { applyInfill, bayPolygon, findBay, infillBay, infillDirection } from '../../../../shared/engine/layout/bay-infill.layout';
+import { applyInfill, bayPolygon, findBay, infillBay, infillDirection } from '../../../../shared/engine/index';
 import { fitView, panBy, zoomAt } from '../canvas/view-transform';
 import type { Plan, PlanZone } from '../../../../shared/schemas/plan.schema';
 

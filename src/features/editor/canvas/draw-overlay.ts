@@ -1,6 +1,6 @@
 // The interactive layer: selection, handles, the tool's draft, the snap marker and the bay under the pointer.
 import type { EditorState, PlanPoint, View } from '../store/editor.types';
-import { findBay } from '../../../../shared/engine/layout/bay-infill.layout';
+import { findBay } from '../../../../shared/engine/index';
 import { distance } from '../tools/plan-geometry';
 import type { UnitSystem } from '../../../lib/units';
 import { MONO, lengthText, type PlanTheme } from './plan-theme';
