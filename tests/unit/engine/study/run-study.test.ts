@@ -128,6 +128,10 @@ describe('bay study results', () => {
     expect(JSON.parse(JSON.stringify(runStudy(plan, spec())))).toEqual(JSON.parse(JSON.stringify(result)));
   });
 
+  it('when the plan’s design is passed in as the base (the screen’s warm worker), then the results are the same', () => {
+    expect(JSON.parse(JSON.stringify(runStudy(plan, spec(), { base: designScheme(plan) })))).toEqual(JSON.parse(JSON.stringify(result)));
+  });
+
   it('when any option is made a scheme and designed on its own, then its tonnage equals the option’s (property)', () => {
     const { bays } = regionBays(plan, { level: 'L2', polygon: WEST_BAY });
     const arb = fc.record({
