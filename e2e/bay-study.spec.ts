@@ -73,7 +73,8 @@ test('when an engineer studies a bay and makes the lightest option a scheme, the
   const managerContext = await browser.newContext({ viewport: { width: 1400, height: 1000 } });
   const manager = await managerContext.newPage();
   await signInAs(manager, 'manager@example.com');
-  await manager.goto(new URL(await made.getByRole('link', { name: 'Compare it on Tonnage' }).getAttribute('href')!, page.url()).toString());
+  const tonnageHref = (await made.getByRole('link', { name: 'Compare it on Tonnage' }).getAttribute('href'))!;
+  await manager.goto(new URL(tonnageHref, page.url()).toString());
   const card = manager.getByRole('article', { name: madeName });
   await expect(card).toBeVisible({ timeout: 60_000 });
   await expect(card.getByText(/\d+\.\d tons/).first()).toBeVisible();
