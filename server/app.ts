@@ -4,6 +4,7 @@ import type { AppContext } from './app-context';
 import { createLucia } from './auth/lucia';
 import { createSignInLimiters } from './auth/rate-limiter';
 import type { Config } from './config';
+import { setDesignRunsKept } from './services/design-run-storage';
 import { errorHandler } from './middleware/error.middleware';
 import { requestLog } from './middleware/request-log.middleware';
 import { securityHeaders } from './middleware/security.middleware';
@@ -37,6 +38,8 @@ export function createApp(options: CreateAppOptions): Express {
   };
 
   configureDesignRuns(config.designRuns);
+  setDesignRunsKept(sequelize, config.designRunsKept);
+
   const app = express();
   app.disable('x-powered-by');
   app.set('query parser', 'simple');

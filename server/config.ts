@@ -84,6 +84,15 @@ const envSchema = z.object({
     emptyToUndefined,
     z.email({ error: 'MAIL_FROM must be an email address' }).optional(),
   ),
+  DESIGN_RUNS_KEPT: z.preprocess(
+    emptyToUndefined,
+    z.coerce
+      .number({ error: 'DESIGN_RUNS_KEPT must be a whole number between 1 and 1000' })
+      .int('DESIGN_RUNS_KEPT must be a whole number between 1 and 1000')
+      .min(1, 'DESIGN_RUNS_KEPT must be a whole number between 1 and 1000')
+      .max(1000, 'DESIGN_RUNS_KEPT must be a whole number between 1 and 1000')
+      .default(5),
+  ),
   APP_URL: z.preprocess(
     emptyToUndefined,
     z
@@ -126,6 +135,11 @@ export interface Config {
   appUrl?: string;
   /** Budget of a design run (worker threads): time, memory, parallel runs; unset parts take the defaults. */
   designRuns?: { timeoutMs?: number; memoryMb?: number; workers?: number; maxQueue?: number };
+  /**
+   * Design runs whose full result is kept per scheme (the newest); older runs keep their summary
+   * (revision, weight, pieces, failures: what the activity feed lists) and drop the result.
+   */
+  designRunsKept: number;
 }
 
 export class ConfigError extends Error {
@@ -172,6 +186,7 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
     seedDemo: e.SEED_DEMO ?? true,
     uploadDir: e.UPLOAD_DIR,
     trustProxy: parseTrustProxy(e.TRUST_PROXY),
+    designRunsKept: e.DESIGN_RUNS_KEPT,
     smtp: e.SMTP_HOST
       ? {
           host: e.SMTP_HOST,

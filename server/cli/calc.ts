@@ -1,8 +1,11 @@
 /**
- * `npm run -s calc -- <subcommand> <file.json | ->`: prints one JSON document on stdout and
- * nothing else there (messages go to stderr). Exit 0 pass, 1 design does not pass, 2 bad input.
+ * `npm run -s calc -- <subcommand> [--pretty] <file.json | ->`: prints one JSON document on stdout
+ * and nothing else there (messages go to stderr). Exit 0 pass, 1 design does not pass, 2 bad input.
+ * The document is compact when stdout is not a terminal (a pipe or a file), indented on a
+ * terminal or with `--pretty`, and written in pieces (json-stream.ts).
  */
 import { CALC_COMMANDS } from './calc-commands';
+import { writeJsonDocument } from './json-stream';
 import { CliInputError, EXIT_BAD_INPUT, errorOutcome, type CommandOutcome } from './cli-io';
 
 async function main(argv: string[]): Promise<CommandOutcome> {
@@ -21,8 +24,12 @@ async function main(argv: string[]): Promise<CommandOutcome> {
   }
 }
 
-main(process.argv.slice(2)).then((outcome) => {
-  process.stdout.write(`${JSON.stringify(outcome.json, null, 2)}\n`);
+const argv = process.argv.slice(2);
+const pretty = argv.includes('--pretty') || process.stdout.isTTY === true;
+const write = (chunk: string) => void process.stdout.write(chunk);
+
+main(argv.filter((a) => a !== '--pretty')).then((outcome) => {
+  writeJsonDocument(outcome.json, write, pretty ? 2 : 0);
   process.exitCode = outcome.exitCode;
 }, (e: unknown) => {
   process.stderr.write(`calc: ${String(e)}\n`);

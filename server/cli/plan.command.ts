@@ -1,16 +1,25 @@
 import { parsePlanFile } from '../../shared/schemas/plan.schema';
 import { gravityLoadProblems } from '../../shared/schemas/plan-gravity-loads';
 import { designScheme } from '../../shared/engine/index';
-import { EXIT_DESIGN_FAILS, EXIT_OK, errorOutcome, readJsonArgument, type CommandOutcome } from './cli-io';
+import { CliInputError, EXIT_DESIGN_FAILS, EXIT_OK, errorOutcome, readJsonArgument, type CommandOutcome } from './cli-io';
+import { planOutput, type PlanOutputView } from './plan-output';
+
+const PLAN_FLAGS = ['--group', '--summary', '--detail'];
 
 /**
- * `calc plan <file.json | ->`: a whole scheme (calc-interface.md). Exit 0 when every member
- * passes and there is no error-level problem; 1 when a member fails or the plan has problems
- * (unsupported ends, cycles, loads off the floor...); 2 when the file cannot be read as a plan.
+ * `calc plan [--group] [--summary | --detail] <file.json | ->`: a whole scheme (calc-interface.md).
+ * Exit 0 when every member passes and there is no error-level problem; 1 when a member fails or
+ * the plan has problems (unsupported ends, cycles, loads off the floor...); 2 when the file cannot
+ * be read as a plan. The default document carries every calc-interface field; `--detail` adds each
+ * member's sizing record and loads, `--summary` keeps the figures a schedule needs.
  */
 export function runPlanCommand(args: string[]): CommandOutcome {
+  const unknown = args.filter((a) => a.startsWith('--') && !PLAN_FLAGS.includes(a));
+  if (unknown.length > 0) throw new CliInputError('unknown option', unknown.map((a) => `option ${a}: calc plan takes ${PLAN_FLAGS.join(', ')} (and --pretty)`));
+  if (args.includes('--summary') && args.includes('--detail')) throw new CliInputError('conflicting options', ['option --summary: give --summary or --detail, not both']);
+  const view: PlanOutputView = args.includes('--summary') ? 'summary' : args.includes('--detail') ? 'detail' : 'default';
   const groupIdentical = args.includes('--group');
-  const file = args.find((a) => a !== '--group');
+  const file = args.find((a) => !PLAN_FLAGS.includes(a));
   const { plan, repairs, problems } = parsePlanFile(readJsonArgument(file));
   const fatal = problems.filter((p) => p.severity === 'error');
   if (plan) fatal.push(...gravityLoadProblems(plan));
@@ -21,5 +30,5 @@ export function runPlanCommand(args: string[]): CommandOutcome {
   const result = designScheme(plan, { groupIdentical });
   const allProblems = [...problems, ...result.problems];
   const ok = result.members.every((m) => m.passes) && !allProblems.some((p) => p.severity === 'error');
-  return { json: { ...result, problems: allProblems, repairs }, exitCode: ok ? EXIT_OK : EXIT_DESIGN_FAILS };
+  return { json: planOutput({ ...result, problems: allProblems, repairs }, view), exitCode: ok ? EXIT_OK : EXIT_DESIGN_FAILS };
 }

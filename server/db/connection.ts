@@ -3,6 +3,7 @@ import { mkdirSync } from 'node:fs';
 import { dirname } from 'node:path';
 import { Sequelize, Transaction } from 'sequelize';
 import { defineModels, type Db } from '../models/models';
+import { serializeSqliteTransactions } from './sqlite-serial';
 
 export type DatabaseTarget =
   | { dialect: 'sqlite'; storage: string; inMemory: boolean }
@@ -75,6 +76,8 @@ export async function connectDatabase(databaseUrl: string): Promise<Db> {
       transactionType: Transaction.TYPES.IMMEDIATE,
     });
     hardenSqlite(sequelize);
+    // Queries from outside an open transaction wait for it too (one shared connection in memory).
+    serializeSqliteTransactions(sequelize);
   } else {
     // The `pg` client (pure JavaScript); nothing in the models or migrations is SQLite-only.
     sequelize = new Sequelize(target.url, { dialect: 'postgres', logging: false });

@@ -26,6 +26,9 @@ const MIGRATIONS: { name: string; up: Migration; down: Migration }[] = [
   { name: '0009-bay-studies', ...m0009 },
 ];
 
+/** The migration names in the order they run. */
+export const MIGRATION_NAMES: readonly string[] = MIGRATIONS.map((m) => m.name);
+
 export function createMigrator(sequelize: Sequelize) {
   return new Umzug({
     migrations: MIGRATIONS,

@@ -48,7 +48,11 @@ function readMultipart(req: Request, res: Response, rule: UploadRule<unknown>): 
             }),
           );
         }
-        return reject(AppError.badRequest(`The upload could not be read: ${err.message}.`));
+        return reject(AppError.badRequest(`The upload could not be read: ${err.message}.`, { [rule.field]: `Send one file as "${rule.field}"` }));
+      }
+      // The multipart parser's own errors (a truncated or malformed body) are the client's.
+      if (err instanceof Error && !(err instanceof AppError)) {
+        return reject(AppError.badRequest(`The upload could not be read: ${err.message}.`, { [rule.field]: 'Send a complete multipart/form-data body' }));
       }
       reject(err);
     });

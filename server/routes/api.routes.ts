@@ -1,6 +1,7 @@
 import express, { Router } from 'express';
 import type { AppContext } from '../app-context';
 import { loadSession } from '../auth/auth.middleware';
+import { limitJsonDepth, requireJsonBody } from '../middleware/body-type.middleware';
 import { requireSameOrigin } from '../middleware/csrf.middleware';
 import { apiNotFound } from '../middleware/error.middleware';
 import { auditRoutes } from './audit.routes';
@@ -23,7 +24,7 @@ import { scheduleRoutes } from './schedule.routes';
 import { projectSchemesRoutes, schemesRoutes } from './schemes.routes';
 import { sessionRoutes } from './session.routes';
 import { teamRoutes } from './team.routes';
-import { underlaysRoutes } from './underlays.routes';
+import { UNDERLAY_UPLOAD_PATHS, underlaysRoutes } from './underlays.routes';
 import { unitPricesRoutes } from './unit-prices.routes';
 
 export const JSON_BODY_LIMIT = '2mb';
@@ -32,7 +33,9 @@ export const JSON_BODY_LIMIT = '2mb';
 export function apiRoutes(ctx: AppContext): Router {
   const api = Router();
   api.use(requireSameOrigin);
+  api.use(requireJsonBody(UNDERLAY_UPLOAD_PATHS));
   api.use(express.json({ limit: JSON_BODY_LIMIT }));
+  api.use(limitJsonDepth);
   api.use(loadSession(ctx));
 
   api.use('/health', healthRoutes());

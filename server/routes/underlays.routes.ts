@@ -69,6 +69,9 @@ const underlayPatchBody = z
   .strict()
   .refine((b) => Object.values(b).some((v) => v !== undefined), 'Send placement, opacity, visible, locked or page');
 
+/** Paths (under /api) whose write takes a multipart body; every other write body is JSON. */
+export const UNDERLAY_UPLOAD_PATHS: readonly RegExp[] = [/^\/schemes\/[^/]+\/underlays\/?$/];
+
 export function underlaysRoutes(ctx: AppContext): Router {
   const router = Router();
   const { db } = ctx;

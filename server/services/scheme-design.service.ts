@@ -1,4 +1,4 @@
-import type { Model, Transaction } from 'sequelize';
+import { Op, type Model, type Transaction } from 'sequelize';
 import type { SchemeResult } from '../../shared/engine/index';
 import type { Plan } from '../../shared/schemas/plan.schema';
 import { AppError } from '../errors/app-error';
@@ -7,10 +7,12 @@ import type { DesignRunAttributes, DesignRunCreation } from '../models/design-ru
 import type { Db } from '../models/models';
 import { findOwnScheme, readPlan, type SchemeServiceContext } from './plan-store.service';
 import { recordSchemeAudit, SCHEME_AUDIT_ACTIONS } from './scheme-audit.service';
+import { designRunsKept, packDesignResult, PRUNED_RESULT, unpackDesignResult } from './design-run-storage';
 
 // Design runs: the scheme's current plan through the engine (designScheme, the `calc plan`
 // output), stored against the revision it was computed from. A run is stale when the
-// scheme has been saved since.
+// scheme has been saved since. Results are stored packed (design-run-storage.ts) and only the
+// newest DESIGN_RUNS_KEPT runs per scheme keep theirs; older runs keep their summary columns.
 
 type DesignRunRow = Model<DesignRunAttributes, DesignRunCreation>;
 
@@ -53,7 +55,7 @@ export function toDesignSummary(run: DesignRunAttributes, schemeRevision: number
 
 function toDesignView(run: DesignRunRow, schemeRevision: number): SchemeDesignView {
   const r = run.get({ plain: true });
-  const result = typeof r.result === 'string' ? (JSON.parse(r.result) as Record<string, unknown>) : r.result;
+  const result = unpackDesignResult(r.result);
   return {
     ...result,
     revision: r.revision,
@@ -100,13 +102,14 @@ export async function storeDesignRun(
   input: { schemeId: string; revision: number; result: SchemeResult | Record<string, unknown>; userId: string | null },
   transaction?: Transaction,
 ): Promise<DesignRunRow> {
-  // Plain JSON: drops the engine's non-enumerable design cache.
-  const result = JSON.parse(JSON.stringify(input.result)) as SchemeResult;
-  return db.models.DesignRun.create(
+  // Plain JSON (drops the engine's non-enumerable design cache), each distinct sizing record once.
+  const packed = packDesignResult(input.result);
+  const result = packed.result as unknown as SchemeResult;
+  const row = await db.models.DesignRun.create(
     {
       schemeId: input.schemeId,
       revision: input.revision,
-      result: result as unknown as Record<string, unknown>,
+      result: packed as unknown as Record<string, unknown>,
       steelWeightLb: result.totals?.steelWeight_lb ?? 0,
       pieces: result.totals?.pieces ?? 0,
       floorAreaFt2: result.totals?.floorArea_ft2 ?? 0,
@@ -115,6 +118,28 @@ export async function storeDesignRun(
       userId: input.userId,
     },
     { transaction },
+  );
+  await pruneDesignResults(db, input.schemeId, transaction);
+  return row;
+}
+
+/**
+ * Drops the stored result of every run of the scheme but the newest `designRunsKept` (latest
+ * first, as latestRun orders them). The rows stay with their summary columns, which the
+ * activity feed lists; nothing reads an older run's result.
+ */
+async function pruneDesignResults(db: Db, schemeId: string, transaction?: Transaction): Promise<void> {
+  const older = await db.models.DesignRun.findAll({
+    where: { schemeId },
+    attributes: ['id'],
+    order: [['createdAt', 'DESC'], ['revision', 'DESC']],
+    offset: designRunsKept(db.sequelize),
+    transaction,
+  });
+  if (older.length === 0) return;
+  await db.models.DesignRun.update(
+    { result: PRUNED_RESULT as unknown as Record<string, unknown> },
+    { where: { id: { [Op.in]: older.map((r) => r.getDataValue('id')) } }, transaction },
   );
 }
 

@@ -27,6 +27,7 @@ import {
 } from './plan-store.service';
 import { recordSchemeAudit, SCHEME_AUDIT_ACTIONS } from './scheme-audit.service';
 import { latestDesignRuns, storeDesignRun, toDesignSummary, type DesignSummary } from './scheme-design.service';
+import { unpackDesignResult } from './design-run-storage';
 
 export type { SchemeServiceContext } from './plan-store.service';
 
@@ -343,7 +344,7 @@ export async function cloneScheme(
     if (run) {
       const r = run.get({ plain: true });
       // The copy is current when the source's design was; a stale design stays stale (revision 0).
-      const result = typeof r.result === 'string' ? JSON.parse(r.result) : r.result;
+      const result = unpackDesignResult(r.result);
       await storeDesignRun(
         ctx.db,
         { schemeId: newId, revision: r.revision === src.revision ? 1 : 0, result: { ...result, name }, userId: ctx.actor.userId },

@@ -13,6 +13,7 @@ import { z } from 'zod';
 import { migratePlanDocument, CURRENT_PLAN_VERSION, PLAN_MIGRATIONS, type PlanMigration } from './plan-migrations';
 import { repairPlan } from './plan-repair';
 import { planProblem, type PlanProblem } from './plan-problem.schema';
+import { formatJsonPath, jsonTooDeepAt, MAX_JSON_DEPTH } from './json-depth';
 import {
   PLAN_LIMITS, alongSpanFt, boundedList, coordinateFt, deflectionDenominator, depthIn, elevationFt, fyKsi, lineLoadKlf,
   nonNegativeMagnitude, planLimitProblems, pointLoadKip, positiveMagnitude, pressurePsf, studCount,
@@ -276,6 +277,11 @@ export function describeIssuePath(raw: unknown, path: readonly PropertyKey[]): {
  * Never throws on bad input: the problems say what is wrong and where.
  */
 export function parsePlanFile(json: unknown, migrations: readonly PlanMigration[] = PLAN_MIGRATIONS): ParsePlanResult {
+  const tooDeep = jsonTooDeepAt(json);
+  if (tooDeep) {
+    const path = formatJsonPath(tooDeep) || '(file)';
+    return { plan: null, repairs: [], problems: [planProblem('error', 'plan-invalid', `${path}: nested more than ${MAX_JSON_DEPTH} levels deep`, { path })] };
+  }
   const migrated = migratePlanDocument(json, migrations);
   if (!migrated.ok) return { plan: null, repairs: [], problems: [migrated.problem] };
   const parsed = planSchema.safeParse(migrated.document);

@@ -4,7 +4,7 @@ import { join } from 'node:path';
 import { QueryTypes } from 'sequelize';
 import { afterAll, describe, expect, it } from 'vitest';
 import { connectDatabase } from '../../server/db/connection';
-import { createMigrator, migrateToLatest } from '../../server/db/migrator';
+import { createMigrator, migrateToLatest, MIGRATION_NAMES } from '../../server/db/migrator';
 import { DEMO_USERS, seedDemo } from '../../server/db/seed-demo';
 import { createTestApp } from './helpers/test-app';
 import { freshTestDatabase, testDialect } from './helpers/test-database';
@@ -27,10 +27,13 @@ async function withFreshDb(fn: (db: Awaited<ReturnType<typeof connectDatabase>>)
 describe(`database (${testDialect}): migrations and demo seed`, () => {
   it('when migrations run twice, then the second run applies nothing and every one is recorded', async () => {
     await withFreshDb(async (db) => {
-      expect(await migrateToLatest(db.sequelize)).toEqual(['0001-accounts', '0002-projects', '0003-schemes-plans', '0004-team-mail-audit', '0005-underlays', '0006-scheme-status-prices', '0007-plan-v2-composite-columns', '0008-underlay-pdf-pages', '0009-bay-studies']);
+      // Every migration in the migrator's list, in its numbered order, each recorded once.
+      expect(MIGRATION_NAMES.slice(0, 9)).toEqual(['0001-accounts', '0002-projects', '0003-schemes-plans', '0004-team-mail-audit', '0005-underlays', '0006-scheme-status-prices', '0007-plan-v2-composite-columns', '0008-underlay-pdf-pages', '0009-bay-studies']);
+      expect(MIGRATION_NAMES.map((n) => n.slice(0, 4))).toEqual(MIGRATION_NAMES.map((_, i) => String(i + 1).padStart(4, '0')));
+      expect(await migrateToLatest(db.sequelize)).toEqual(MIGRATION_NAMES);
       expect(await migrateToLatest(db.sequelize)).toEqual([]);
       const executed = await createMigrator(db.sequelize).executed();
-      expect(executed.map((m) => m.name)).toEqual(['0001-accounts', '0002-projects', '0003-schemes-plans', '0004-team-mail-audit', '0005-underlays', '0006-scheme-status-prices', '0007-plan-v2-composite-columns', '0008-underlay-pdf-pages', '0009-bay-studies']);
+      expect(executed.map((m) => m.name)).toEqual(MIGRATION_NAMES);
     });
   });
 

@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_SCHEMES } from '../../server/db/seed-demo-building';
 import { seedDemo } from '../../server/db/seed-demo';
 import { getSchemeDesign } from '../../server/services/scheme-design.service';
+import { unpackDesignResult } from '../../server/services/design-run-storage';
 import { makeScheme, twoBayPlan } from './helpers/schemes-fixture';
 import { createTestApp, type TestApp } from './helpers/test-app';
 
@@ -170,7 +171,7 @@ describe('design', () => {
       steelWeightLb: res.body.totals.steelWeight_lb,
       failingMembers: 0,
     });
-    const stored = runs[0].getDataValue('result') as { members: { id: string; shape: string }[] };
+    const stored = unpackDesignResult(runs[0].getDataValue('result')) as { members: { id: string; shape: string }[] };
     expect(stored.members.map((m) => m.shape)).toEqual(res.body.members.map((m: { shape: string }) => m.shape));
 
     const got = await t.agents.manager.get(`/api/schemes/${schemeId}/design`);

@@ -1,9 +1,9 @@
 /**
  * Plan benchmarks (invented regular building of our own):
  * 1. 24 levels × ~418 members ≈ 10,000 members through takedown and design, measured from a
- *    fresh process after start-up (module loading excluded, JIT cold) — target ≤ 1 s.
+ *    fresh process after start-up (module loading excluded, JIT cold) — target ≤ 250 ms CPU.
  * 2. one level of ~600 members re-designed after a one-member change, passing the previous
- *    result (steady state an editor sees; median of several changes) — target ≤ 50 ms.
+ *    result (steady state an editor sees; median of several changes) — target ≤ 15 ms CPU.
  * Each figure is printed as wall ms and CPU ms (user + system of this process). The machine's
  * cores are shared, so wall time includes waiting for a core; pass/fail is judged on CPU time,
  * the time the work itself takes on one core, and the wall verdict is printed beside it.
@@ -37,8 +37,8 @@ export interface PlanBenchFigures {
   redesign: Timing;
 }
 
-export const TARGET_BUILDING_MS = 1000;
-export const TARGET_REDESIGN_MS = 50;
+export const TARGET_BUILDING_MS = 250;
+export const TARGET_REDESIGN_MS = 15;
 
 /**
  * A regular office building: bays of 30 ft in x and y, beams at 7.5 ft spanning y, girders along x,
@@ -214,7 +214,7 @@ export function runPlanBench(): PlanBenchFigures {
     `plan (24 levels): ${figures.members} members, ${figures.passed} pass; |ΣD applied − ΣD reactions| = ${figures.equilibriumErrorD.toExponential(2)} kip\n` +
       `  takedown + design, first run ${figures.coldInFreshProcess ? 'in a fresh process' : 'in this process'}: ${fmt(figures.cold)}; target ≤ ${TARGET_BUILDING_MS} ms: ${verdict(figures.cold, TARGET_BUILDING_MS)}\n` +
       `  takedown + design, second run: ${fmt(figures.warm)}; target ≤ ${TARGET_BUILDING_MS} ms: ${verdict(figures.warm, TARGET_BUILDING_MS)}\n` +
-      `  takedown alone (locked-shape self weight): ${fmt(figures.takedown)} (no target)\n` +
+      `  takedown alone (locked-shape self weight), second run: ${fmt(figures.takedown)} (no target of its own; part of the ${TARGET_BUILDING_MS} ms above)\n` +
       `plan (one level): ${figures.levelMembers} members; full design ${fmt(figures.fullLevel)} (no target)\n` +
       `  re-design after a one-member change (median of ${runs.length}): ${fmt(figures.redesign)}; target ≤ ${TARGET_REDESIGN_MS} ms: ${verdict(figures.redesign, TARGET_REDESIGN_MS)}\n`,
   );

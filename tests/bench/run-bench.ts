@@ -2,6 +2,8 @@
 import { runMemberBench, type BenchReport } from './member.bench';
 import { runPlanBench } from './plan.bench';
 import { runStudyBench } from './study.bench';
+import { runCliBench } from './cli.bench';
+import { runServerBench } from './server.bench';
 
 const benches: (() => BenchReport)[] = [runMemberBench];
 
@@ -17,3 +19,8 @@ for (const run of benches) {
 
 runPlanBench();
 runStudyBench();
+// BAYWRIGHT_BENCH=engine skips the command-line and server figures (they take a minute on a shared machine).
+if (process.env.BAYWRIGHT_BENCH !== 'engine') {
+  runCliBench();
+  await runServerBench();
+}

@@ -36,8 +36,26 @@ export function coveredLengthFt(intervals: readonly [number, number][]): number 
 export function deriveMemberBracing(member: PlanMember, spanFt: number, deckCoverage_ft: readonly [number, number][], framingPoints_ft: readonly number[]): Bracing {
   if (member.bracing) return member.bracing;
   if (coveredLengthFt(deckCoverage_ft) >= spanFt - 2 * SUPPORT_TOLERANCE_FT) return 'continuous';
-  const points = [...new Set(framingPoints_ft.map((x) => Math.round(x * 1e6) / 1e6))]
-    .filter((x) => x > SUPPORT_TOLERANCE_FT && x < spanFt - SUPPORT_TOLERANCE_FT)
-    .sort((a, b) => a - b);
-  return points.length > 0 ? { points_ft: points } : 'none';
+  return bracePoints(framingPoints_ft, spanFt);
+}
+
+const ascending = (a: number, b: number) => a - b;
+
+/**
+ * Distinct framing positions (to 1e-6 ft) strictly inside the span, ascending; 'none' without any.
+ * Sorted, then equal neighbours dropped: the same list as de-duplicating first, without a Set
+ * and three arrays per member.
+ */
+function bracePoints(framingPoints_ft: readonly number[], spanFt: number): Bracing {
+  const inside: number[] = [];
+  for (let i = 0; i < framingPoints_ft.length; i++) {
+    const x = Math.round(framingPoints_ft[i] * 1e6) / 1e6;
+    if (x > SUPPORT_TOLERANCE_FT && x < spanFt - SUPPORT_TOLERANCE_FT) inside.push(x);
+  }
+  if (inside.length === 0) return 'none';
+  if (inside.length > 1) inside.sort(ascending);
+  let n = 1;
+  for (let i = 1; i < inside.length; i++) if (inside[i] !== inside[n - 1]) inside[n++] = inside[i];
+  inside.length = n;
+  return { points_ft: inside };
 }

@@ -12,6 +12,7 @@ describe('loadConfig', () => {
       seedDemo: true,
       uploadDir: './data/uploads',
       trustProxy: false,
+      designRunsKept: 5,
       smtp: null,
       designRuns: {},
     });
@@ -20,6 +21,13 @@ describe('loadConfig', () => {
   it('when the design budget variables are given, then designRuns carries them; a bad one is named', () => {
     expect(loadConfig({ DESIGN_TIMEOUT_MS: '5000', DESIGN_MEMORY_MB: '256', DESIGN_WORKERS: '2' }).designRuns).toEqual({ timeoutMs: 5000, memoryMb: 256, workers: 2 });
     expect(() => loadConfig({ DESIGN_TIMEOUT_MS: '0' })).toThrow('DESIGN_TIMEOUT_MS must be at least 1');
+  });
+
+  it('when DESIGN_RUNS_KEPT is set, then it is read, and a value that is not a whole number from 1 to 1000 is refused by name', () => {
+    expect(loadConfig({ DESIGN_RUNS_KEPT: '12' }).designRunsKept).toBe(12);
+    for (const bad of ['0', '2.5', 'many', '1001']) {
+      expect(() => loadConfig({ DESIGN_RUNS_KEPT: bad }), bad).toThrow(/DESIGN_RUNS_KEPT must be a whole number between 1 and 1000/);
+    }
   });
 
   it('when NODE_ENV is production and COOKIE_SECURE unset, then cookies are Secure', () => {

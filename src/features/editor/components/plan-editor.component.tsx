@@ -1,4 +1,4 @@
-import { useEffect, useRef, useState, useSyncExternalStore, type ReactNode } from 'react';
+import { useEffect, useLayoutEffect, useRef, useState, useSyncExternalStore, type ReactNode } from 'react';
 import { useStore } from 'zustand';
 import type { SchemeMember, SchemeResult } from '../../../../shared/engine/index';
 import type { Plan, PlanMember } from '../../../../shared/schemas/plan.schema';
@@ -191,6 +191,9 @@ export function PlanEditor(props: PlanEditorProps) {
   const selectedMember = selection.length === 1 ? plan.members.find((m) => m.id === selection[0] && m.level === levelId) : undefined;
   const schemeMember = selectedMember ? designState.byId.get(selectedMember.id) : undefined;
   const levelName = plan.levels.find((l) => l.id === levelId)?.name ?? 'no level';
+  const side: 'basis' | 'member' | 'list' =
+    showBasis && props.renderDesignBasis ? 'basis' : selectedMember && schemeMember && designState.result && props.renderMemberSheet ? 'member' : 'list';
+  const fillHeight = useFillWindowHeight(rootRef);
 
   return (
     <div
@@ -198,6 +201,7 @@ export function PlanEditor(props: PlanEditorProps) {
       data-testid="plan-editor"
       data-read-only={!canEdit || undefined}
       className="flex flex-col border-2 border-ink bg-paper-raised"
+      style={{ height: fillHeight }}
       onKeyDown={onKeyDown}
       onKeyUp={(e) => e.key === ' ' && controller.setSpace(false)}
     >
@@ -257,13 +261,8 @@ export function PlanEditor(props: PlanEditorProps) {
           </Button>
         </div>
       ) : null}
-      {showBasis && props.renderDesignBasis ? (
-        <div className="border-b border-ink bg-paper px-4 py-3">
-          {props.renderDesignBasis({ designBasis: plan.designBasis, canEdit, submit: (designBasis) => dispatch(store, 'plan.setDesignBasis', { designBasis }) })}
-        </div>
-      ) : null}
       {showStudy && props.renderStudyPanel ? (
-        <div className="border-b border-ink bg-paper px-4 py-3" data-testid="study-panel-slot">
+        <div className="max-h-[45vh] shrink-0 overflow-auto border-b border-ink bg-paper px-4 py-3" data-testid="study-panel-slot">
           {props.renderStudyPanel({
             plan,
             levelId,
@@ -278,7 +277,7 @@ export function PlanEditor(props: PlanEditorProps) {
       ) : null}
       {canEdit ? <ToolOptionsBar store={store} /> : null}
       {showUnderlay && props.renderUnderlayPanel ? <div className="border-b border-ink bg-paper px-4 py-3">{props.renderUnderlayPanel(levelId)}</div> : null}
-      <div className="flex min-h-0" style={{ height: 'min(72vh, 760px)' }}>
+      <div className="flex min-h-0 flex-1">
         {canEdit && !building ? <PlanToolbar store={store} /> : null}
         <div className="relative min-w-0 flex-1">
           {building ? (
@@ -302,10 +301,35 @@ export function PlanEditor(props: PlanEditorProps) {
             />
           )}
         </div>
-        <aside className="flex w-[26rem] shrink-0 flex-col border-l border-ink bg-paper-raised" aria-label="Members and selection">
-          <MemberList store={store} design={design} />
-          <SelectionInspector store={store} canEdit={canEdit} />
-        </aside>
+        {/* The side panel beside the canvas: the Design basis when open, else the selected
+            member's sheet, else the member list; the plan stays in view beside each. */}
+        {side === 'basis' ? (
+          <aside className="flex w-[36rem] shrink-0 flex-col border-l border-ink bg-paper" aria-label="Design basis panel">
+            <div className="min-h-0 flex-1 overflow-auto px-4 py-3">
+              {props.renderDesignBasis!({ designBasis: plan.designBasis, canEdit, submit: (designBasis) => dispatch(store, 'plan.setDesignBasis', { designBasis }) })}
+            </div>
+          </aside>
+        ) : side === 'member' && selectedMember && schemeMember && designState.result ? (
+          <aside className="flex w-[38rem] shrink-0 flex-col border-l border-ink bg-paper" aria-label="Member sheet panel">
+            <div className="min-h-0 flex-1 overflow-auto px-4 py-3" data-testid="member-sheet-slot">
+              {props.renderMemberSheet!({
+                member: schemeMember,
+                planMember: selectedMember,
+                plan,
+                result: designState.result,
+                canEdit,
+                lockShape: (shape) => dispatch(store, 'member.setShape', { id: selectedMember.id, shape }),
+                setConstraints: (c) => dispatch(store, 'member.setConstraints', { id: selectedMember.id, ...c }),
+                close: () => dispatch(store, 'selection.set', { ids: [] }),
+              })}
+            </div>
+          </aside>
+        ) : (
+          <aside className="flex w-[26rem] shrink-0 flex-col border-l border-ink bg-paper-raised" aria-label="Members and selection">
+            <MemberList store={store} design={design} />
+            <SelectionInspector store={store} canEdit={canEdit} />
+          </aside>
+        )}
       </div>
       <div className="flex flex-wrap items-center justify-between gap-3 border-t border-ink bg-paper px-3 py-1.5 text-xs">
         <p role="status" aria-live="polite" className={notice?.tone === 'error' ? 'text-danger' : 'text-ink-soft'} data-testid="plan-notice">
@@ -319,22 +343,6 @@ export function PlanEditor(props: PlanEditorProps) {
           <SaveStatus state={saveState} />
         </div>
       </div>
-      {selectedMember && schemeMember && designState.result && props.renderMemberSheet ? (
-        <div className="border-t-2 border-ink bg-paper px-4 py-4" data-testid="member-sheet-slot">
-          <div className="mx-auto max-w-5xl">
-          {props.renderMemberSheet({
-            member: schemeMember,
-            planMember: selectedMember,
-            plan,
-            result: designState.result,
-            canEdit,
-            lockShape: (shape) => dispatch(store, 'member.setShape', { id: selectedMember.id, shape }),
-            setConstraints: (c) => dispatch(store, 'member.setConstraints', { id: selectedMember.id, ...c }),
-            close: () => dispatch(store, 'selection.set', { ids: [] }),
-          })}
-          </div>
-        </div>
-      ) : null}
       {saveState.status === 'invalid' ? (
         <div role="alert" className="border-t border-danger bg-danger-wash px-3 py-2 text-xs text-danger">
           {saveState.message} {saveState.problems.slice(0, 5).join(' ')}
@@ -343,6 +351,27 @@ export function PlanEditor(props: PlanEditorProps) {
       <EngineerCaution className="border-t border-line px-3 py-2" />
     </div>
   );
+}
+
+/**
+ * The editor fills the window below where it starts (so the canvas, its status line and the
+ * side panel are all in view), never shorter than MIN_EDITOR_PX.
+ */
+const MIN_EDITOR_PX = 520;
+function useFillWindowHeight(ref: React.RefObject<HTMLDivElement | null>): number {
+  const [height, setHeight] = useState(MIN_EDITOR_PX);
+  useLayoutEffect(() => {
+    const measure = () => {
+      const el = ref.current;
+      if (!el || typeof window === 'undefined') return;
+      const top = el.getBoundingClientRect().top + window.scrollY;
+      setHeight(Math.max(MIN_EDITOR_PX, Math.floor(window.innerHeight - top - 4)));
+    };
+    measure();
+    window.addEventListener('resize', measure);
+    return () => window.removeEventListener('resize', measure);
+  }, [ref]);
+  return height;
 }
 
 function ActionButton({ store, id, disabled, text }: { store: EditorStore; id: ActionId; disabled?: boolean; text?: string }) {
