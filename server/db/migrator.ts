@@ -8,6 +8,7 @@ import * as m0005 from './migrations/0005-underlays';
 import * as m0006 from './migrations/0006-scheme-status-prices';
 import * as m0007 from './migrations/0007-plan-v2-composite-columns';
 import * as m0008 from './migrations/0008-underlay-pdf-pages';
+import * as m0009 from './migrations/0009-bay-studies';
 
 export type Migration = MigrationFn<QueryInterface>;
 
@@ -22,6 +23,7 @@ const MIGRATIONS: { name: string; up: Migration; down: Migration }[] = [
   { name: '0006-scheme-status-prices', ...m0006 },
   { name: '0007-plan-v2-composite-columns', ...m0007 },
   { name: '0008-underlay-pdf-pages', ...m0008 },
+  { name: '0009-bay-studies', ...m0009 },
 ];
 
 /** The migration names in the order they run. */

@@ -25,6 +25,7 @@ import { defineSchemeCommentModel } from './scheme-comment.model';
 import { defineSchemeActivityModel } from './scheme-activity.model';
 import { defineUnitPriceModel } from './unit-price.model';
 import { defineUnderlayModel } from './underlay.model';
+import { defineBayStudyModel } from './bay-study.model';
 
 // Models are defined per Sequelize instance (tests run many in-memory databases), so the
 // app passes this object around instead of importing model classes globally.
@@ -59,6 +60,8 @@ export function defineModels(sequelize: Sequelize) {
     UnitPrice: defineUnitPriceModel(sequelize),
     // Plan images under a level (0005-underlays).
     Underlay: defineUnderlayModel(sequelize),
+    // Bay studies of a scheme (0009-bay-studies).
+    BayStudy: defineBayStudyModel(sequelize),
   };
 }
 

@@ -5,6 +5,7 @@ import { limitJsonDepth, requireJsonBody } from '../middleware/body-type.middlew
 import { requireSameOrigin } from '../middleware/csrf.middleware';
 import { apiNotFound } from '../middleware/error.middleware';
 import { auditRoutes } from './audit.routes';
+import { bayStudiesRoutes } from './bay-studies.routes';
 import { calcBookRoutes } from './calc-book.routes';
 import { comparisonRoutes } from './comparison.routes';
 import { firmsRoutes } from './firms.routes';
@@ -54,6 +55,8 @@ export function apiRoutes(ctx: AppContext): Router {
   api.use('/schemes', schemeStatusRoutes(ctx));
   api.use('/schemes', schemeCommentsRoutes(ctx));
   api.use('/projects', comparisonRoutes(ctx));
+  // Bay studies (issue 15).
+  api.use('/schemes', bayStudiesRoutes(ctx));
   api.use('/unit-prices', unitPricesRoutes(ctx));
   api.use('/invitations', invitationsRoutes(ctx));
   api.use('/password-resets', passwordResetRoutes(ctx));

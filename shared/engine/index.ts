@@ -28,3 +28,11 @@ export { runTakedown } from './takedown/gravity-takedown.takedown';
 export type { TakedownResult, MemberTakedown, EndReaction } from './takedown/gravity-takedown.takedown';
 export { designScheme, SCHEME_CAUTION } from './scheme/design-scheme.scheme';
 export type { SchemeResult, SchemeMember, SchemeOptions } from './scheme/design-scheme.scheme';
+// Layout and bay study: the Infill tool's rules and framing options for bays (calc study).
+export { findBay, bayPolygon, infillBay, infillDirection, applyInfill } from './layout/bay-infill.layout';
+export type { Bay, InfillRequest, InfillResult } from './layout/bay-infill.layout';
+export { runStudy, studyOptionSpecs, schemeStudyFigures, markBest, StudyInputError, STUDY_BASIS } from './study/run-study.study';
+export type { StudyResult, StudyOptionResult, StudyFigures, StudyHooks } from './study/run-study.study';
+export { applyStudyOption } from './study/apply-option.study';
+export type { StudyOptionSpec, AppliedOption } from './study/apply-option.study';
+export { levelBays, regionBays, memberInBays, baysAreaFt2 } from './study/study-region.study';

@@ -20,6 +20,8 @@ import { BuildingView } from '../features/building-view/components/building-view
 import { useUnderlays } from '../features/underlay/api/get-underlays.api';
 import { UnderlayImage } from '../features/underlay/components/underlay-image.component';
 import { UnderlayPanel } from '../features/underlay/components/underlay-panel.component';
+import { StudyPanel } from '../features/bay-study/components/study-panel.component';
+import { useUnitPrices } from '../features/unit-prices/api/unit-prices.api';
 import { isApiError } from '../lib/api-client';
 import { invalidatePlanResults } from '../lib/plan-change-queries';
 import { canEditProjects } from '../lib/permissions';
@@ -83,6 +85,7 @@ function SchemePlan({
   const scheme = useEditorScheme(schemeId);
   const queryClient = useQueryClient();
   const { system } = useUnits();
+  const prices = useUnitPrices();
   const designTimer = useRef<ReturnType<typeof setTimeout> | null>(null);
   useEffect(() => () => void (designTimer.current && clearTimeout(designTimer.current)), []);
 
@@ -145,6 +148,15 @@ function SchemePlan({
           renderBuildingView={({ plan, result, selection, select }) => <BuildingView plan={plan} design={result} selection={selection} onSelect={select} />}
           renderUnderlayPanel={(level) => <UnderlayPanel schemeId={schemeId} levelId={level} canEdit={canEdit} units={system} />}
           renderUnderlayImages={(level, view) => <LevelUnderlays schemeId={schemeId} levelId={level} view={view} />}
+          renderStudyPanel={(args) => (
+            <StudyPanel
+              {...args}
+              projectId={projectId}
+              schemeId={schemeId}
+              prices={prices.data?.prices ? { steel_usd_per_ton: prices.data.prices.steel_usd_per_ton, connection_usd_each: prices.data.prices.connection_usd_each } : null}
+              tonnageHref={paths.projectTonnage.href(projectId)}
+            />
+          )}
           renderDesignBasis={({ designBasis, canEdit: can, submit }) => <DesignBasisForm value={designBasis} canEdit={can} onSubmit={submit} units={system} />}
           renderMemberSheet={({ member, planMember, plan, result, canEdit: can, lockShape, setConstraints, close }) => (
             <MemberSheet

@@ -28,7 +28,7 @@ describe(`database (${testDialect}): migrations and demo seed`, () => {
   it('when migrations run twice, then the second run applies nothing and every one is recorded', async () => {
     await withFreshDb(async (db) => {
       // Every migration in the migrator's list, in its numbered order, each recorded once.
-      expect(MIGRATION_NAMES.slice(0, 8)).toEqual(['0001-accounts', '0002-projects', '0003-schemes-plans', '0004-team-mail-audit', '0005-underlays', '0006-scheme-status-prices', '0007-plan-v2-composite-columns', '0008-underlay-pdf-pages']);
+      expect(MIGRATION_NAMES.slice(0, 9)).toEqual(['0001-accounts', '0002-projects', '0003-schemes-plans', '0004-team-mail-audit', '0005-underlays', '0006-scheme-status-prices', '0007-plan-v2-composite-columns', '0008-underlay-pdf-pages', '0009-bay-studies']);
       expect(MIGRATION_NAMES.map((n) => n.slice(0, 4))).toEqual(MIGRATION_NAMES.map((_, i) => String(i + 1).padStart(4, '0')));
       expect(await migrateToLatest(db.sequelize)).toEqual(MIGRATION_NAMES);
       expect(await migrateToLatest(db.sequelize)).toEqual([]);

@@ -1,6 +1,7 @@
 /** `npm run bench`: runs each benchmark module and prints its figures. Add plan benchmarks beside member. */
 import { runMemberBench, type BenchReport } from './member.bench';
 import { runPlanBench } from './plan.bench';
+import { runStudyBench } from './study.bench';
 import { runCliBench } from './cli.bench';
 import { runServerBench } from './server.bench';
 
@@ -17,6 +18,7 @@ for (const run of benches) {
 }
 
 runPlanBench();
+runStudyBench();
 // BAYWRIGHT_BENCH=engine skips the command-line and server figures (they take a minute on a shared machine).
 if (process.env.BAYWRIGHT_BENCH !== 'engine') {
   runCliBench();

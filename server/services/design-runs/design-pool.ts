@@ -5,8 +5,9 @@
  */
 import { availableParallelism } from 'node:os';
 import { Worker } from 'node:worker_threads';
-import type { SchemeResult } from '../../../shared/engine/index';
+import type { SchemeResult, StudyResult } from '../../../shared/engine/index';
 import type { Plan } from '../../../shared/schemas/plan.schema';
+import type { StudySpec } from '../../../shared/schemas/study.schema';
 import { AppError } from '../../errors/app-error';
 import type { DesignReply } from './design.worker';
 
@@ -31,7 +32,8 @@ export const DEFAULT_DESIGN_BUDGET: DesignBudget = {
 interface Task {
   id: number;
   plan: Plan;
-  resolve: (r: SchemeResult) => void;
+  study?: StudySpec;
+  resolve: (r: never) => void;
   reject: (e: unknown) => void;
 }
 
@@ -56,11 +58,20 @@ export class DesignPool {
 
   /** Designs a plan in a worker; rejects with an AppError (422 over budget or engine failure, 503 queue full). */
   run(plan: Plan): Promise<SchemeResult> {
+    return this.submit<SchemeResult>(plan);
+  }
+
+  /** A bay study of the plan in a worker, under the same budget (each option is a whole design). */
+  runStudy(plan: Plan, study: StudySpec): Promise<StudyResult> {
+    return this.submit<StudyResult>(plan, study);
+  }
+
+  private submit<T>(plan: Plan, study?: StudySpec): Promise<T> {
     if (this.queue.length >= this.budget.maxQueue) {
       return Promise.reject(new AppError(503, 'design_busy', 'The server is designing many plans right now; try again in a moment.', { headers: { 'Retry-After': '5' } }));
     }
-    return new Promise<SchemeResult>((resolve, reject) => {
-      this.queue.push({ id: this.nextId++, plan, resolve, reject });
+    return new Promise<T>((resolve, reject) => {
+      this.queue.push({ id: this.nextId++, plan, ...(study ? { study } : {}), resolve: resolve as (r: never) => void, reject });
       this.dispatch();
     });
   }
@@ -86,7 +97,7 @@ export class DesignPool {
       slot.worker.ref();
       // Until the worker says it has started (a new worker loads the engine first): a start-up budget.
       this.arm(slot, WORKER_START_MS, () => new AppError(503, 'design_busy', 'The design worker did not start; try again in a moment.'));
-      slot.worker.postMessage({ id: task.id, plan: task.plan });
+      slot.worker.postMessage({ id: task.id, plan: task.plan, ...(task.study ? { study: task.study } : {}) });
     }
   }
 
@@ -113,7 +124,7 @@ export class DesignPool {
         return;
       }
       this.finish(slot);
-      if (reply.ok) task.resolve(reply.result as SchemeResult);
+      if (reply.ok) task.resolve(reply.result as never);
       else task.reject(new AppError(422, 'design_failed', `The plan could not be designed: ${reply.message}`));
       this.dispatch();
     });

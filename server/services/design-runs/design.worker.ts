@@ -1,10 +1,12 @@
 // One design-run worker thread: receives plans, answers with the `calc plan` result (plain
 // data), so a long design never blocks the server's request thread.
 import { parentPort } from 'node:worker_threads';
-import { designScheme } from '../../../shared/engine/index';
+import { designScheme, runStudy } from '../../../shared/engine/index';
 import type { Plan } from '../../../shared/schemas/plan.schema';
+import type { StudySpec } from '../../../shared/schemas/study.schema';
 
-export interface DesignRequest { id: number; plan: Plan }
+/** A plan to design, or with `study` a bay study of it (issue 15), under the same budget. */
+export interface DesignRequest { id: number; plan: Plan; study?: StudySpec }
 export type DesignReply =
   | { id: number; started: true }
   | { id: number; ok: true; result: unknown }
@@ -15,7 +17,7 @@ parentPort!.on('message', (msg: DesignRequest) => {
   parentPort!.postMessage({ id: msg.id, started: true } satisfies DesignReply);
   let reply: DesignReply;
   try {
-    reply = { id: msg.id, ok: true, result: designScheme(msg.plan) };
+    reply = { id: msg.id, ok: true, result: msg.study ? runStudy(msg.plan, msg.study) : designScheme(msg.plan) };
   } catch (err) {
     reply = { id: msg.id, ok: false, message: err instanceof Error ? err.message : String(err) };
   }

@@ -3,6 +3,7 @@ import { DEMO_PASSWORD } from '../../../server/db/seed-demo';
 import { newOneTimeToken } from '../../../server/services/one-time-token.service';
 import { createUnderlay } from '../../../server/services/underlays.service';
 import { makeScheme, twoBayPlan } from './schemes-fixture';
+import { makeStudy, WEST_BAY_STUDY } from './study-fixture';
 import { tinyPng } from './underlay-images';
 import type { TestApp } from './test-app';
 
@@ -264,6 +265,7 @@ export const ROUTE_TABLE: RouteCase[] = [
   ...underlayRows(),
   ...draftingRows(),
   ...reviewRows(),
+  ...studyRows(),
 ];
 
 /** Issue 7: scheme status, comments, activity, Tonnage comparison and exports, unit prices. */
@@ -390,5 +392,29 @@ function draftingRows(): RouteCase[] {
       path: scheme('own', '/calc-book.pdf?level=L2'), foreignPath: scheme('foreign', '/calc-book.pdf'),
     },
     { method: 'GET', route: '/api/schemes/:id/model.ifc', allowed: readers, okStatus: 200, path: scheme('own', '/model.ifc'), foreignPath: scheme('foreign', '/model.ifc') },
+  ];
+}
+
+/** Issue 15: bay studies (engineers and owners run them and make schemes; everyone reads). */
+function studyRows(): RouteCase[] {
+  const readers = ['owner', 'engineer', 'drafter', 'manager'] as const;
+  const writers = ['owner', 'engineer'] as const;
+  const scheme = (firm: 'own' | 'foreign', suffix: string) => async (fx: RouteFixture) =>
+    `/api/schemes/${(await makeScheme(fx.t, { firm })).schemeId}${suffix}`;
+  const study = (firm: 'own' | 'foreign', suffix = '') => async (fx: RouteFixture) => {
+    const s = await makeStudy(fx.t, { firm });
+    return `/api/schemes/${s.schemeId}/studies/${s.studyId}${suffix}`;
+  };
+  return [
+    {
+      method: 'POST', route: '/api/schemes/:id/studies', allowed: writers, okStatus: 201,
+      path: scheme('own', '/studies'), body: () => WEST_BAY_STUDY, foreignPath: scheme('foreign', '/studies'),
+    },
+    { method: 'GET', route: '/api/schemes/:id/studies', allowed: readers, okStatus: 200, path: scheme('own', '/studies'), foreignPath: scheme('foreign', '/studies') },
+    { method: 'GET', route: '/api/schemes/:id/studies/:studyId', allowed: readers, okStatus: 200, path: study('own'), foreignPath: study('foreign') },
+    {
+      method: 'POST', route: '/api/schemes/:id/studies/:studyId/schemes', allowed: writers, okStatus: 201,
+      path: study('own', '/schemes'), body: () => ({ optionId: 'y-s10-dany-f50' }), foreignPath: study('foreign', '/schemes'),
+    },
   ];
 }

@@ -7,10 +7,10 @@
 import type { EditorPatch, PlanPoint, ToolId } from '../store/editor.types';
 import type { EditorStore, EditorStoreState } from '../store/editor.store';
 import {
-  EditError, addColumn, addDeck, addGridLine, addLevel, addLineLoad, addMember, addOpening, addPointLoad, applyInfill,
+  EditError, addColumn, addDeck, addGridLine, addLevel, addLineLoad, addMember, addOpening, addPointLoad,
   columnsAtAllIntersections, copyLevel, deleteElements, ensureZone, moveGridLine, setDeck, setGridFromSpacings, updatePointLoad, updateZone,
 } from './plan-edits';
-import { bayPolygon, findBay, infillBay, infillDirection } from '../tools/infill.tool';
+import { applyInfill, bayPolygon, findBay, infillBay, infillDirection } from '../../../../shared/engine/index';
 import { fitView, panBy, zoomAt } from '../canvas/view-transform';
 import type { Plan, PlanZone } from '../../../../shared/schemas/plan.schema';
 

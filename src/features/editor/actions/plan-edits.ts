@@ -4,11 +4,10 @@
  */
 import type { Plan, PlanDeck, PlanGrid, PlanMember, PlanZone } from '../../../../shared/schemas/plan.schema';
 import type { PlanPoint } from '../store/editor.types';
-import { nextId, usedIds } from '../store/plan-ids';
+import { nextId, usedIds } from '../../../../shared/schemas/plan-ids';
 import { gridLabel, offsetsFromSpacings } from '../tools/grid-spacings.parser';
 import { gridIntersections } from '../tools/snapping.tool';
 import { distance, samePoint } from '../tools/plan-geometry';
-import type { InfillResult } from '../tools/infill.tool';
 import type { ZonePreset } from '../tools/zone-presets';
 
 export class EditError extends Error {}
@@ -95,10 +94,6 @@ export function moveMemberEnd(plan: Plan, memberId: string, which: 'start' | 'en
   };
 }
 
-export function applyInfill(plan: Plan, result: Extract<InfillResult, { ok: true }>): Plan {
-  const remove = new Set(result.removeIds);
-  return { ...plan, members: [...plan.members.filter((m) => !remove.has(m.id)), ...result.add] };
-}
 
 /** The zone for this preset (by name and values), added to the plan when it is not there yet. */
 export function ensureZone(plan: Plan, preset: ZonePreset['zone']): { plan: Plan; zoneId: string } {

@@ -1,11 +1,12 @@
 // The interactive layer: selection, handles, the tool's draft, the snap marker and the bay under the pointer.
 import type { EditorState, PlanPoint, View } from '../store/editor.types';
-import { findBay } from '../tools/infill.tool';
+import { findBay } from '../../../../shared/engine/index';
 import { distance } from '../tools/plan-geometry';
 import type { UnitSystem } from '../../../lib/units';
 import { MONO, lengthText, type PlanTheme } from './plan-theme';
 import { toScreen } from './view-transform';
 import { MEMBER_WIDTH_PX } from './draw-static';
+import { drawStudyPreview } from './draw-study-preview';
 
 export const HANDLE_PX = 9;
 
@@ -15,6 +16,7 @@ export function drawOverlay(ctx: CanvasRenderingContext2D, s: EditorState, theme
   ctx.save();
   ctx.lineCap = 'round';
   const selected = new Set(s.selection);
+  drawStudyPreview(ctx, s, theme);
 
   // Bay under the pointer for the bay tools.
   if (s.hover && (s.tool === 'infill' || (s.tool === 'deck' && s.options.deckMode === 'bay'))) {

@@ -90,7 +90,7 @@ export function PlanCanvas({ store, design, controller, label, renderUnderlay }:
         rebuild();
         staticLayer.current?.batchDraw();
       } else if (s.view !== prev.view) staticLayer.current?.batchDraw();
-      if (s.view !== prev.view || s.selection !== prev.selection || s.draft !== prev.draft || s.hover !== prev.hover || s.tool !== prev.tool || s.plan !== prev.plan) {
+      if (s.view !== prev.view || s.selection !== prev.selection || s.draft !== prev.draft || s.hover !== prev.hover || s.tool !== prev.tool || s.plan !== prev.plan || s.studyPreview !== prev.studyPreview) {
         overlayLayer.current?.batchDraw();
       }
     });

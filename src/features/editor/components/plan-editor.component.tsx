@@ -12,6 +12,7 @@ import { LiveDesign } from '../design/live-design';
 import { keepIssuedMarks } from '../design/issued-marks';
 import { MemberList } from '../members/member-list.component';
 import { createEditorStore, type EditorStore } from '../store/editor.store';
+import type { StudyPreview } from '../store/editor.types';
 import { PlanAutosave, type AutosaveSnapshot } from '../sync/plan-autosave';
 import { createToolController } from '../tools/tool-controller';
 import { ConflictBanner } from './conflict-banner.component';
@@ -36,6 +37,20 @@ export interface DesignBasisSlotArgs {
   designBasis: Plan['designBasis'];
   canEdit: boolean;
   submit: (next: Plan['designBasis']) => void;
+}
+
+export interface StudyPanelSlotArgs {
+  plan: Plan;
+  levelId: string;
+  /** Ids selected on the Plan (a deck or member selects its bay). */
+  selection: string[];
+  /** The revision on the server and whether the plan on screen is that revision. */
+  savedRevision: number;
+  saved: boolean;
+  canEdit: boolean;
+  /** Draw a trial option (or only its bays) over the plan; null clears it. */
+  setPreview: (preview: StudyPreview | null) => void;
+  close: () => void;
 }
 
 export interface BuildingViewSlotArgs {
@@ -66,6 +81,8 @@ export interface PlanEditorProps {
   renderUnderlayPanel?: (levelId: string) => ReactNode;
   /** Underlay images (Konva nodes) for the level shown, under the plan. */
   renderUnderlayImages?: (levelId: string, view: PlanViewArgs) => ReactNode;
+  /** The trial framings panel (bay study, composed by the page). */
+  renderStudyPanel?: (args: StudyPanelSlotArgs) => ReactNode;
   /** The 3D Building view (composed by the page); offers the Plan / Building switch. */
   renderBuildingView?: (args: BuildingViewSlotArgs) => ReactNode;
   initialView?: PlanEditorView;
@@ -108,6 +125,8 @@ export function PlanEditor(props: PlanEditorProps) {
   const [recovered, setRecovered] = useState(() => autosave.readLocalDraft());
   const [showBasis, setShowBasis] = useState(false);
   const [showUnderlay, setShowUnderlay] = useState(false);
+  const [showStudy, setShowStudy] = useState(false);
+  const closeStudy = () => (setShowStudy(false), store.setState({ studyPreview: null }));
   const [view, setView] = useState<PlanEditorView>(props.renderBuildingView ? (props.initialView ?? 'plan') : 'plan');
   const building = view === 'building' && !!props.renderBuildingView;
   const changeView = (next: PlanEditorView) => {
@@ -218,6 +237,11 @@ export function PlanEditor(props: PlanEditorProps) {
               Underlay
             </Button>
           ) : null}
+          {props.renderStudyPanel ? (
+            <Button variant="quiet" className="h-8 text-xs" aria-expanded={showStudy} onClick={() => (showStudy ? closeStudy() : setShowStudy(true))}>
+              Trial framings
+            </Button>
+          ) : null}
           {props.renderDesignBasis ? (
             <Button variant="quiet" className="h-8 text-xs" aria-expanded={showBasis} onClick={() => setShowBasis((v) => !v)}>
               Design basis
@@ -235,6 +259,20 @@ export function PlanEditor(props: PlanEditorProps) {
           <Button variant="secondary" className="h-8 text-xs" onClick={() => (autosave.discardLocalDraft(), setRecovered(null))}>
             Discard
           </Button>
+        </div>
+      ) : null}
+      {showStudy && props.renderStudyPanel ? (
+        <div className="max-h-[45vh] shrink-0 overflow-auto border-b border-ink bg-paper px-4 py-3" data-testid="study-panel-slot">
+          {props.renderStudyPanel({
+            plan,
+            levelId,
+            selection,
+            savedRevision: saveState.revision,
+            saved: saveState.status === 'saved' || saveState.status === 'readonly',
+            canEdit,
+            setPreview: (studyPreview) => store.setState({ studyPreview }),
+            close: closeStudy,
+          })}
         </div>
       ) : null}
       {canEdit ? <ToolOptionsBar store={store} /> : null}

@@ -1,4 +1,4 @@
-import type { Plan } from '../../../../shared/schemas/plan.schema';
+import type { Plan, PlanMember } from '../../../../shared/schemas/plan.schema';
 
 export type PlanPoint = readonly [number, number];
 
@@ -58,6 +58,15 @@ export interface EditorState {
   readOnly: boolean;
   /** A short message from the last action (what it did, or why it could not). */
   notice: EditorNotice | null;
+  /** Bays and framing of a trial option drawn over the plan (never part of the plan, never saved). */
+  studyPreview?: StudyPreview | null;
+}
+
+export interface StudyPreview {
+  levelId: string;
+  bays: { x0: number; x1: number; y0: number; y1: number }[];
+  /** The option's members in the bays (null: only the bays are shaded). */
+  members: PlanMember[] | null;
 }
 
 export interface EditorNotice {

@@ -1,10 +1,13 @@
 /**
  * Bays and infill: the bay is the rectangle between the grid lines around a point; infill
  * places beams across it at equal spacing not more than the one asked for (or a count).
+ * Pure: the Plan's Infill tool and the bay study (shared/engine/study) lay out with these.
  */
-import type { Plan, PlanMember } from '../../../../shared/schemas/plan.schema';
-import type { PlanPoint } from '../store/editor.types';
-import { nextId, usedIds } from '../store/plan-ids';
+import type { Plan, PlanMember } from '../../schemas/plan.schema';
+import { nextId, usedIds } from '../../schemas/plan-ids';
+
+/** A point in plan, ft (x, y). */
+export type PlanPoint = readonly [number, number];
 
 export interface Bay {
   x0: number;
@@ -106,6 +109,12 @@ export function infillBay(plan: Plan, levelId: string, bay: Bay, request: Infill
     add.push({ id: nextId(plan, 'b', taken), level: levelId, kind: 'beam', start, end, shape: null, maxDepth_in: null });
   }
   return { ok: true, direction, spacing_ft: width / divisions, add, removeIds };
+}
+
+/** The plan with the infill's beams in place of those it replaces. */
+export function applyInfill(plan: Plan, result: Extract<InfillResult, { ok: true }>): Plan {
+  const remove = new Set(result.removeIds);
+  return { ...plan, members: [...plan.members.filter((m) => !remove.has(m.id)), ...result.add] };
 }
 
 function round2(v: number): number {

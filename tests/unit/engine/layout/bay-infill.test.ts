@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { findBay, infillBay, infillDirection } from '../../../src/features/editor/tools/infill.tool';
-import { emptyGridPlan, twoBayPlan } from './plan-fixture';
-import type { Plan, PlanMember } from '../../../shared/schemas/plan.schema';
+import { findBay, infillBay, infillDirection } from '../../../../shared/engine/layout/bay-infill.layout';
+import { emptyGridPlan, twoBayPlan } from '../../editor/plan-fixture';
+import type { Plan, PlanMember } from '../../../../shared/schemas/plan.schema';
 
 const girder = (id: string, start: [number, number], end: [number, number]): PlanMember => ({ id, level: 'L2', kind: 'girder', start, end, shape: null, maxDepth_in: null });
 

@@ -1,4 +1,4 @@
-import type { Plan } from '../../../../shared/schemas/plan.schema';
+import type { Plan } from './plan.schema';
 
 /** A new id with this prefix unused anywhere in the plan (ids are unique across collections). */
 export function nextId(plan: Plan, prefix: string, taken: Set<string> = usedIds(plan)): string {
