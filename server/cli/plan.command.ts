@@ -21,5 +21,7 @@ export function runPlanCommand(args: string[]): CommandOutcome {
   const result = designScheme(plan, { groupIdentical });
   const allProblems = [...problems, ...result.problems];
   const ok = result.members.every((m) => m.passes) && !allProblems.some((p) => p.severity === 'error');
-  return { json: { ...result, problems: allProblems, repairs }, exitCode: ok ? EXIT_OK : EXIT_DESIGN_FAILS };
+  // calc-interface.md "Additions": studs, camber_in and percentComposite on every member (null where not composite).
+  const members = result.members.map((m) => ({ ...m, studs: m.studs ?? null, camber_in: m.camber_in ?? null, percentComposite: m.percentComposite ?? null }));
+  return { json: { ...result, members, problems: allProblems, repairs }, exitCode: ok ? EXIT_OK : EXIT_DESIGN_FAILS };
 }

@@ -270,7 +270,9 @@ export function evaluateComposite(st: CompositeSetup, k: WShapeConstants, studs:
   take(ratioLive, 'deflectionLive');
   take(ratioTotal, 'deflectionTotal');
   take(ratioConstruction, 'construction');
-  take(ratioStuds, 'studs');
+  // The stud count sits at its minimum in most designs (ratio 1.0): a detailing limit, so it
+  // governs only when it is not met.
+  take(ratioStuds > 1 + 1e-12 ? ratioStuds : null, 'studs');
   const camber = st.camber && !st.shored ? camberIn(deflPreIn) : 0;
   return {
     k, studs, ev, evC, flex: flexAt, mrKipFt: mr, mcKipFt: mc, mnKipFt: mn, atFt, combo: comboIdx, studsToSection: studsTo,
