@@ -30,5 +30,7 @@ export function runPlanCommand(args: string[]): CommandOutcome {
   const result = designScheme(plan, { groupIdentical });
   const allProblems = [...problems, ...result.problems];
   const ok = result.members.every((m) => m.passes) && !allProblems.some((p) => p.severity === 'error');
-  return { json: planOutput({ ...result, problems: allProblems, repairs }, view), exitCode: ok ? EXIT_OK : EXIT_DESIGN_FAILS };
+  // calc-interface.md "Additions": studs, camber_in and percentComposite on every member (null where not composite).
+  const members = result.members.map((m) => ({ ...m, studs: m.studs ?? null, camber_in: m.camber_in ?? null, percentComposite: m.percentComposite ?? null }));
+  return { json: planOutput({ ...result, members, problems: allProblems, repairs }, view), exitCode: ok ? EXIT_OK : EXIT_DESIGN_FAILS };
 }

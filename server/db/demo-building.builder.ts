@@ -1,4 +1,16 @@
-import { PLAN_FORMAT, type Plan, type PlanMember, type PlanPolygon } from '../../shared/schemas/plan.schema';
+import { PLAN_FORMAT, type Plan, type PlanMember, type PlanPolygon, type PlanSlab } from '../../shared/schemas/plan.schema';
+
+/**
+ * The demo floors' slab (numbers of our own): lightweight concrete, 114 pcf, f'c = 3.5 ksi,
+ * 3¼ in. over a 3 in. deck with 6 in. average ribs at 12 in.; 46.1 psf concrete + 2.5 psf deck.
+ */
+export const DEMO_SLAB: PlanSlab = {
+  ribHeight_in: 3, toppingThickness_in: 3.25, ribAvgWidth_in: 6, ribSpacing_in: 12,
+  concreteWeight_pcf: 114, fc_ksi: 3.5, deckWeight_psf: 2.5, profile: 'BW-3.0-12',
+};
+
+/** The member the demo keeps non-composite on purpose (beside the stair, the engineer's choice). */
+export const DEMO_NON_COMPOSITE_MEMBER = 'L2-BC45';
 
 // A small parametric builder for the demo building (an invented clinic of Baywright's own):
 // a rectangular grid of bays, columns at every intersection through every level, girders on
@@ -124,6 +136,10 @@ export function buildDemoBuildingPlan(options: DemoBuildingOptions): Plan {
     }
   }
   decks.push({ id: 'R-deck', level: 'R', polygon: rect(0, 0, width, depth), spanDirection: 'y', zone: 'roof' });
+  // Floors: concrete on deck, designed composite; the roof is bare deck and stays bare steel.
+  for (const d of decks) if (d.level !== 'R') d.slab = { ...DEMO_SLAB };
+  const nonComposite = members.find((m) => m.id === DEMO_NON_COMPOSITE_MEMBER);
+  if (nonComposite) nonComposite.composite = false;
 
   // Cladding on the perimeter, one line load per bay so each lies along one member:
   // metal panel on studs, about 20 psf × 14 ft storey ≈ 0.28 klf (floors); parapet 0.15 klf (roof).
@@ -162,7 +178,10 @@ export function buildDemoBuildingPlan(options: DemoBuildingOptions): Plan {
     format: PLAN_FORMAT,
     version: 2,
     name: options.name,
-    designBasis: { method: 'LRFD', Fy_ksi: 50, liveLoadReduction: true, deflectionLimits: { live: 360, total: 240 } },
+    designBasis: {
+      method: 'LRFD', Fy_ksi: 50, liveLoadReduction: true, deflectionLimits: { live: 360, total: 240 },
+      composite: { enabled: true, studDiameter_in: 0.75, studFu_ksi: 65, minPercentComposite: 0.25, constructionLive_psf: 20, shored: false, camber: true, studEquivalentWeight_lb: 10 },
+    },
     grids,
     levels,
     columns,

@@ -46,6 +46,8 @@ export function tonnageInputOf(design: Record<string, unknown>): TonnageDesignIn
         span_ft: Number(m.span_ft) || 0,
         weight_plf: Number(m.weight_plf) || 0,
         ...(typeof m.endConnections === 'number' ? { endConnections: m.endConnections } : {}),
+        ...(typeof m.studs === 'number' ? { studs: m.studs } : {}),
+        ...(typeof m.camber_in === 'number' ? { camber_in: m.camber_in } : {}),
       }),
     ),
     totals: {

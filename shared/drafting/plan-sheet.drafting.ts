@@ -6,6 +6,7 @@
  * caution. The PDF (server/pdf) and the on-screen SVG (src/features/plan-sheet) both draw
  * this one model. Pure.
  */
+import { memberSizeLabel } from './member-label.drafting';
 import type { Plan, PlanGrid } from '../schemas/plan.schema';
 import { formatFeetInches, gridIntersectionLabel } from './grid-location.drafting';
 import { factoredReaction, type DesignMethod } from './schedule.drafting';
@@ -26,6 +27,9 @@ export interface SheetMember {
   kind: 'girder' | 'beam';
   level: string;
   shape: string | null;
+  /** Composite members: total studs and camber (in). */
+  studs?: number | null;
+  camber_in?: number | null;
   reactions: {
     start: { D_kip: number; L_kip: number; Lr_kip?: number; S_kip?: number };
     end: { D_kip: number; L_kip: number; Lr_kip?: number; S_kip?: number };
@@ -252,7 +256,7 @@ export function buildPlanSheet(input: PlanSheetInput): PlanSheet {
         weight: m.kind === 'girder' ? LINE_WEIGHTS.girder : LINE_WEIGHTS.beam,
         ref: m.id,
       });
-      const size = dm?.shape ?? m.shape ?? 'NOT SIZED';
+      const size = dm ? memberSizeLabel(dm.shape, dm.studs, dm.camber_in) : (m.shape ?? 'NOT SIZED');
       const mark = dm?.mark ?? m.mark ?? '';
       const angle = readingAngle(x1, y1, x2, y2);
       const rad = (angle * Math.PI) / 180;
@@ -574,7 +578,7 @@ function titleBlockPrimitives(out: SheetPrimitive[], input: PlanSheetInput, leve
     showReactions
       ? `End reactions R are ${method === 'LRFD' ? 'LRFD factored (1.2D+1.6L for floors)' : 'ASD service (D+L for floors)'}, kip. Unfactored D and L are in the schedule.`
       : 'End reactions: see the member schedule (unfactored D and L, and factored).',
-    'Camber and shear studs: none shown; composite design is not part of this sheet.',
+    'Composite members: size (total shear studs, 3/4 in. headed studs unless noted) and camber c, e.g. W18X35 (20) c=3/4"; studs uniformly spaced. Members without studs are non-composite.',
     'Dimensions are to grid lines.',
   ];
   notes.forEach((note, i) => {

@@ -130,8 +130,8 @@ export function scheduleRows(design: Pick<SchemeResult, 'members' | 'method'>, p
       ratio: m.ratio ?? null,
       passes: Boolean(m.passes),
       weight_plf: m.weight_plf,
-      camber_in: null,
-      studs: null,
+      camber_in: m.camber_in ?? null,
+      studs: m.studs ?? null,
     };
   });
   return rows.sort(

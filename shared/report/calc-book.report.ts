@@ -226,6 +226,17 @@ function memberSection(m: SchemeMember, others: string[], levelName: string, rea
       ['Span, ft', num(m.span_ft, 2)],
       ['Shape', d ? `${d.shape}${d.locked ? ' (locked)' : ' (selected, lightest passing)'}` : (m.shape ?? '—')],
       ['Self weight, plf', num(m.weight_plf, 0)],
+      ...(d?.composite
+        ? ([
+          ['Composite (AISC 360-16 Chapter I)', `${d.composite.studs} studs ${d.composite.studDiameter_in} in, ${Math.round(d.composite.percentComposite * 100)} % composite, PNA in the ${d.composite.PNA}`],
+          ['Effective width b, in (I3.1a)', num(d.composite.effectiveWidth_in, 1)],
+          ['Qn per stud, kip (Eq. I8-1)', `${num(d.composite.Qn_kip, 2)} (${d.composite.RgRpBasis})`],
+          ['ΣQn, kip; Y2, in', `${num(d.composite.sumQn_kip, 1)}; ${num(d.composite.Y2_in, 2)}`],
+          ['I_LB, in⁴ (Commentary Eq. C-I3-1)', num(d.composite.Ilb_in4, 0)],
+          ['Construction stage (bare steel)', `Mr ${num(d.composite.construction.Mr_kipft, 1)} / Mc ${num(d.composite.construction.Mc_kipft, 1)} kip-ft (${d.composite.construction.combination}, ${d.composite.construction.clause}), ratio ${num(d.composite.construction.ratio, 3)}`],
+          ['Wet-concrete deflection, in; camber, in', `${num(d.composite.preCompositeDeflection_in, 2)}; ${d.composite.camber_in > 0 ? num(d.composite.camber_in, 2) : 'none'} (${d.composite.camberBasis})`],
+        ] as [string, CalcCell][])
+        : m.compositeNote ? ([['Composite', `no: ${m.compositeNote}`]] as [string, CalcCell][]) : []),
       ['Tributary width, ft', num(m.tributaryWidth_ft, 2)],
       ['Tributary area, ft²', num(m.tributaryArea_ft2, 1)],
       ['AT for live load reduction, ft²', num(m.reducibleArea_ft2, 1)],

@@ -26,6 +26,39 @@ export const bracingSchema = z.union([
   z.object({ points_ft: z.array(num) }),
 ], { error: 'must be "continuous", "none" or { "points_ft": [...] }' });
 
+const positiveNum = num.positive({ error: 'must be a number greater than 0' });
+
+/** calc-interface.md "Additions": the optional `composite` object of `calc member`. */
+export const compositeMemberInputSchema = z
+  .object({
+    slab: z.object({
+      ribHeight_in: positiveNum,
+      toppingThickness_in: positiveNum,
+      ribAvgWidth_in: positiveNum,
+      ribSpacing_in: positiveNum,
+      concreteWeight_pcf: positiveNum,
+      fc_ksi: positiveNum,
+      deckWeight_psf: num.nonnegative({ error: 'must be a number ≥ 0' }),
+    }, { error: 'must be the slab build-up object' }).strict(),
+    effectiveWidth_in: positiveNum,
+    deckOrientation: z.enum(['perpendicular', 'parallel'], { error: 'must be "perpendicular" or "parallel"' }),
+    studsPerRib: z.number().int({ error: 'must be 1, 2 or 3' }).min(1, { error: 'must be 1, 2 or 3' }).max(3, { error: 'must be 1, 2 or 3' }).default(1),
+    studs: z.number().int({ error: 'must be a whole number or null' }).nonnegative({ error: 'must be a whole number ≥ 0 or null' }).nullable().default(null),
+    shored: z.boolean({ error: 'must be true or false' }).default(false),
+    constructionLoads: z.array(memberLoadSchema, { error: 'must be a list of loads' }).default([]),
+    constructionBracing: bracingSchema.optional(),
+    studDiameter_in: positiveNum.max(1, { error: 'must be at most 1 in' }).optional(),
+    studFu_ksi: positiveNum.optional(),
+    minPercentComposite: num.min(0, { error: 'must be between 0 and 1' }).max(1, { error: 'must be between 0 and 1' }).optional(),
+    camber: z.boolean({ error: 'must be true or false' }).optional(),
+    studEquivalentWeight_lb: num.nonnegative({ error: 'must be a number ≥ 0' }).optional(),
+    emidHt_in: positiveNum.nullable().optional(),
+  })
+  .strict()
+  .superRefine((c, ctx) => {
+    if (c.slab.ribAvgWidth_in > c.slab.ribSpacing_in) ctx.addIssue({ code: 'custom', path: ['slab', 'ribAvgWidth_in'], message: 'must not exceed ribSpacing_in' });
+  });
+
 export const memberDesignInputSchema = z
   .object({
     span_ft: num,
@@ -43,6 +76,9 @@ export const memberDesignInputSchema = z
     includeSelfWeight: z.boolean({ error: 'must be true or false' }).default(true),
     Lb_override_ft: num.nullable().optional(),
     liveLoadFactorHalf: z.boolean({ error: 'must be true or false' }).optional(),
+    totalDeflectionIncludes: z.enum(['deadAndLive', 'superimposedDeadAndLive'], { error: 'must be "deadAndLive" or "superimposedDeadAndLive"' }).optional(),
+    preCompositeDead: z.array(memberLoadSchema, { error: 'must be a list of loads' }).nullable().optional(),
+    composite: compositeMemberInputSchema.nullable().optional(),
   })
   .strict()
   .superRefine((input, ctx) => {

@@ -10,14 +10,30 @@ export interface UnitPrices {
   steel_usd_per_ton: number;
   /** US dollars per end connection, fabricated and erected. */
   connection_usd_each: number;
+  /** US dollars per shear stud, installed; absent = not priced. */
+  stud_usd_each?: number | null;
+  /** US dollars per cambered piece; absent = not priced. */
+  camber_usd_each?: number | null;
 }
 
 /** Items the estimate leaves out until they are priced. */
 export const NOT_YET_PRICED: readonly string[] = ['Shear studs', 'Camber'];
 
+/** The items of NOT_YET_PRICED that these prices still leave out. */
+export function notYetPriced(prices: Pick<UnitPrices, 'stud_usd_each' | 'camber_usd_each'>): string[] {
+  const out: string[] = [];
+  if (prices.stud_usd_each == null) out.push('Shear studs');
+  if (prices.camber_usd_each == null) out.push('Camber');
+  return out;
+}
+
 export interface CostBreakdown {
   steel_usd: number;
   connections_usd: number;
+  /** Studs × price each (0 when not priced). */
+  studs_usd: number;
+  /** Cambered pieces × price each (0 when not priced). */
+  camber_usd: number;
   cost_usd: number;
 }
 
@@ -25,10 +41,12 @@ function finiteOrZero(v: number): number {
   return Number.isFinite(v) ? v : 0;
 }
 
-export function estimateCost(t: Pick<TonnageFigures, 'steelWeight_lb' | 'connections'>, prices: UnitPrices): CostBreakdown {
+export function estimateCost(t: Pick<TonnageFigures, 'steelWeight_lb' | 'connections'> & Partial<Pick<TonnageFigures, 'studs' | 'camberedPieces'>>, prices: UnitPrices): CostBreakdown {
   const steel_usd = (finiteOrZero(t.steelWeight_lb) / LB_PER_TON) * finiteOrZero(prices.steel_usd_per_ton);
   const connections_usd = finiteOrZero(t.connections) * finiteOrZero(prices.connection_usd_each);
-  return { steel_usd, connections_usd, cost_usd: steel_usd + connections_usd };
+  const studs_usd = finiteOrZero(t.studs ?? 0) * finiteOrZero(prices.stud_usd_each ?? 0);
+  const camber_usd = finiteOrZero(t.camberedPieces ?? 0) * finiteOrZero(prices.camber_usd_each ?? 0);
+  return { steel_usd, connections_usd, studs_usd, camber_usd, cost_usd: steel_usd + connections_usd + studs_usd + camber_usd };
 }
 
 /** other − base for each figure; percent is relative to the base's steel weight. */

@@ -5,7 +5,9 @@
  *
  * Steel weight is Σ W_plf × span_ft over the members (the nominal weight per foot of the
  * shape times the member's span). Connection material (plates, angles, bolts, welds) is
- * excluded, as are columns, deck and studs.
+ * excluded, as are columns and deck. Shear studs and cambered pieces of composite members are
+ * counted beside the steel weight (studs are not steel weight here; selection's stud-equivalent
+ * weight is a design device, not tonnage).
  */
 
 /** Short ton (US customary): 2,000 lb. Common practice for steel tonnage in the US. */
@@ -16,7 +18,7 @@ export const END_CONNECTIONS_PER_MEMBER = 2;
 
 export const TONNAGE_BASIS =
   'Steel weight is the sum of shape weight × span for the beams and girders of the design ' +
-  '(W_plf × span_ft). Connection material, columns, deck and studs are excluded. ' +
+  '(W_plf × span_ft). Connection material, columns and deck are excluded; shear studs and cambered pieces are counted separately. ' +
   'Connections count two per member, one at each end. Tons are short tons of 2,000 lb.';
 
 export type MemberKind = 'girder' | 'beam';
@@ -36,6 +38,9 @@ export interface TonnageMemberInput {
    * it is not read here: counting it would count a beam-to-girder connection twice.
    */
   endConnections?: number;
+  /** Composite members: total shear studs and camber (in); null or absent where not composite. */
+  studs?: number | null;
+  camber_in?: number | null;
 }
 
 /** The design fields tonnage reads (the stored `calc plan` output). */
@@ -63,6 +68,10 @@ export interface TonnageFigures {
   floorArea_ft2: number;
   /** Members without a shape (not designed): their weight is the design's estimate. */
   unsizedPieces: number;
+  /** Shear studs on composite members. */
+  studs: number;
+  /** Members with a camber. */
+  camberedPieces: number;
 }
 
 export interface TonnageByLevel extends TonnageFigures {
@@ -97,10 +106,14 @@ function figures(members: TonnageMemberInput[], floorArea_ft2: number): TonnageF
   let steelWeight_lb = 0;
   let connections = 0;
   let unsizedPieces = 0;
+  let studs = 0;
+  let camberedPieces = 0;
   for (const m of members) {
     steelWeight_lb += memberSteelWeightLb(m);
     connections += memberEndConnections(m);
     if (!m.shape) unsizedPieces++;
+    if (typeof m.studs === 'number' && m.studs > 0) studs += m.studs;
+    if (typeof m.camber_in === 'number' && m.camber_in > 0) camberedPieces++;
   }
   const area = Number.isFinite(floorArea_ft2) && floorArea_ft2 > 0 ? floorArea_ft2 : 0;
   return {
@@ -111,6 +124,8 @@ function figures(members: TonnageMemberInput[], floorArea_ft2: number): TonnageF
     connections,
     floorArea_ft2: area,
     unsizedPieces,
+    studs,
+    camberedPieces,
   };
 }
 

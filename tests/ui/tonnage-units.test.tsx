@@ -15,6 +15,8 @@ function scheme(id: string, name: string, lb: number, status: ComparisonScheme['
     connections: 80,
     floorArea_ft2: 10_000,
     unsizedPieces: 0,
+    studs: 0,
+    camberedPieces: 0,
     cost_usd,
     steel_usd: cost_usd - 8000,
     connections_usd: 8000,

@@ -3,7 +3,8 @@
  * pressures times the tributary strip width, as stepped or trapezoidal line loads per
  * load case. Zones change between decks, so a member under two decks gets a stepped load.
  */
-import type { Plan, PlanDeck, PlanZone } from '../../schemas/plan.schema';
+import type { Plan, PlanDeck, PlanSlab, PlanZone } from '../../schemas/plan.schema';
+import { slabWeight } from './slab-weight.loads';
 import { planProblem, type PlanProblem } from '../../schemas/plan-problem.schema';
 import { SUPPORT_TOLERANCE_FT, type FramingMember, type FramingTopology } from '../geometry/framing-topology.geometry';
 import { deckOverlapProblems } from '../geometry/polygon-overlap.geometry';
@@ -42,10 +43,22 @@ export interface ZonePressure {
  * (§4.7.3) and the level is not a roof (roof levels: conservative, no §4.7 reduction).
  * Partitions are live, never reduced (design-basis §1).
  */
-export function zonePressures(zone: PlanZone, roof: boolean): ZonePressure[] {
+export function zonePressures(zone: PlanZone, roof: boolean, slab?: PlanSlab): ZonePressure[] {
   const out: ZonePressure[] = [];
-  const dead = zone.dead_psf + zone.superimposedDead_psf;
-  if (dead !== 0) out.push({ case: 'D', psf: dead, reducible: false, label: `dead ${zone.dead_psf} + superimposed ${zone.superimposedDead_psf} psf` });
+  if (slab) {
+    // calc-interface.md "Additions": a deck's slab build-up gives the slab weight and replaces the zone's dead_psf.
+    const w = slabWeight(slab);
+    const dead = w.total_psf + zone.superimposedDead_psf;
+    if (dead !== 0) {
+      out.push({
+        case: 'D', psf: dead, reducible: false,
+        label: `slab ${w.total_psf.toFixed(1)} psf from the build-up (in place of the zone's ${zone.dead_psf}) + superimposed ${zone.superimposedDead_psf} psf`,
+      });
+    }
+  } else {
+    const dead = zone.dead_psf + zone.superimposedDead_psf;
+    if (dead !== 0) out.push({ case: 'D', psf: dead, reducible: false, label: `dead ${zone.dead_psf} + superimposed ${zone.superimposedDead_psf} psf` });
+  }
   if (zone.live_psf !== 0) {
     const reducible = zone.liveReducible && zone.live_psf <= MAX_REDUCIBLE_LIVE_PSF && !roof;
     out.push({ case: 'L', psf: zone.live_psf, reducible, label: `live ${zone.live_psf} psf${reducible ? '' : ', not reducible'}` });
@@ -159,7 +172,7 @@ const isUniform = (w1: number, w2: number) => Math.abs(w1 - w2) <= 1e-12 * Math.
 
 /** Member loads from one deck's strips: per zone pressure, a line load over each strip. */
 export function deckStripLoads(ctx: DeckContext, sink: (memberId: string, load: TakedownLoad) => void, areaSink: (memberId: string, load: AreaLoad) => void): void {
-  const pressures = zonePressures(ctx.zone, ctx.roof);
+  const pressures = zonePressures(ctx.zone, ctx.roof, ctx.deck.slab);
   const anyReducible = pressures.some((p) => p.reducible);
   const sourcesByWidth: SourcesByWidth = new Map();
   for (const strip of ctx.tributary.strips) {

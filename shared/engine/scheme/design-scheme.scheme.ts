@@ -20,6 +20,8 @@ import { planGeometry, type PlanGeometry, type PlanGeometryMemo } from './plan-g
 import { lockedShapeWeightPlf, reducedLiveKip, runTakedown, type EndReaction, type MemberTakedown, type TakedownResult } from '../takedown/gravity-takedown.takedown';
 import type { Bracing } from '../takedown/member-bracing.takedown';
 import { assignMarks, sharedMarkConflicts, type MarkInput } from './member-marks.scheme';
+import { compositeMemberInput, compositeSites, planNeedsWetStage, wetStagePlan, type MemberCompositeStatus } from './composite-plan.scheme';
+import type { CompositeMemberInput } from '../sizing/member-design.types';
 
 export interface SchemeOptions {
   /** Members of the same level, kind, span, load layout and bracing get one size: the heaviest demand governs. */
@@ -68,6 +70,22 @@ export interface SchemeMember {
   bracing: Bracing;
   connections: number;
   design: MemberDesignResult | null;
+  /** calc-interface.md "Additions": total studs, camber (in) and ΣQn / full composite; null where not composite. */
+  /** Present only on plans with a wet-concrete stage (composite or the superimposed-dead deflection setting), so version 1 results are unchanged; `calc plan` always writes them. */
+  studs?: number | null;
+  camber_in?: number | null;
+  percentComposite?: number | null;
+  /** Why the member is bare steel (composite off, marked non-composite, no slab), or null when composite. */
+  compositeNote?: string | null;
+  /** The composite and pre-composite parts of the design input (for re-checks on the member sheet). */
+  designExtras?: MemberDesignExtras | null;
+}
+
+/** What a plan adds to a member's design input beyond memberDesignInput (composite, total deflection setting). */
+export interface MemberDesignExtras {
+  composite: CompositeMemberInput | null;
+  totalDeflectionIncludes: 'deadAndLive' | 'superimposedDeadAndLive';
+  preCompositeDead: MemberLoad[];
 }
 
 export interface SchemeColumnLevel {
@@ -224,7 +242,7 @@ class DesignTable {
   }
 
   /** Fills the scratch key for this input. */
-  static keyOf(plan: Plan, mt: MemberTakedown, shape: string | null, loads: readonly MemberLoad[]): void {
+  static keyOf(plan: Plan, mt: MemberTakedown, shape: string | null, loads: readonly MemberLoad[], extra = ''): void {
     const push = DesignTable.push;
     DesignTable.length = 0;
     const m = mt.member;
@@ -284,7 +302,7 @@ class DesignTable {
       h = Math.imul(h ^ (v | 0), 0x01000193);
       h = Math.imul(h ^ ((v / 4294967296) | 0), 0x01000193);
     }
-    DesignTable.shape = shape ?? '';
+    DesignTable.shape = (shape ?? '') + extra;
     DesignTable.hash = h;
   }
 
@@ -333,24 +351,46 @@ function groupKey(mt: MemberTakedown): string {
   return [mt.level, mt.kind, mt.span_ft.toFixed(2), JSON.stringify(mt.bracing), mt.member.shape ?? '', layout].join('|');
 }
 
+/** The wet-concrete stage of a plan: composite sites and the construction takedown. */
+interface WetStage {
+  sites: Map<string, MemberCompositeStatus>;
+  takedown: TakedownResult;
+}
+
 /** One design pass: the takedown with each member sized as it is reached. */
 class DesignPass {
   readonly designs = new Map<string, DesignEntry>();
   readonly loadsOf = new Map<string, MemberLoad[]>();
+  readonly extrasOf = new Map<string, MemberDesignExtras>();
 
   constructor(
     private readonly plan: Plan,
     private readonly table: DesignTable,
     private readonly previous: DesignTable | null,
     private readonly forced: Map<string, string>,
+    private readonly wet: WetStage | null = null,
   ) {}
+
+  private extrasFor(mt: MemberTakedown): MemberDesignExtras | null {
+    if (!this.wet) return null;
+    const wmt = this.wet.takedown.members.get(mt.id);
+    const construction = wmt ? designLoads(wmt) : [];
+    const status = this.wet.sites.get(mt.id);
+    return {
+      composite: status?.composite ? compositeMemberInput(this.plan, status.site, construction, mt.framingPoints_ft, mt.member.studs ?? null) : null,
+      totalDeflectionIncludes: this.plan.designBasis.totalDeflectionIncludes ?? 'deadAndLive',
+      preCompositeDead: construction.filter((l) => l.case === 'D'),
+    };
+  }
 
   /** The takedown's self-weight hook: size the member, return its weight (plf). */
   readonly selfWeight = (mt: MemberTakedown): number => {
     const loads = designLoads(mt);
     this.loadsOf.set(mt.id, loads);
     const shape = this.forced.get(mt.id) ?? mt.member.shape;
-    DesignTable.keyOf(this.plan, mt, shape, loads);
+    const extras = this.extrasFor(mt);
+    if (extras) this.extrasOf.set(mt.id, extras);
+    DesignTable.keyOf(this.plan, mt, shape, loads, extras ? `|${JSON.stringify(extras)}` : '');
     let result = this.table.get();
     if (!result && this.previous) {
       result = this.previous.get();
@@ -358,7 +398,7 @@ class DesignPass {
     }
     if (!result) {
       try {
-        result = designMember(memberDesignInput(this.plan, mt, this.forced.get(mt.id) ?? null, loads));
+        result = designMember({ ...memberDesignInput(this.plan, mt, this.forced.get(mt.id) ?? null, loads), ...(extras ?? {}) });
       } catch (e) {
         if (!(e instanceof MemberInputError)) throw e;
         result = { error: [e.message, ...e.problems] };
@@ -382,8 +422,23 @@ export function designScheme(plan: Plan, options: SchemeOptions = {}): SchemeRes
   const previous = memo?.designs ?? null;
 
   const forced = new Map<string, string>();
-  let pass = new DesignPass(plan, table, previous, forced);
+  // Composite plans (and the superimposed-dead total deflection setting) need the wet-concrete
+  // stage: a takedown of the wet slab and construction live on the same framing. Its girders
+  // carry the beams' self weight, so it is run with locked weights first, then again with the
+  // sizes of the first design pass (beams' inputs do not change, so only girders re-design).
+  let wet: WetStage | null = null;
+  const wetPlan = planNeedsWetStage(plan) ? wetStagePlan(plan) : null;
+  const sites = wetPlan ? compositeSites(plan, geometry.topology) : null;
+  const wetTakedown = (weight: (mt: MemberTakedown) => number) => runTakedown(wetPlan!, { topology: geometry.topology, selfWeight: weight });
+  if (wetPlan) wet = { sites: sites!, takedown: wetTakedown((mt) => lockedShapeWeightPlf(mt.member)) };
+  let pass = new DesignPass(plan, table, previous, forced, wet);
   let takedown = pass.run(geometry);
+  if (wetPlan) {
+    const first = pass.designs;
+    wet = { sites: sites!, takedown: wetTakedown((mt) => { const d = first.get(mt.id); return d && !('error' in d) ? d.weight_plf : lockedShapeWeightPlf(mt.member); }) };
+    pass = new DesignPass(plan, table, previous, forced, wet);
+    takedown = pass.run(geometry);
+  }
 
   if (options.groupIdentical) {
     // Fixed point: a group's size changes its members' self weight, hence their supporters' loads.
@@ -418,12 +473,12 @@ export function designScheme(plan: Plan, options: SchemeOptions = {}): SchemeRes
       if (same) break;
       forced.clear();
       nextForced.forEach((v, k) => forced.set(k, v));
-      pass = new DesignPass(plan, table, previous, forced);
+      pass = new DesignPass(plan, table, previous, forced, wet);
       takedown = pass.run(geometry);
     }
   }
 
-  const result = buildSchemeResult(plan, takedown, pass.designs, pass.loadsOf);
+  const result = buildSchemeResult(plan, takedown, pass.designs, pass.loadsOf, pass.extrasOf, sites);
   const next: SchemeMemo = { designs: table, geometry };
   Object.defineProperty(result, CACHE, { value: next, enumerable: false });
   return result;
@@ -455,7 +510,10 @@ function reportedLoads(mt: MemberTakedown, designed: MemberLoad[] | undefined): 
   return out;
 }
 
-function buildSchemeResult(plan: Plan, takedown: TakedownResult, designs: Map<string, DesignEntry>, loadsOf: Map<string, MemberLoad[]>): SchemeResult {
+function buildSchemeResult(
+  plan: Plan, takedown: TakedownResult, designs: Map<string, DesignEntry>, loadsOf: Map<string, MemberLoad[]>,
+  extrasOf: Map<string, MemberDesignExtras> = new Map(), sites: Map<string, MemberCompositeStatus> | null = null,
+): SchemeResult {
   const problems: PlanProblem[] = [...takedown.problems];
   const fileOrder = plan.members.filter((m) => takedown.members.has(m.id));
   const markInputs: MarkInput[] = fileOrder.map((m) => {
@@ -496,7 +554,7 @@ function buildSchemeResult(plan: Plan, takedown: TakedownResult, designs: Map<st
     } else if (design && !design.passes) {
       problems.push(planProblem('error', 'member-fails', `Member ${m.id}: ${design.failure ?? 'does not pass'}`, { elementId: m.id }));
     }
-    return {
+    const member: SchemeMember = {
       id: m.id,
       mark: marks.get(m.id) ?? '',
       kind: m.kind,
@@ -522,6 +580,15 @@ function buildSchemeResult(plan: Plan, takedown: TakedownResult, designs: Map<st
       connections: 2 + mt.framingPoints_ft.length,
       design,
     };
+    if (sites) {
+      const status = sites.get(m.id);
+      member.studs = design?.composite ? design.composite.studs : null;
+      member.camber_in = design?.composite ? design.composite.camber_in : null;
+      member.percentComposite = design?.composite ? design.composite.percentComposite : null;
+      member.compositeNote = status && !status.composite ? status.reason : null;
+      member.designExtras = extrasOf.get(m.id) ?? null;
+    }
+    return member;
   });
 
   // One pass; each sum sees its members in file order, as summing each filtered list would.

@@ -73,6 +73,8 @@ export interface MemberContext {
   totalMaxNoSwEI: number;
   /** Unit self-weight EI·y at the location of totalMaxNoSwEI (for a lower bound with self weight). */
   deflUnitAtTotalMax: number;
+  /** Total deflection is superimposed dead + live: self weight and the pre-composite dead are left out. */
+  totalExcludesPreComposite: boolean;
 }
 
 function ascending(a: number, b: number): number { return a - b; }
@@ -223,12 +225,21 @@ export function buildMemberContext(input: MemberDesignInput): MemberContext {
     }
   }
 
+  // design-basis §5 setting: total = superimposed dead + live leaves out the dead load in place
+  // before the concrete hardens (given as preCompositeDead) and the self weight.
+  const pre = input.preCompositeDead;
+  const totalExcludesPreComposite = input.totalDeflectionIncludes === 'superimposedDeadAndLive' && !!pre && pre.length > 0;
+  if (totalExcludesPreComposite) {
+    const s = toSpanLoading(L, pre!);
+    for (let i = 0; i <= N; i++) deflTotalBase[i] -= deflectionEIKipFt3(s, deflX[i]);
+  }
   const totMax = refinedMax(deflTotalBase, deflX);
   const ctx: MemberContext = {
     input, spanFt: L, method: input.method, fyKsi: input.Fy_ksi, includeSelfWeight: input.includeSelfWeight,
     casesPresent, caseLoading, caseReactions, combos, xs, v1, m1, segments, m1Seg,
     deflX, deflUnit, deflTotalBase, liveMaxEI, liveMaxAtFt, liveCase,
     mMaxNoSwKipFt: 0, vMaxNoSwKip: 0, totalMaxNoSwEI: totMax.value, deflUnitAtTotalMax: uniformDeflectionEI(1, L, totMax.at),
+    totalExcludesPreComposite,
   };
   for (const c of combos) {
     const mx = maxMomentOfCombination(ctx, c, 0);

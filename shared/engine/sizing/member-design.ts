@@ -1,4 +1,5 @@
 import { shapeConstantsByWeight, shapeConstantsFor, type WShapeConstants } from '../design/aisc360/w-shape-constants';
+import { designCompositeMember } from './composite-design';
 import { buildMemberContext, type MemberContext } from './member-context';
 import type { AlternativeShape, MemberDesignInput, MemberDesignResult } from './member-design.types';
 import { assertValidMemberInput, MemberInputError } from './member-input.validation';
@@ -63,6 +64,15 @@ export function selectLightest(ctx: MemberContext, candidates: readonly WShapeCo
 /** AISC 360-16 member design of a simple span: check a locked shape, or select the lightest passing one. */
 export function designMember(input: MemberDesignInput): MemberDesignResult {
   assertValidMemberInput(input);
+  if (input.composite) {
+    const candidates = candidateShapes(input);
+    if (!input.shape && candidates.length === 0) {
+      throw new MemberInputError('no catalog shape satisfies the depth constraints', [
+        `maxDepth_in: no W-shape in AISC Shapes Database v15.0 is left${constraintText(input)}`,
+      ]);
+    }
+    return designCompositeMember(input, () => candidates);
+  }
   const ctx = buildMemberContext(input);
   if (input.shape) {
     const k = shapeConstantsFor(input.shape, input.Fy_ksi)!;

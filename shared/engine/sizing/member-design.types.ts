@@ -27,9 +27,97 @@ export interface MemberDesignInput {
   Lb_override_ft?: number | null;
   /** LRFD 0.5L permitted (ASCE 7-16 §2.3.1 exception 1); default false. */
   liveLoadFactorHalf?: boolean;
+  /**
+   * What total deflection includes (design-basis §5, a project setting): all loads (default), or
+   * superimposed dead + live, which leaves out self weight and `preCompositeDead` (the slab and
+   * deck in place before the concrete hardens; a camber takes them out). Without
+   * `preCompositeDead` nothing is left out (the conservative reading).
+   */
+  totalDeflectionIncludes?: 'deadAndLive' | 'superimposedDeadAndLive';
+  preCompositeDead?: MemberLoad[] | null;
+  /** Composite design (AISC 360-16 Chapter I); absent = bare steel. */
+  composite?: CompositeMemberInput | null;
 }
 
-export type CheckName = 'flexure' | 'shear' | 'deflectionLive' | 'deflectionTotal';
+/** calc-interface.md "Additions": the `composite` object of `calc member` input (+ added fields). */
+export interface CompositeMemberInput {
+  slab: {
+    ribHeight_in: number; toppingThickness_in: number; ribAvgWidth_in: number; ribSpacing_in: number;
+    concreteWeight_pcf: number; fc_ksi: number; deckWeight_psf: number;
+  };
+  effectiveWidth_in: number;
+  deckOrientation: 'perpendicular' | 'parallel';
+  studsPerRib?: number;
+  /** Null designs the studs; a count (total on the member) is checked. */
+  studs?: number | null;
+  shored?: boolean;
+  /** Loads on the bare steel before the concrete hardens (wet concrete and deck as D, construction live as L); self weight is added. */
+  constructionLoads: MemberLoad[];
+  /** Bracing of the bare steel at the construction stage; default: perpendicular deck braces continuously, parallel deck braces only where members frame in (`bracing` of the input unless that is continuous, then none). */
+  constructionBracing?: Bracing;
+  studDiameter_in?: number;
+  studFu_ksi?: number;
+  minPercentComposite?: number;
+  camber?: boolean;
+  /** Steel weight one stud counts as in selection, lb (common practice about 10). */
+  studEquivalentWeight_lb?: number;
+  /** Distance from mid-height of the deck rib to the stud (I8.2a); null = unknown, Rp = 0.6. */
+  emidHt_in?: number | null;
+  /** Clause of the effective width and its working, for the report (from the plan framing). */
+  effectiveWidthBasis?: string;
+}
+
+/** calc-interface.md "Additions": the `composite` object of the output (+ added working). */
+export interface CompositeResult {
+  studs: number;
+  percentComposite: number;
+  Qn_kip: number;
+  sumQn_kip: number;
+  Y2_in: number;
+  PNA: 'slab' | 'flange' | 'web';
+  Mn_kipft: number;
+  Mc_kipft: number;
+  Ilb_in4: number;
+  deflectionLive_in: number;
+  construction: { Mr_kipft: number; Mc_kipft: number; ratio: number; deflection_in: number; Lb_ft: number; Cb: number; combination: string; clause: string; shearRatio: number };
+  camber_in: number;
+  // working
+  effectiveWidth_in: number;
+  deckOrientation: 'perpendicular' | 'parallel';
+  studsPerRib: number;
+  studDiameter_in: number;
+  Ec_ksi: number;
+  Ac_in2: number;
+  a_in: number;
+  C_kip: number;
+  Cconcrete_kip: number;
+  Csteel_kip: number;
+  Cgoverns: 'concrete' | 'steel' | 'studs';
+  PNA_depth_in: number;
+  Rg: number;
+  Rp: number;
+  RgRpBasis: string;
+  QnConcrete_kip: number;
+  QnAnchor_kip: number;
+  minStuds: number;
+  maxStuds: number;
+  spacing_in: number;
+  spacingLimits_in: { min: number; max: number };
+  minPercentComposite: number;
+  Yena_in: number;
+  shored: boolean;
+  camberBasis: string;
+  preCompositeDeflection_in: number;
+  deflectionTotal_in: number;
+  totalDeflectionIncludes: 'deadAndLive' | 'superimposedDeadAndLive';
+  /** Studs from each support to the critical section, and that section (concentrated loads). */
+  criticalSection_ft: number;
+  studsToCriticalSection: number;
+  equivalentWeight_lb: number;
+  notes: string[];
+}
+
+export type CheckName = 'flexure' | 'shear' | 'deflectionLive' | 'deflectionTotal' | 'construction' | 'studs';
 
 /** One check with the working a report prints. Units: kip-ft, kip, in, ksi, ft. */
 export interface MemberCheck {
@@ -40,7 +128,7 @@ export interface MemberCheck {
   demand: number;
   capacity: number;
   ratio: number;
-  unit: 'kip-ft' | 'kip' | 'in';
+  unit: 'kip-ft' | 'kip' | 'in' | 'count';
   limitState?: string;
   method?: 'LRFD' | 'ASD';
   phi?: number;
@@ -131,6 +219,8 @@ export interface MemberDesignResult {
   maxMoment: { M_kipft: number; x_ft: number };
   standards: string[];
   caution: string;
+  /** Present when designed composite (AISC 360-16 Chapter I). */
+  composite?: CompositeResult;
 }
 
 export interface DiagramSeries {

@@ -12,6 +12,7 @@ export const CAUTION =
 
 const CHECK_LABEL: Record<string, string> = {
   flexure: 'flexure', shear: 'shear', deflectionLive: 'live-load deflection', deflectionTotal: 'total-load deflection',
+  construction: 'construction-stage flexure (bare steel)', studs: 'stud count and spacing',
 };
 
 /** "flexure (AISC 360-16 F2.2, 1.2D+1.6L)": the governing check of a built result, in words. */
@@ -60,7 +61,7 @@ export function buildMemberResult(ctx: MemberContext, ev: ShapeEvaluation, locke
     });
   }
   if (lim.total != null) {
-    const name = ctx.casesPresent.join('+');
+    const name = ctx.totalExcludesPreComposite ? ['superimposed D', ...ctx.casesPresent.filter((c) => c !== 'D')].join('+') : ctx.casesPresent.join('+');
     checks.push({
       name: 'deflectionTotal', clause: DEFLECTION_CLAUSE, equation: `Δ ≤ L/${lim.total}`,
       combination: name, demand: ev.deflTotalIn, capacity: deflectionLimitIn(ctx.spanFt, lim.total), ratio: ev.ratioTotal!,

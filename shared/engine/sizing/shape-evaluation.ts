@@ -73,7 +73,7 @@ export function mayPass(ctx: MemberContext, k: WShapeConstants): boolean {
   const lim = ctx.input.deflectionLimits;
   const spanIn = ctx.spanFt * IN_PER_FT;
   if (lim.live != null && deflectionIn(ctx.liveMaxEI, k.ixIn4) > (slack * spanIn) / lim.live) return false;
-  const yLow = ctx.totalMaxNoSwEI + w * ctx.deflUnitAtTotalMax;
+  const yLow = ctx.totalMaxNoSwEI + (ctx.totalExcludesPreComposite ? 0 : w) * ctx.deflUnitAtTotalMax;
   if (lim.total != null && deflectionIn(yLow, k.ixIn4) > (slack * spanIn) / lim.total) return false;
   return true;
 }
@@ -130,13 +130,14 @@ export function evaluateShape(ctx: MemberContext, k: WShapeConstants, detail: bo
   const deflLiveIn = deflectionIn(ctx.liveMaxEI, k.ixIn4);
   let deflTotalIn: number;
   let deflTotalAtFt: number;
-  if (wKlf === 0) {
+  const wTotalKlf = ctx.totalExcludesPreComposite ? 0 : wKlf;
+  if (wTotalKlf === 0) {
     deflTotalIn = deflectionIn(ctx.totalMaxNoSwEI, k.ixIn4);
     deflTotalAtFt = refinedMax(ctx.deflTotalBase, ctx.deflX).at;
   } else {
     if (scratch.length !== ctx.deflX.length) scratch = ctx.deflX.slice();
     const y = scratch;
-    for (let i = 0; i < y.length; i++) y[i] = ctx.deflTotalBase[i] + wKlf * ctx.deflUnit[i];
+    for (let i = 0; i < y.length; i++) y[i] = ctx.deflTotalBase[i] + wTotalKlf * ctx.deflUnit[i];
     const mx = refinedMax(y, ctx.deflX);
     deflTotalIn = deflectionIn(mx.value, k.ixIn4);
     deflTotalAtFt = mx.at;

@@ -251,7 +251,7 @@ function deckAppliedLoads(decks: readonly DeckContext[]): { applied: CaseTotals;
     const area = ctx.tributary.netArea_ft2;
     total += area;
     byLevel.set(ctx.deck.level, (byLevel.get(ctx.deck.level) ?? 0) + area);
-    for (const p of zonePressures(ctx.zone, ctx.roof)) applied[p.case] += (p.psf * area) / 1000;
+    for (const p of zonePressures(ctx.zone, ctx.roof, ctx.deck.slab)) applied[p.case] += (p.psf * area) / 1000;
   }
   return { applied, byLevel, total };
 }

@@ -10,13 +10,21 @@ const CHECK_TITLE: Record<MemberCheck['name'], string> = {
   shear: 'Shear',
   deflectionLive: 'Live-load deflection',
   deflectionTotal: 'Total-load deflection',
+  construction: 'Construction stage (bare steel)',
+  studs: 'Studs',
 };
 
-const KIND_OF_UNIT: Record<MemberCheck['unit'], QuantityKind> = { 'kip-ft': 'moment_kipft', kip: 'force_kip', in: 'length_in' };
+const KIND_OF_UNIT: Record<Exclude<MemberCheck['unit'], 'count'>, QuantityKind> = { 'kip-ft': 'moment_kipft', kip: 'force_kip', in: 'length_in' };
+
+/** A check's demand or capacity in its unit (a stud count is a plain number). */
+function checkValue(c: MemberCheck, v: number, units: UnitSystem): string {
+  return c.unit === 'count' ? String(Math.round(v)) : formatQuantity(KIND_OF_UNIT[c.unit], v, units);
+}
 
 function symbols(check: MemberCheck, method: 'LRFD' | 'ASD'): { demand: string; capacity: string } {
   const lrfd = method === 'LRFD';
-  if (check.name === 'flexure') return lrfd ? { demand: 'Mu', capacity: 'φbMn' } : { demand: 'Ma', capacity: 'Mn/Ωb' };
+  if (check.name === 'studs') return { demand: 'N min', capacity: 'N' };
+  if (check.name === 'flexure' || check.name === 'construction') return lrfd ? { demand: 'Mu', capacity: 'φbMn' } : { demand: 'Ma', capacity: 'Mn/Ωb' };
   if (check.name === 'shear') return lrfd ? { demand: 'Vu', capacity: 'φvVn' } : { demand: 'Va', capacity: 'Vn/Ωv' };
   return { demand: 'Δ', capacity: `L/${check.limit_n ?? '?'}` };
 }
@@ -127,7 +135,6 @@ export function MemberChecksTable({ design, units }: ChecksProps) {
         {design.checks.map((c) => {
           const governs = c.name === design.governing;
           const sym = symbols(c, design.method);
-          const kind = KIND_OF_UNIT[c.unit];
           const isOpen = open[c.name] ?? false;
           const workingId = `working-${c.name}`;
           return (
@@ -149,11 +156,11 @@ export function MemberChecksTable({ design, units }: ChecksProps) {
                 <td className="figures whitespace-nowrap py-2 pr-3 font-mono">{c.combination}</td>
                 <td className="figures whitespace-nowrap py-2 pr-3 text-right font-mono">
                   <span className="text-ink-faint">{sym.demand} </span>
-                  {formatQuantity(kind, c.demand, units)}
+                  {checkValue(c, c.demand, units)}
                 </td>
                 <td className="figures whitespace-nowrap py-2 pr-3 text-right font-mono">
                   <span className="text-ink-faint">{sym.capacity} </span>
-                  {formatQuantity(kind, c.capacity, units)}
+                  {checkValue(c, c.capacity, units)}
                 </td>
                 <td className="whitespace-nowrap py-2 pr-3 text-right">
                   <UtilisationChip ratio={c.ratio} />

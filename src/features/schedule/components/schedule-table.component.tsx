@@ -14,7 +14,7 @@ import {
 } from '@tanstack/react-table';
 import { useMemo, useState } from 'react';
 import { UtilisationChip } from '../../../components/ui/utilisation-chip.ui';
-import { formatValue, unitLabel, type UnitSystem } from '../../../lib/units';
+import { formatQuantity, formatValue, unitLabel, type UnitSystem } from '../../../lib/units';
 import { compareMarks, type ScheduleBasis, type ScheduleRow } from '../../../../shared/drafting/schedule.drafting';
 import { ColumnChooser, type ChoosableColumn } from './column-chooser.component';
 
@@ -170,8 +170,12 @@ export function ScheduleTable({ rows, levels, basis, units, mayEditMarks, onSave
         aggregationFn: 'max',
         cell: (c) => (c.getValue() >= 0 ? <UtilisationChip ratio={c.getValue()} showLabel={false} /> : dash),
       }),
-      col.accessor('camber_in', { header: `Camber (${unitLabel('length_in', units)})`, cell: () => dash, enableSorting: false }),
-      col.accessor('studs', { header: 'Studs', cell: () => dash, enableSorting: false }),
+      col.accessor('camber_in', {
+        header: `Camber (${unitLabel('length_in', units)})`,
+        cell: (c) => (c.getValue() ? formatQuantity('length_in', c.getValue()!, units) : dash),
+        enableSorting: false,
+      }),
+      col.accessor('studs', { header: 'Studs', cell: (c) => (c.getValue() != null ? String(c.getValue()) : dash), enableSorting: false }),
       col.accessor('levelName', { id: 'level', header: 'Level', filterFn: (row, _id, value) => !value || row.original.level === value }),
       col.accessor('kind', { header: 'Kind', filterFn: (row, _id, value) => !value || row.original.kind === value }),
     ];

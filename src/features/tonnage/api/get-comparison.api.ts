@@ -13,6 +13,8 @@ const figures = z.object({
   connections: z.number(),
   floorArea_ft2: z.number(),
   unsizedPieces: z.number(),
+  studs: z.number().default(0),
+  camberedPieces: z.number().default(0),
   cost_usd: z.number().nullable(),
   steel_usd: z.number().nullable(),
   connections_usd: z.number().nullable(),

@@ -94,6 +94,8 @@ function SchemeCard({
           </Figure>
           <Figure label="Pieces">{int.format(t.pieces)}</Figure>
           <Figure label="Connections">{int.format(t.connections)}</Figure>
+          <Figure label="Shear studs">{int.format(t.studs)}</Figure>
+          <Figure label="Cambered pieces">{int.format(t.camberedPieces)}</Figure>
           <Figure label="Estimated cost" strong>
             {t.cost_usd === null ? 'not priced' : formatEstimateUsd(t.cost_usd)}
           </Figure>
