@@ -8,6 +8,7 @@ import { calcBookRoutes } from './calc-book.routes';
 import { comparisonRoutes } from './comparison.routes';
 import { firmsRoutes } from './firms.routes';
 import { healthRoutes } from './health.routes';
+import { ifcExportRoutes } from './ifc-export.routes';
 import { invitationsRoutes } from './invitations.routes';
 import { marksRoutes } from './marks.routes';
 import { notificationsRoutes } from './notifications.routes';
@@ -44,6 +45,8 @@ export function apiRoutes(ctx: AppContext): Router {
   api.use('/schemes', scheduleRoutes(ctx));
   api.use('/schemes', planSheetRoutes(ctx));
   api.use('/schemes', calcBookRoutes(ctx));
+  // Models out (issue 14): the framing as IFC4.
+  api.use('/schemes', ifcExportRoutes(ctx));
   // Review (issue 7): status, comments, activity; Tonnage comparison; firm unit prices.
   api.use('/schemes', schemeStatusRoutes(ctx));
   api.use('/schemes', schemeCommentsRoutes(ctx));

@@ -9,6 +9,7 @@ import { ACTIONS, actionForKey, dispatch, keyOf, type ActionId } from '../action
 import { savePlan } from '../api/save-plan.api';
 import { PlanCanvas, type PlanViewArgs } from '../canvas/plan-canvas.component';
 import { LiveDesign } from '../design/live-design';
+import { keepIssuedMarks } from '../design/issued-marks';
 import { MemberList } from '../members/member-list.component';
 import { createEditorStore, type EditorStore } from '../store/editor.store';
 import { PlanAutosave, type AutosaveSnapshot } from '../sync/plan-autosave';
@@ -37,6 +38,17 @@ export interface DesignBasisSlotArgs {
   submit: (next: Plan['designBasis']) => void;
 }
 
+export interface BuildingViewSlotArgs {
+  plan: Plan;
+  /** The live design of the plan (null until the first one arrives). */
+  result: SchemeResult | null;
+  selection: readonly string[];
+  /** Selects a plan element (a member or column) on its level, as a click on the Plan would; null clears. */
+  select: (piece: { elementId: string; level: string } | null) => void;
+}
+
+export type PlanEditorView = 'plan' | 'building';
+
 export interface PlanEditorProps {
   schemeId: string;
   schemeName: string;
@@ -54,6 +66,10 @@ export interface PlanEditorProps {
   renderUnderlayPanel?: (levelId: string) => ReactNode;
   /** Underlay images (Konva nodes) for the level shown, under the plan. */
   renderUnderlayImages?: (levelId: string, view: PlanViewArgs) => ReactNode;
+  /** The 3D Building view (composed by the page); offers the Plan / Building switch. */
+  renderBuildingView?: (args: BuildingViewSlotArgs) => ReactNode;
+  initialView?: PlanEditorView;
+  onViewChange?: (view: PlanEditorView) => void;
   /** Save function (tests pass their own); defaults to PUT /api/schemes/:id/plan. */
   save?: typeof savePlan;
 }
@@ -92,6 +108,12 @@ export function PlanEditor(props: PlanEditorProps) {
   const [recovered, setRecovered] = useState(() => autosave.readLocalDraft());
   const [showBasis, setShowBasis] = useState(false);
   const [showUnderlay, setShowUnderlay] = useState(false);
+  const [view, setView] = useState<PlanEditorView>(props.renderBuildingView ? (props.initialView ?? 'plan') : 'plan');
+  const building = view === 'building' && !!props.renderBuildingView;
+  const changeView = (next: PlanEditorView) => {
+    setView(next);
+    propsRef.current.onViewChange?.(next);
+  };
 
   // Design after every change of the plan; publish the edit → sizes time for tests and the status line.
   useEffect(() => {
@@ -108,9 +130,11 @@ export function PlanEditor(props: PlanEditorProps) {
       previous = s.plan;
       design.request(s.plan);
     });
+    const unsubMarks = design.subscribe(() => keepIssuedMarks(store, design.getSnapshot(), (from, to) => autosave.absorb(from, to)));
     autosave.start();
     return () => {
       unsub();
+      unsubMarks();
       autosave.stop();
       design.dispose();
     };
@@ -159,7 +183,19 @@ export function PlanEditor(props: PlanEditorProps) {
       onKeyUp={(e) => e.key === ' ' && controller.setSpace(false)}
     >
       <div className="flex flex-wrap items-center justify-between gap-3 border-b border-ink bg-paper px-3 py-2">
-        <LevelBar store={store} canEdit={canEdit} />
+        <div className="flex flex-wrap items-center gap-3">
+          {props.renderBuildingView ? (
+            <div role="group" aria-label="View" className="inline-flex border border-ink/70">
+              <Button variant={building ? 'quiet' : 'primary'} className="h-8 rounded-none px-3 text-xs" aria-pressed={!building} onClick={() => changeView('plan')}>
+                Plan
+              </Button>
+              <Button variant={building ? 'primary' : 'quiet'} className="h-8 rounded-none px-3 text-xs" aria-pressed={building} onClick={() => changeView('building')}>
+                Building (3D)
+              </Button>
+            </div>
+          ) : null}
+          <LevelBar store={store} canEdit={canEdit} />
+        </div>
         <div className="flex flex-wrap items-center gap-1">
           {canEdit ? (
             <>
@@ -205,15 +241,28 @@ export function PlanEditor(props: PlanEditorProps) {
       {canEdit ? <ToolOptionsBar store={store} /> : null}
       {showUnderlay && props.renderUnderlayPanel ? <div className="border-b border-ink bg-paper px-4 py-3">{props.renderUnderlayPanel(levelId)}</div> : null}
       <div className="flex min-h-0" style={{ height: 'min(72vh, 760px)' }}>
-        {canEdit ? <PlanToolbar store={store} /> : null}
+        {canEdit && !building ? <PlanToolbar store={store} /> : null}
         <div className="relative min-w-0 flex-1">
-          <PlanCanvas
-            store={store}
-            design={design}
-            controller={controller}
-            label={`Plan of ${levelName}, ${props.schemeName}`}
-            renderUnderlay={props.renderUnderlayImages ? (view) => props.renderUnderlayImages!(levelId, view) : undefined}
-          />
+          {building ? (
+            props.renderBuildingView!({
+              plan,
+              result: designState.result,
+              selection,
+              select: (piece) => {
+                if (!piece) return dispatch(store, 'selection.set', { ids: [] });
+                if (piece.level !== store.getState().levelId) dispatch(store, 'level.show', { levelId: piece.level });
+                dispatch(store, 'selection.set', { ids: [piece.elementId] });
+              },
+            })
+          ) : (
+            <PlanCanvas
+              store={store}
+              design={design}
+              controller={controller}
+              label={`Plan of ${levelName}, ${props.schemeName}`}
+              renderUnderlay={props.renderUnderlayImages ? (v) => props.renderUnderlayImages!(levelId, v) : undefined}
+            />
+          )}
         </div>
         <aside className="flex w-[26rem] shrink-0 flex-col border-l border-ink bg-paper-raised" aria-label="Members and selection">
           <MemberList store={store} design={design} />

@@ -226,6 +226,7 @@ export function MemberSheet({ member, designBasis, planMember, units, canEdit, o
                 <tbody>
                   <AlternativeRow label="Next lighter" alt={alternatives.value.nextLighter} units={units} empty="No lighter shape within the constraints." />
                   <AlternativeRow label="Next shallower" alt={alternatives.value.nextShallower} units={units} empty="No shallower shape passes within the constraints." />
+                  {alternatives.value.sameWeight ? <AlternativeRow label="Same weight" alt={alternatives.value.sameWeight} units={units} empty="" /> : null}
                 </tbody>
               </table>
             ) : (

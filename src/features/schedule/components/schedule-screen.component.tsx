@@ -98,6 +98,9 @@ export function ScheduleScreen({ schemes, mayEditMarks, renderSheet }: ScheduleS
           <a className={buttonClasses('secondary')} href={links.calcBook} download>
             Calc book (PDF)
           </a>
+          <a className={buttonClasses('secondary')} href={links.ifc} download title="Members and columns with their I-shape profiles, marks, sizes and end reactions, for building-model software (IFC4, ISO 16739)">
+            Download model (IFC)
+          </a>
           {renderSheet ? (
             <Button variant={showSheet ? 'primary' : 'secondary'} aria-pressed={showSheet} onClick={() => setShowSheet((v) => !v)}>
               {showSheet ? 'Hide plan sheet' : 'View plan sheet'}
