@@ -1,5 +1,6 @@
 import { parsePlanFile } from '../../shared/schemas/plan.schema';
 import { gravityLoadProblems } from '../../shared/schemas/plan-gravity-loads';
+import { columnInputProblems } from '../../shared/schemas/plan-columns';
 import { designScheme } from '../../shared/engine/index';
 import { EXIT_DESIGN_FAILS, EXIT_OK, errorOutcome, readJsonArgument, type CommandOutcome } from './cli-io';
 
@@ -13,7 +14,7 @@ export function runPlanCommand(args: string[]): CommandOutcome {
   const file = args.find((a) => a !== '--group');
   const { plan, repairs, problems } = parsePlanFile(readJsonArgument(file));
   const fatal = problems.filter((p) => p.severity === 'error');
-  if (plan) fatal.push(...gravityLoadProblems(plan));
+  if (plan) fatal.push(...gravityLoadProblems(plan), ...columnInputProblems(plan));
   if (!plan || fatal.length > 0) {
     return errorOutcome('invalid plan file', fatal.map((p) => p.message));
   }
