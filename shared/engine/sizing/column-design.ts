@@ -17,6 +17,7 @@ import { compressionConstantsFor, compressionStrengthE1, availableCompressionKip
 import { columnRequiredAxialKip } from '../takedown/column-stack.takedown';
 import type { DesignMethod } from '../design/aisc360/resistance-factors';
 import { IN_PER_FT } from '../units/units.constants';
+import { LOAD_CASES, loadCombinations } from '../loads/combinations';
 
 /** Default candidate series for gravity columns (design-basis §8, a project setting). */
 export const DEFAULT_COLUMN_SERIES: readonly string[] = ['W14', 'W12', 'W10'];
@@ -105,6 +106,26 @@ export function columnCandidates(series: readonly string[], fyKsi: number): read
   return list;
 }
 
+/** Factors of every gravity combination with all four cases present, per method (hot path). */
+const FACTORS = {
+  LRFD: loadCombinations('LRFD', LOAD_CASES).map((c) => c.factors),
+  ASD: loadCombinations('ASD', LOAD_CASES).map((c) => c.factors),
+};
+
+/**
+ * The same value as columnRequiredAxialKip(...).Pr_kip without the combination's name: a
+ * combination of an absent case contributes 0 for it, and a combination dropped for the cases
+ * present is dominated by one kept, so the maximum is the same.
+ */
+function requiredAxialKip(method: DesignMethod, D: number, L: number, Lr: number, S: number): number {
+  let best = 0;
+  for (const f of FACTORS[method]) {
+    const p = f.D * D + f.L * L + f.Lr * Lr + f.S * S;
+    if (p > best) best = p;
+  }
+  return best;
+}
+
 interface TierEvaluation {
   ratio: number;
   passes: boolean;
@@ -124,7 +145,7 @@ function evaluateTier(
   for (const i of indices) {
     const len = input.lengths[i];
     if (selfWeight) swKip += (k.weightPlf * len.Lc_ft) / 1000;
-    const pr = columnRequiredAxialKip(input.method, len.D_kip + swKip, len.L_kip, len.Lr_kip, len.S_kip).Pr_kip;
+    const pr = requiredAxialKip(input.method, len.D_kip + swKip, len.L_kip, len.Lr_kip, len.S_kip);
     const pc = availableCompressionKip(k, len.Lc_ft * IN_PER_FT, input.method);
     const ratio = pc > 0 ? pr / pc : Number.POSITIVE_INFINITY;
     if (ratio > worst) {
@@ -171,8 +192,15 @@ export function designColumn(input: ColumnDesignInput): ColumnDesignResult {
     } else {
       let best: { k: CompressionConstants; ev: TierEvaluation } | null = null;
       let previous: { k: CompressionConstants; ev: TierEvaluation } | null = null;
+      // Pr without this tier's own weight bounds Pr from below; φc Fy Ag (Lc = 0) bounds Pc from above.
+      let prLowerKip = 0;
+      for (const i of indices) {
+        const len = input.lengths[i];
+        prLowerKip = Math.max(prLowerKip, requiredAxialKip(input.method, len.D_kip + aboveKip, len.L_kip, len.Lr_kip, len.S_kip));
+      }
       for (const k of candidates) {
         if (!input.allowHeavierAbove && k.weightPlf < minWeightPlf) continue;
+        if (availableCompressionKip(k, 0, input.method) < prLowerKip) continue; // cannot pass at any length
         const e = evaluateTier(input, k, indices, aboveKip, selfWeight);
         if (e.passes) {
           chosen = k;
@@ -182,6 +210,14 @@ export function designColumn(input: ColumnDesignInput): ColumnDesignResult {
         }
         previous = { k, ev: e };
         if (!best || e.ratio < best.ev.ratio) best = { k, ev: e };
+      }
+      if (!chosen) {
+        // Nothing passed: evaluate every allowed shape to report the best ratio reached.
+        for (const k of candidates) {
+          if (!input.allowHeavierAbove && k.weightPlf < minWeightPlf) continue;
+          const e = evaluateTier(input, k, indices, aboveKip, selfWeight);
+          if (!best || e.ratio < best.ev.ratio) best = { k, ev: e };
+        }
       }
       if (!chosen && best) {
         chosen = best.k;

@@ -14,8 +14,8 @@ import { availableStrength, type DesignMethod } from '../resistance-factors';
 import { lambdaRCompressionCase1, lambdaRCompressionCase5 } from '../chapter-b/b4';
 import { criticalStressE3, type E3CriticalStress } from './e3';
 import { effectiveWidthE7_1, type E7ElementWidth } from './e7';
-import { eqE3_1 } from './e3.equations';
-import { eqE7_1, TABLE_E7_1 } from './e7.equations';
+import { eqE3_1, eqE3_2, eqE3_3, eqE3_4, slendernessLimitE3 } from './e3.equations';
+import { eqE7_1, eqE7_3, eqE7_5, TABLE_E7_1 } from './e7.equations';
 
 /** AISC 360-16 E1: resistance and safety factors for compression. */
 export const PHI_C = 0.9;
@@ -86,6 +86,13 @@ export interface CompressionStrength {
   omega: number;
 }
 
+/** Ae at Fcr without building records (hot path): the same arithmetic as axisStrength's E7 branch. */
+function effectiveAreaIn2(k: CompressionConstants, fcrKsi: number): number {
+  const lost = (bIn: number, lambda: number, lambdaR: number, c: { c1: number; c2: number }) =>
+    lambda <= lambdaR * Math.sqrt(k.fyKsi / fcrKsi) ? 0 : bIn - Math.min(bIn, eqE7_3(bIn, c.c1, eqE7_5(c.c2, lambdaR, lambda, k.fyKsi), fcrKsi));
+  return k.agIn2 - lost(k.webHIn, k.lambdaWeb, k.lambdaRWeb, TABLE_E7_1.stiffened) * k.twIn - 4 * lost(k.flangeBIn, k.lambdaFlange, k.lambdaRFlange, TABLE_E7_1.other) * k.tfIn;
+}
+
 /** Nominal strength about one axis: Fcr by E3, on Ag (E3-1) or on Ae (E7-1). */
 function axisStrength(k: CompressionConstants, axis: CompressionAxis, lcIn: number): AxisCompression {
   const rIn = axis === 'x' ? k.rxIn : k.ryIn;
@@ -127,9 +134,21 @@ export function compressionStrengthE1(k: CompressionConstants, lcxIn: number, lc
   };
 }
 
-/** Available strength only (hot path of tier selection), same value as compressionStrengthE1(...).pcKip. */
+/**
+ * Available strength only (hot path of tier selection), same value as compressionStrengthE1(k, lc, lc, method).pcKip.
+ * With one length about both axes the axis of the smaller r governs: Fcr falls as Lc/r rises
+ * (E3-2, E3-3), and Fcr·Ae rises with Fcr (E7-2, E7-3), so only that axis is evaluated.
+ */
 export function availableCompressionKip(k: CompressionConstants, lcIn: number, method: DesignMethod): number {
-  const pn = Math.min(axisStrength(k, 'x', lcIn).pnKip, axisStrength(k, 'y', lcIn).pnKip);
+  const rIn = k.ryIn <= k.rxIn ? k.ryIn : k.rxIn;
+  const slenderness = lcIn / rIn;
+  let fcr: number;
+  if (!(lcIn > 0)) fcr = k.fyKsi;
+  else {
+    const fe = eqE3_4(k.eKsi, lcIn, rIn);
+    fcr = slenderness <= slendernessLimitE3(k.eKsi, k.fyKsi) ? eqE3_2(k.fyKsi, fe) : eqE3_3(fe);
+  }
+  const pn = !k.slenderFlange && !k.slenderWeb ? eqE3_1(fcr, k.agIn2) : eqE7_1(fcr, effectiveAreaIn2(k, fcr));
   return availableStrength(method, pn, PHI_C, OMEGA_C);
 }
 
