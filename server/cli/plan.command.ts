@@ -1,5 +1,6 @@
 import { parsePlanFile } from '../../shared/schemas/plan.schema';
 import { gravityLoadProblems } from '../../shared/schemas/plan-gravity-loads';
+import { columnInputProblems } from '../../shared/schemas/plan-columns';
 import { designScheme } from '../../shared/engine/index';
 import { CliInputError, EXIT_DESIGN_FAILS, EXIT_OK, errorOutcome, readJsonArgument, type CommandOutcome } from './cli-io';
 import { planOutput, type PlanOutputView } from './plan-output';
@@ -22,7 +23,7 @@ export function runPlanCommand(args: string[]): CommandOutcome {
   const file = args.find((a) => !PLAN_FLAGS.includes(a));
   const { plan, repairs, problems } = parsePlanFile(readJsonArgument(file));
   const fatal = problems.filter((p) => p.severity === 'error');
-  if (plan) fatal.push(...gravityLoadProblems(plan));
+  if (plan) fatal.push(...gravityLoadProblems(plan), ...columnInputProblems(plan));
   if (!plan || fatal.length > 0) {
     return errorOutcome('invalid plan file', fatal.map((p) => p.message));
   }

@@ -135,7 +135,7 @@ export function comparisonPdf(c: Comparison): Promise<Buffer> {
       doc.moveDown(0.3);
       const rows = [
         ...(s.byLevel ?? []).map((l) => [l.levelName, int.format(l.steelWeight_lb), one.format(l.steelWeight_lb / LB_PER_TON), l.steel_psf === null ? '—' : two.format(l.steel_psf), int.format(l.pieces), int.format(l.connections), l.cost_usd === null ? '—' : formatEstimateUsd(l.cost_usd)]),
-        ...(s.byKind ?? []).map((k) => [k.kind === 'girder' ? 'All girders' : 'All beams', int.format(k.steelWeight_lb), one.format(k.steelWeight_lb / LB_PER_TON), k.steel_psf === null ? '—' : two.format(k.steel_psf), int.format(k.pieces), int.format(k.connections), k.cost_usd === null ? '—' : formatEstimateUsd(k.cost_usd)]),
+        ...(s.byKind ?? []).map((k) => [k.kind === 'girder' ? 'All girders' : k.kind === 'beam' ? 'All beams' : 'All columns', int.format(k.steelWeight_lb), one.format(k.steelWeight_lb / LB_PER_TON), k.steel_psf === null ? '—' : two.format(k.steel_psf), int.format(k.pieces), int.format(k.connections), k.cost_usd === null ? '—' : formatEstimateUsd(k.cost_usd)]),
       ];
       table(doc, ['', 'lb', 'tons', 'psf', 'pieces', 'connections', 'cost'], rows, [170, 90, 70, 70, 70, 80, 100]);
     }

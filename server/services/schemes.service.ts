@@ -11,6 +11,7 @@ import {
   type PlanProblem,
 } from '../../shared/schemas/plan.schema';
 import { gravityLoadProblems } from '../../shared/schemas/plan-gravity-loads';
+import { columnInputProblems } from '../../shared/schemas/plan-columns';
 import { AppError } from '../errors/app-error';
 import type { SchemeAttributes, SchemeStatus } from '../models/scheme.model';
 import type { SchemePatchInput } from '../schemas/scheme.schema';
@@ -128,6 +129,13 @@ async function toDetail(ctx: SchemeServiceContext, row: SchemeRow): Promise<Sche
   return { ...summary, plan: exportPlanFile(plan) };
 }
 
+/** Each problem's path and message, as the error body's `fields` (the first message per path). */
+function problemFields(problems: readonly PlanProblem[]): Record<string, string> | undefined {
+  const fields: Record<string, string> = {};
+  for (const p of problems) if (p.path && !(p.path in fields)) fields[p.path] = p.message;
+  return Object.keys(fields).length ? fields : undefined;
+}
+
 /** Reads a plan document through migrations, zod and repair; 422 plan_invalid naming each element. */
 export function acceptPlan(
   document: unknown,
@@ -136,14 +144,14 @@ export function acceptPlan(
   const { plan, repairs, problems } = parsePlanFile(document);
   const errors = problems.filter((p) => p.severity === 'error');
   if (plan) errors.push(...storageProblems(plan));
-  if (plan && options.checkGravityLoads) errors.push(...gravityLoadProblems(plan));
+  if (plan && options.checkGravityLoads) errors.push(...gravityLoadProblems(plan), ...columnInputProblems(plan));
   if (!plan || errors.length > 0) {
     const first = errors[0]?.message ?? 'the file is not a plan';
     throw new AppError(
       422,
       'plan_invalid',
       `The plan cannot be saved: ${first}${errors.length > 1 ? ` (and ${errors.length - 1} more)` : ''}.`,
-      { details: { problems: errors, repairs } },
+      { details: { problems: errors, repairs }, fields: problemFields(errors) },
     );
   }
   return { plan, repairs, warnings: problems.filter((p) => p.severity !== 'error') };

@@ -1,5 +1,6 @@
 import { estimateCost, type UnitPrices } from '../../shared/tonnage/cost';
 import {
+  columnTonnageRows,
   computeTonnage,
   type TonnageDesignInput,
   type TonnageFigures,
@@ -20,7 +21,7 @@ export type FiguresWithCost = TonnageFigures & { cost_usd: number | null; steel_
 export interface SchemeTonnageView {
   totals: FiguresWithCost;
   byLevel: (FiguresWithCost & { level: string; levelName: string })[];
-  byKind: (FiguresWithCost & { kind: 'girder' | 'beam' })[];
+  byKind: (FiguresWithCost & { kind: 'girder' | 'beam' | 'column' })[];
   revision: number;
   designedAt: string;
   failingMembers: number;
@@ -49,7 +50,7 @@ export function tonnageInputOf(design: Record<string, unknown>): TonnageDesignIn
         ...(typeof m.studs === 'number' ? { studs: m.studs } : {}),
         ...(typeof m.camber_in === 'number' ? { camber_in: m.camber_in } : {}),
       }),
-    ),
+    ).concat(columnTonnageRows(design)),
     totals: {
       floorArea_ft2: typeof totals.floorArea_ft2 === 'number' ? totals.floorArea_ft2 : undefined,
       byLevel: Array.isArray(totals.byLevel)

@@ -52,7 +52,12 @@ export interface TitleBlockInput {
 
 export interface PlanSheetInput {
   plan: Pick<Plan, 'levels' | 'grids' | 'columns' | 'members' | 'decks' | 'openings' | 'zones' | 'designBasis'>;
-  design: { method: 'LRFD' | 'ASD'; members: readonly SheetMember[] };
+  design: {
+    method: 'LRFD' | 'ASD';
+    members: readonly SheetMember[];
+    /** Column sizes by level (the length below each level), when the design has them. */
+    columns?: readonly { id: string; levels: readonly { level: string; shape?: string | null; spliceBelow?: boolean }[] }[];
+  };
   levelId: string;
   titleBlock: TitleBlockInput;
   showReactions: boolean;
@@ -319,6 +324,7 @@ export function buildPlanSheet(input: PlanSheetInput): PlanSheet {
     }
 
     // Columns: a filled square at each, marked by its grid intersection.
+    const columnAt = new Map((design.columns ?? []).map((c) => [c.id, c]));
     for (const c of plan.columns) {
       if (!c.levels.includes(levelId)) continue;
       const cx = sx(c.x_ft);
@@ -328,6 +334,16 @@ export function buildPlanSheet(input: PlanSheetInput): PlanSheet {
       const mark = gridIntersectionLabel(c.x_ft, c.y_ft, plan.grids) ?? c.id;
       // Above-left: member reactions sit on the other sides of a support.
       out.push({ type: 'text', x: cx - half - 2, y: cy - half - 2, text: mark, size: 5.5, font: 'sans-bold', anchor: 'end', tone: 'soft' });
+      // The column size below this level, and a splice note where a new tier starts at this floor.
+      // A splice at this floor shows as the length above starting a new tier (spliceBelow).
+      const stack = columnAt.get(c.id)?.levels ?? [];
+      const at = stack.findIndex((l) => l.level === levelId);
+      const here = at >= 0 ? stack[at] : undefined;
+      if (here?.shape) {
+        const spliceAbove = at > 0 && stack[at - 1].spliceBelow && stack[at - 1].shape;
+        out.push({ type: 'text', x: cx - half - 2, y: cy + half + 6, text: spliceAbove ? `${here.shape} · splice, ${stack[at - 1].shape} above` : here.shape, size: 5, font: 'mono', anchor: 'end', ref: c.id });
+        if (!drawnSizes.includes(here.shape)) drawnSizes.push(here.shape);
+      }
     }
   } else {
     out.push({

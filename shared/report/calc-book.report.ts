@@ -563,8 +563,9 @@ export function buildCalcBook(input: CalcBookInput): CalcBook {
     for (const m of ofLevel) sections.push(memberSection(m, othersOf.get(m.id) ?? [], level.name, flagged.get(m.id) ?? []));
   }
 
-  // Column stack
+  // Column stack and column pages (AISC 360-16 Chapter E)
   const columns = (design.columns ?? []).filter((c) => levelId === undefined || c.levels.some((l) => l.level === levelId));
+  const lrfdCol = design.method === 'LRFD';
   sections.push({
     id: 'columns',
     title: 'Column stack',
@@ -576,43 +577,88 @@ export function buildCalcBook(input: CalcBookInput): CalcBook {
             {
               type: 'paragraph',
               tone: 'soft',
-              text: 'Cumulative from the top down, unfactored kip; live reduced on the cumulative AT with KLL = 4 (ASCE 7-16 §4.7.2, Eq. 4.7-1). Pr is the largest combination. Column self weight not included.',
+              text: 'Cumulative from the top down, unfactored kip; live reduced on the cumulative AT with KLL = 4 (ASCE 7-16 §4.7.2, Eq. 4.7-1). Each row is the column length below that level (Lc = storey height, K = 1.0, pinned gravity column). Pr is the governing combination and includes the column self weight down to the bottom of the length (conservative). Tiers: two storeys by default (common practice); the splice is taken at the floor, so the storey above a splice is checked with the upper shape over its whole height (conservative).',
             },
             {
               type: 'table',
               columns: [
-                { label: 'Column', weight: 1 },
-                { label: 'Level', weight: 1.3 },
-                { label: 'D', weight: 0.9, align: 'right' },
-                { label: 'L reduced', weight: 1, align: 'right' },
-                { label: 'L unreduced', weight: 1, align: 'right' },
-                { label: 'Lr', weight: 0.7, align: 'right' },
-                { label: 'S', weight: 0.7, align: 'right' },
-                { label: 'AT, ft²', weight: 0.9, align: 'right' },
-                { label: 'KLL', weight: 0.5, align: 'right' },
+                { label: 'Column', weight: 0.9 },
+                { label: 'Level', weight: 1.1 },
+                { label: 'D', weight: 0.8, align: 'right' },
+                { label: 'L red.', weight: 0.8, align: 'right' },
+                { label: 'Lr', weight: 0.6, align: 'right' },
+                { label: 'S', weight: 0.6, align: 'right' },
                 { label: 'Factor', weight: 0.7, align: 'right' },
-                { label: 'Pr', weight: 0.9, align: 'right' },
-                { label: 'Combination', weight: 1.4 },
+                { label: 'Tier', weight: 0.5, align: 'right' },
+                { label: 'Shape', weight: 1.1 },
+                { label: 'Lc, ft', weight: 0.7, align: 'right' },
+                { label: 'Pr', weight: 0.8, align: 'right' },
+                { label: lrfdCol ? 'φcPn' : 'Pn/Ωc', weight: 0.8, align: 'right' },
+                { label: 'Ratio', weight: 0.7, align: 'right' },
+                { label: 'Governing', weight: 1.3 },
               ],
               rows: columns.flatMap((c) =>
                 c.levels.map((l) => [
                   c.id,
-                  levelName.get(l.level) ?? l.level,
+                  `${levelName.get(l.level) ?? l.level}${l.spliceBelow ? ' (splice below)' : ''}`,
                   num(l.D_kip, 1),
                   num(l.L_kip, 1),
-                  num(l.Lunreduced_kip, 1),
                   num(l.Lr_kip, 1),
                   num(l.S_kip, 1),
-                  num(l.tributaryArea_ft2, 0),
-                  num(l.KLL, 0),
                   num(l.liveReductionFactor, 3),
+                  l.tier === null || l.tier === undefined ? '—' : String(l.tier),
+                  l.shape ?? '—',
+                  num(l.Lc_ft ?? 0, 2),
                   num(l.Pr_kip, 1),
-                  l.combination,
+                  l.Pc_kip == null ? '—' : num(l.Pc_kip, 1),
+                  l.ratio == null ? '—' : num(l.ratio, 3),
+                  l.governing ?? l.combination,
                 ]),
               ),
             },
           ],
   });
+  for (const c of columns) {
+    if (!c.tiers || c.tiers.length === 0) continue;
+    sections.push({
+      id: `column-${c.id}`,
+      title: `Column ${c.id}`,
+      blocks: [
+        {
+          type: 'paragraph',
+          text: `${c.tiers.length} tier(s)${c.spliceLevels?.length ? `, splices above ${c.spliceLevels.map((l) => levelName.get(l) ?? l).join(', ')}` : ''}${c.locked ? `; size locked to ${c.locked} (checked, not replaced)` : ''}; ${num(c.weight_lb, 0)} lb of steel. Flexural buckling about both axes, AISC 360-16 E3 (Fe by Eq. E3-4; Fcr by Eq. E3-2 where Lc/r ≤ 4.71 sqrt(E/Fy), else Eq. E3-3; Pn = Fcr Ag, Eq. E3-1) or E7 where Table B4.1a makes the web or flanges slender (Pn = Fcr Ae, Eq. E7-1, effective widths by Eq. E7-2/E7-3); ${lrfdCol ? 'φc = 0.90' : 'Ωc = 1.67'} (E1). E = ${num(E_KSI, 0)} ksi.`,
+        },
+        {
+          type: 'table',
+          columns: [
+            { label: 'Level', weight: 1.1 },
+            { label: 'Shape', weight: 1 },
+            { label: 'Lc/r', weight: 0.7, align: 'right' },
+            { label: 'Fcr, ksi', weight: 0.8, align: 'right' },
+            { label: 'Pn', weight: 0.8, align: 'right' },
+            { label: lrfdCol ? 'φcPn' : 'Pn/Ωc', weight: 0.8, align: 'right' },
+            { label: 'Pr', weight: 0.8, align: 'right' },
+            { label: 'Own wt', weight: 0.7, align: 'right' },
+            { label: 'Ratio', weight: 0.7, align: 'right' },
+            { label: 'Limit state', weight: 2.4 },
+          ],
+          rows: c.levels.filter((l) => l.shape).map((l) => [
+            levelName.get(l.level) ?? l.level,
+            l.shape ?? '—',
+            l.slenderness == null ? '—' : num(l.slenderness, 1),
+            l.Fcr_ksi == null ? '—' : num(l.Fcr_ksi, 2),
+            l.Pn_kip == null ? '—' : num(l.Pn_kip, 1),
+            l.Pc_kip == null ? '—' : num(l.Pc_kip, 1),
+            num(l.Pr_kip, 1),
+            num(l.selfWeight_kip ?? 0, 2),
+            l.ratio == null ? '—' : num(l.ratio, 3),
+            `${l.limitState ?? ''} (${l.clause ?? ''}, ${l.equation ?? ''}; ${l.governing})`,
+          ]),
+        },
+        ...c.tiers.filter((t) => !t.passes).map((t) => ({ type: 'paragraph' as const, text: `Tier ${t.tier} does not pass: ${t.failure ?? 'ratio above 1.0'}.` })),
+      ],
+    });
+  }
 
   // Equilibrium
   const eq = design.equilibrium;

@@ -126,6 +126,19 @@ export function repairPlan(input: PlanFile): RepairOutcome {
     }
   });
 
+  // Locked column sizes: the same normalisation as member shapes.
+  plan.columns.forEach((c, i) => {
+    if (c.shape == null) return;
+    const normal = c.shape.trim().toUpperCase();
+    if (normal === '') {
+      repairs.push(`columns[${i}] (id ${c.id}): empty shape read as "engine sizes it"`);
+      c.shape = null;
+    } else if (normal !== c.shape) {
+      repairs.push(`columns[${i}] (id ${c.id}): shape "${c.shape}" written as "${normal}"`);
+      c.shape = normal;
+    }
+  });
+
   const fixPolygons = (collection: string, items: { id?: string; polygon: PlanPolygon }[]) => {
     items.forEach((item, i) => {
       const where = `${collection}[${i}] (id ${item.id})`;

@@ -61,6 +61,20 @@ export const DEFAULT_COMPOSITE_SETTINGS: PlanCompositeSettings = {
   camber: true,
 };
 
+/**
+ * designBasis.columns (project settings for gravity columns, design-basis §8): the allowed
+ * series (default W14, W12, W10), storeys per tier (default 2, common practice), splice levels
+ * for every column that does not set its own, and whether an upper tier may be heavier than
+ * the one below it (default false, common practice).
+ */
+export const columnSettingsSchema = z.object({
+  series: boundedList(z.string().regex(/^W\d{1,2}$/, 'a W-shape series such as "W14"'), 12, 'series').min(1, 'choose at least one series').optional(),
+  storeysPerTier: z.number().int().min(1).max(6).optional(),
+  spliceLevels: boundedList(z.string().min(1), LIMIT.columnLevels, 'splice levels').nullable().optional(),
+  allowHeavierAbove: z.boolean().optional(),
+});
+export type PlanColumnSettings = z.infer<typeof columnSettingsSchema>;
+
 export const designBasisSchema = z.object({
   method: z.enum(['LRFD', 'ASD']),
   Fy_ksi: fyKsi.default(50),
@@ -73,6 +87,8 @@ export const designBasisSchema = z.object({
   totalDeflectionIncludes: z.enum(['deadAndLive', 'superimposedDeadAndLive']).optional(),
   /** Composite beams (AISC 360-16 Chapter I; design-basis §6, §6a). Absent = not composite. */
   composite: compositeSettingsSchema.optional(),
+  /** Gravity columns (AISC 360-16 Chapter E; design-basis §8). Absent = the defaults below. */
+  columns: columnSettingsSchema.optional(),
 });
 export type PlanDesignBasis = z.infer<typeof designBasisSchema>;
 

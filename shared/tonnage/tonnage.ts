@@ -18,11 +18,14 @@ export const END_CONNECTIONS_PER_MEMBER = 2;
 
 export const TONNAGE_BASIS =
   'Steel weight is the sum of shape weight × span for the beams and girders of the design ' +
-  '(W_plf × span_ft). Connection material, columns and deck are excluded; shear studs and cambered pieces are counted separately. ' +
-  'Connections count two per member, one at each end. Tons are short tons of 2,000 lb.';
+  '(W_plf × span_ft), plus shape weight × length for the gravity columns, each column length ' +
+  'counted at the level it carries (the storey below that level). Connection material, splices, ' +
+  'base plates and deck are excluded; shear studs and cambered pieces are counted separately. ' +
+  'Connections count two per beam or girder, one at each end; a column piece is one tier between ' +
+  'splices. Tons are short tons of 2,000 lb.';
 
-export type MemberKind = 'girder' | 'beam';
-export const MEMBER_KINDS: readonly MemberKind[] = ['girder', 'beam'];
+export type MemberKind = 'girder' | 'beam' | 'column';
+export const MEMBER_KINDS: readonly MemberKind[] = ['girder', 'beam', 'column'];
 
 /** The member fields tonnage reads from a design. */
 export interface TonnageMemberInput {
@@ -41,6 +44,8 @@ export interface TonnageMemberInput {
   /** Composite members: total shear studs and camber (in); null or absent where not composite. */
   studs?: number | null;
   camber_in?: number | null;
+  /** Pieces this row counts as (default 1): a column length counts 1 at the bottom of its tier, else 0. */
+  pieces?: number;
 }
 
 /** The design fields tonnage reads (the stored `calc plan` output). */
@@ -108,7 +113,9 @@ function figures(members: TonnageMemberInput[], floorArea_ft2: number): TonnageF
   let unsizedPieces = 0;
   let studs = 0;
   let camberedPieces = 0;
+  let pieces = 0;
   for (const m of members) {
+    pieces += typeof m.pieces === 'number' && m.pieces >= 0 ? m.pieces : 1;
     steelWeight_lb += memberSteelWeightLb(m);
     connections += memberEndConnections(m);
     if (!m.shape) unsizedPieces++;
@@ -120,7 +127,7 @@ function figures(members: TonnageMemberInput[], floorArea_ft2: number): TonnageF
     steelWeight_lb,
     steelWeight_tons: steelWeight_lb / LB_PER_TON,
     steel_psf: area > 0 ? steelWeight_lb / area : null,
-    pieces: members.length,
+    pieces,
     connections,
     floorArea_ft2: area,
     unsizedPieces,
@@ -168,3 +175,24 @@ export function computeTonnage(design: TonnageDesignInput, levels: readonly Tonn
     })),
   };
 }
+
+/**
+ * Gravity columns as tonnage rows: one per sized column length (at the level it carries), with
+ * its tier's piece counted at the tier's lowest length and no beam end connections.
+ */
+export function columnTonnageRows(design: Record<string, unknown>): TonnageMemberInput[] {
+  const columns = Array.isArray(design.columns) ? (design.columns as Record<string, unknown>[]) : [];
+  const rows: TonnageMemberInput[] = [];
+  for (const c of columns) {
+    const levels = Array.isArray(c.levels) ? (c.levels as Record<string, unknown>[]) : [];
+    levels.forEach((l, i) => {
+      if (typeof l.shape !== 'string' || !(Number(l.Lc_ft) > 0)) return;
+      const below = levels[i + 1];
+      const bottomOfTier = !below || below.tier !== l.tier || typeof below.shape !== 'string';
+      const weight = Number(l.shape.toUpperCase().split('X')[1]) || 0;
+      rows.push({ id: `${String(c.id)}@${String(l.level)}`, level: String(l.level), kind: 'column', shape: l.shape, span_ft: Number(l.Lc_ft) || 0, weight_plf: weight, endConnections: 0, pieces: bottomOfTier ? 1 : 0 });
+    });
+  }
+  return rows;
+}
+

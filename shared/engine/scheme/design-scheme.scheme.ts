@@ -22,6 +22,7 @@ import type { Bracing } from '../takedown/member-bracing.takedown';
 import { assignMarks, sharedMarkConflicts, type MarkInput } from './member-marks.scheme';
 import { compositeMemberInput, compositeSites, planNeedsWetStage, wetStagePlan, type MemberCompositeStatus } from './composite-plan.scheme';
 import type { CompositeMemberInput } from '../sizing/member-design.types';
+import { schemeColumns, type SchemeColumn } from './column-design.scheme';
 
 export interface SchemeOptions {
   /** Members of the same level, kind, span, load layout and bracing get one size: the heaviest demand governs. */
@@ -88,19 +89,7 @@ export interface MemberDesignExtras {
   preCompositeDead: MemberLoad[];
 }
 
-export interface SchemeColumnLevel {
-  level: string;
-  D_kip: number;
-  L_kip: number;
-  Lr_kip: number;
-  S_kip: number;
-  Lunreduced_kip: number;
-  tributaryArea_ft2: number;
-  KLL: number;
-  liveReductionFactor: number;
-  Pr_kip: number;
-  combination: string;
-}
+export type { SchemeColumnLevel, SchemeColumn, SchemeColumnTier } from './column-design.scheme';
 
 export interface SchemeBreakdown {
   steelWeight_lb: number;
@@ -112,14 +101,18 @@ export interface SchemeResult {
   name: string;
   method: 'LRFD' | 'ASD';
   members: SchemeMember[];
-  columns: { id: string; levels: SchemeColumnLevel[] }[];
+  columns: SchemeColumn[];
   totals: {
+    /** Beams and girders (members); columns are in columnWeight_lb. */
     steelWeight_lb: number;
+    /** Gravity columns: Σ shape weight × length (design-basis §8). */
+    columnWeight_lb: number;
+    columnPieces: number;
     floorArea_ft2: number;
     steel_psf: number;
     pieces: number;
     connections: number;
-    byLevel: (SchemeBreakdown & { level: string })[];
+    byLevel: (SchemeBreakdown & { level: string; columnWeight_lb: number; columnPieces: number })[];
     byKind: (Omit<SchemeBreakdown, 'floorArea_ft2'> & { kind: 'girder' | 'beam' })[];
   };
   equilibrium: Record<'D' | 'L' | 'Lr' | 'S', { applied_kip: number; reactions_kip: number }>;
@@ -613,9 +606,12 @@ function buildSchemeResult(
     }
   }
   const floorArea_ft2 = takedown.floorArea_ft2;
+  const col = schemeColumns(plan, takedown.columns);
+  problems.push(...col.problems);
   const byLevel = plan.levels.map((l) => {
     const ls = levelSums.get(l.id)!;
-    return { level: l.id, steelWeight_lb: ls.steelWeight_lb, pieces: ls.pieces, floorArea_ft2: takedown.byLevelFloorArea_ft2.get(l.id) ?? 0 };
+    const cl = col.totals.byLevel.get(l.id);
+    return { level: l.id, steelWeight_lb: ls.steelWeight_lb, pieces: ls.pieces, floorArea_ft2: takedown.byLevelFloorArea_ft2.get(l.id) ?? 0, columnWeight_lb: cl?.weight_lb ?? 0, columnPieces: cl?.pieces ?? 0 };
   });
   const byKind = [
     { kind: 'girder' as const, steelWeight_lb: girderWeight_lb, pieces: girderPieces },
@@ -626,24 +622,11 @@ function buildSchemeResult(
     name: plan.name,
     method: plan.designBasis.method,
     members,
-    columns: takedown.columns.map((c) => ({
-      id: c.id,
-      levels: c.levels.map((l) => ({
-        level: l.level,
-        D_kip: l.D_kip,
-        L_kip: l.L_kip,
-        Lr_kip: l.Lr_kip,
-        S_kip: l.S_kip,
-        Lunreduced_kip: l.Lunreduced_kip,
-        tributaryArea_ft2: l.reducibleArea_ft2 > 0 ? l.reducibleArea_ft2 : l.tributaryArea_ft2,
-        KLL: l.KLL,
-        liveReductionFactor: l.liveReductionFactor,
-        Pr_kip: l.Pr_kip,
-        combination: l.combination,
-      })),
-    })),
+    columns: col.columns,
     totals: {
       steelWeight_lb,
+      columnWeight_lb: col.totals.columnWeight_lb,
+      columnPieces: col.totals.columnPieces,
       floorArea_ft2,
       steel_psf: floorArea_ft2 > 0 ? steelWeight_lb / floorArea_ft2 : 0,
       pieces: members.length,

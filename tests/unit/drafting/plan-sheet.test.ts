@@ -37,6 +37,15 @@ describe('buildPlanSheet on the two-bay fixture', () => {
   const sheet = buildPlanSheet({ plan, design, levelId: 'L2', titleBlock, showReactions: true, caution: SCHEME_CAUTION });
   const texts = sheet.primitives.filter((p) => p.type === 'text').map((p) => (p.type === 'text' ? p.text : ''));
 
+  it('when drawn, then every column shows the size of its length below the level beside its mark', () => {
+    for (const c of design.columns) {
+      const shape = c.levels.find((l) => l.level === 'L2')!.shape!;
+      expect(shape).toMatch(/^W1[024]X\d+$/);
+      expect(sheet.primitives.some((p) => p.type === 'text' && p.ref === c.id && p.text === shape)).toBe(true);
+      expect(sheet.drawnSizes).toContain(shape);
+    }
+  });
+
   it('when drawn, then the sheet is 11 × 17 in landscape at 1/8" = 1\'-0"', () => {
     expect([sheet.width_pt, sheet.height_pt]).toEqual([1224, 792]);
     expect(sheet.scale.label).toBe('1/8" = 1\'-0"');

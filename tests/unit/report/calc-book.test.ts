@@ -161,6 +161,16 @@ describe('buildCalcBook on the two-bay fixture', () => {
     const t = cols.blocks.find((x) => x.type === 'table');
     expect(t && t.type === 'table' && t.rows.length).toBe(design.columns.reduce((s, c) => s + c.levels.length, 0));
     if (t && t.type === 'table') expect((t.rows[0][10] as CalcNumber).n).toBe(design.columns[0].levels[0].Pr_kip);
+    if (t && t.type === 'table') {
+      expect(t.rows[0][8]).toBe(design.columns[0].levels[0].shape);
+      expect((t.rows[0][12] as CalcNumber).n).toBe(design.columns[0].levels[0].ratio);
+    }
+    // One column page per sized column, with its working (AISC 360-16 E3/E7) per length
+    const page = b.sections.find((s) => s.id === `column-${design.columns[0].id}`)!;
+    expect(page.blocks[0].type === 'paragraph' && page.blocks[0].text).toMatch(/Eq\. E3-4/);
+    const w = page.blocks.find((x) => x.type === 'table');
+    if (!w || w.type !== 'table') throw new Error('no column working table');
+    expect((w.rows[0][5] as CalcNumber).n).toBe(design.columns[0].levels[0].Pc_kip);
     const eq = b.sections.find((s) => s.id === 'equilibrium')!;
     const eqT = eq.blocks.find((x) => x.type === 'table');
     if (!eqT || eqT.type !== 'table') throw new Error('no equilibrium table');

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { describeDifference, estimateCost, formatEstimateUsd, tonnageDifference } from '../../../shared/tonnage/cost';
-import { computeTonnage, type TonnageMemberInput } from '../../../shared/tonnage/tonnage';
+import { columnTonnageRows, computeTonnage, type TonnageMemberInput } from '../../../shared/tonnage/tonnage';
 
 // Hand-worked arithmetic of tonnage and cost (invented members; shape weights are the
 // nominal lb/ft in the designations, AISC Shapes Database v15.0).
@@ -32,6 +32,7 @@ describe('tonnage and cost worked by hand', () => {
     expect(t.byKind.map((k) => [k.kind, k.steelWeight_lb, k.connections])).toEqual([
       ['girder', 3168, 4],
       ['beam', 3120, 8],
+      ['column', 0, 0], // no columns among the six members
     ]);
   });
 
@@ -78,5 +79,26 @@ describe('tonnage and cost worked by hand', () => {
     );
     // 1,000 lb = 0.5 ton, 10 %; $20 rounds to $0 at the nearest $100.
     expect(describeDifference('B', 'A', lighter)).toBe('B is 0.5 tons (10 %) lighter than A at about the same cost.');
+  });
+});
+
+describe('tonnage with gravity columns', () => {
+  it('when a designed column has two tiers over three lengths, then its weight is counted by level and kind, with one piece per tier and no end connections', () => {
+    const design = {
+      members: [{ id: 'g1', level: 'L2', kind: 'girder', shape: 'W18X35', span_ft: 30, weight_plf: 35 }],
+      columns: [{ id: 'C1', levels: [
+        { level: 'L4', shape: 'W12X40', tier: 2, Lc_ft: 13 },
+        { level: 'L3', shape: 'W12X53', tier: 1, Lc_ft: 13 },
+        { level: 'L2', shape: 'W12X53', tier: 1, Lc_ft: 15 },
+      ] }],
+      totals: { floorArea_ft2: 900 },
+    };
+    const t = computeTonnage({ members: [...(design.members as TonnageMemberInput[]), ...columnTonnageRows(design)], totals: design.totals }, [{ id: 'L4', name: 'Level 4' }, { id: 'L3', name: 'Level 3' }, { id: 'L2', name: 'Level 2' }]);
+    // Worked by hand: 40 × 13 = 520 lb; 53 × 13 = 689 lb; 53 × 15 + 35 × 30 = 795 + 1050 lb
+    expect(t.byLevel.map((l) => [l.level, l.steelWeight_lb, l.pieces])).toEqual([['L4', 520, 1], ['L3', 689, 0], ['L2', 1845, 2]]);
+    const column = t.byKind.find((k) => k.kind === 'column')!;
+    expect([column.steelWeight_lb, column.pieces, column.connections]).toEqual([520 + 689 + 795, 2, 0]);
+    expect(t.totals.steelWeight_lb).toBe(1050 + 2004);
+    expect(t.totals.connections).toBe(2); // the girder's two ends only
   });
 });

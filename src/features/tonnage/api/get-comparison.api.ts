@@ -28,7 +28,7 @@ export const comparisonSchemeSchema = z.object({
   archived: z.boolean(),
   totals: figures.optional(),
   byLevel: z.array(figures.extend({ level: z.string(), levelName: z.string() })).optional(),
-  byKind: z.array(figures.extend({ kind: z.enum(['girder', 'beam']) })).optional(),
+  byKind: z.array(figures.extend({ kind: z.enum(['girder', 'beam', 'column']) })).optional(),
   revision: z.number().optional(),
   designedAt: z.string().optional(),
   failingMembers: z.number().optional(),

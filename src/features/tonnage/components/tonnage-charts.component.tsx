@@ -37,8 +37,8 @@ export function TonnageCharts({ schemes, system = 'US' }: { schemes: ComparisonS
     designed.forEach((s, i) => (row[`s${i}`] = tons(s.byLevel?.find((l) => l.levelName === name)?.steelWeight_lb ?? 0)));
     return row;
   });
-  const byKind = (['girder', 'beam'] as const).map((kind) => {
-    const row: Record<string, string | number> = { name: kind === 'girder' ? 'Girders' : 'Beams' };
+  const byKind = (['girder', 'beam', 'column'] as const).map((kind) => {
+    const row: Record<string, string | number> = { name: kind === 'girder' ? 'Girders' : kind === 'beam' ? 'Beams' : 'Columns' };
     designed.forEach((s, i) => (row[`s${i}`] = tons(s.byKind?.find((k) => k.kind === kind)?.steelWeight_lb ?? 0)));
     return row;
   });

@@ -16,3 +16,11 @@ export function classifyFlange(lambdaF: number, lambdaPf: number, lambdaRf: numb
   if (lambdaF <= lambdaRf) return 'noncompact';
   return 'slender';
 }
+
+/**
+ * AISC 360-16 Table B4.1a, width-to-thickness limits for members in axial compression.
+ * Case 1: flanges of rolled I-shapes, λr = 0.56 sqrt(E/Fy) with λ = b/t = bf/2tf.
+ * Case 5: webs of doubly symmetric I-shapes, λr = 1.49 sqrt(E/Fy) with λ = h/tw.
+ */
+export const lambdaRCompressionCase1 = (eKsi: number, fyKsi: number): number => 0.56 * Math.sqrt(eKsi / fyKsi);
+export const lambdaRCompressionCase5 = (eKsi: number, fyKsi: number): number => 1.49 * Math.sqrt(eKsi / fyKsi);
