@@ -1,3 +1,4 @@
+import { unpackDesignResult } from '../../server/services/design-run-storage';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -71,8 +72,9 @@ async function inspect(schemeId: string): Promise<StoredState> {
       snapshots,
       fromRows: JSON.parse(JSON.stringify(fromRows)),
       lastSnapshot: last?.getDataValue('plan') ?? null,
-      designRuns: runs.map((r) => {
-        const result = r.getDataValue('result') as { members?: unknown[]; totals?: unknown };
+      // Runs past the kept number hold only the pruned marker; the kept ones are unpacked as the server reads them.
+      designRuns: runs.filter((r) => !(r.getDataValue('result') as { pruned?: boolean }).pruned).map((r) => {
+        const result = unpackDesignResult(r.getDataValue('result')) as { members?: unknown[]; totals?: unknown };
         return { revision: r.getDataValue('revision'), members: result.members?.length ?? -1, ok: Array.isArray(result.members) && typeof result.totals === 'object' };
       }),
     };
