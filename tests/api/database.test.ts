@@ -12,9 +12,9 @@ import { freshTestDatabase, testDialect } from './helpers/test-database';
 const tmp = mkdtempSync(join(tmpdir(), 'baywright-db-'));
 afterAll(() => rmSync(tmp, { recursive: true, force: true }));
 
-/** A fresh database on the dialect under test (SQLite in memory, or PostgreSQL), dropped after. */
+/** A fresh, empty database on the dialect under test (SQLite in memory, or PostgreSQL), dropped after. */
 async function withFreshDb(fn: (db: Awaited<ReturnType<typeof connectDatabase>>) => Promise<void>): Promise<void> {
-  const target = await freshTestDatabase();
+  const target = await freshTestDatabase({ empty: true });
   const db = await connectDatabase(target.url);
   try {
     await fn(db);
