@@ -1,4 +1,5 @@
 // The words, size and ratio shown for a member in the list, on the canvas and in tooltips.
+import { memberSizeLabel } from '../../../../shared/drafting/member-label.drafting';
 import type { SchemeMember, SchemeResult } from '../../../../shared/engine/index';
 import { utilisation, type Utilisation } from '../../../lib/utilisation';
 import { describeProblem, type PlanNamer } from '../../../../shared/drafting/element-names.drafting';
@@ -42,13 +43,13 @@ export function memberStatus(id: string, member: SchemeMember | undefined, resul
   // A size that "passes" on a member the engine flags (no support at an end, …) is not a pass.
   if (problem && problem.code !== 'member-fails') {
     const reason = named(cleanReason(problem.message, id), names);
-    return { mark: member.mark, size: member.shape ?? '—', ratio, util, words: `Problem — ${reason}`, shortReason: shorten(reason), state: 'problem' };
+    return { mark: member.mark, size: member.shape ? memberSizeLabel(member.shape, member.studs, member.camber_in) : '—', ratio, util, words: `Problem — ${reason}`, shortReason: shorten(reason), state: 'problem' };
   }
   if (member.passes) {
-    return { mark: member.mark, size: member.shape ?? '—', ratio, util, words: `Passes — ${governingWords(member.governing)} governs`, shortReason: null, state: 'passes' };
+    return { mark: member.mark, size: member.shape ? memberSizeLabel(member.shape, member.studs, member.camber_in) : '—', ratio, util, words: `Passes — ${governingWords(member.governing)} governs`, shortReason: null, state: 'passes' };
   }
   const reason = member.design.failure ? cleanReason(member.design.failure, id) : `${governingWords(member.governing)} governs`;
-  return { mark: member.mark, size: member.shape ?? '—', ratio, util, words: `Over — ${reason}`, shortReason: shorten(reason), state: 'fails' };
+  return { mark: member.mark, size: member.shape ? memberSizeLabel(member.shape, member.studs, member.camber_in) : '—', ratio, util, words: `Over — ${reason}`, shortReason: shorten(reason), state: 'fails' };
 }
 
 /**

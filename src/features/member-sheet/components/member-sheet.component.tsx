@@ -35,6 +35,7 @@ import {
   attempt, bracePoints, sheetAlternatives, sheetDesignInput, sheetDiagrams, type MemberConstraints, type MemberPlanSettings,
 } from '../lib/member-sheet.model';
 import { MemberChecksTable, MemberSegmentsTable } from './member-checks.component';
+import { MemberCompositePanel } from './member-composite.component';
 import { MemberDiagramsPanel } from './member-diagrams.component';
 import { MemberLoadsTable, MemberReactionsTable } from './member-loads.component';
 import type { PlanNamer } from '../../../../shared/drafting/element-names.drafting';
@@ -217,6 +218,10 @@ export function MemberSheet({ member, designBasis, planMember, units, canEdit, o
               L<sub>b</sub> between brace points (framing members and deck); C<sub>b</sub> by AISC 360-16 Eq. F1-1 from the moment
               diagram of each combination, 1.0 where bracing is continuous or L<sub>b</sub> is overridden.
             </p>
+          </Section>
+
+          <Section title="Composite section" id={`${idBase}-composite`}>
+            <MemberCompositePanel design={design} note={member?.compositeNote ?? null} />
           </Section>
 
           <Section title="Checks" id={`${idBase}-checks`}>

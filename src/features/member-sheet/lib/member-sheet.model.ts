@@ -46,6 +46,8 @@ export function sheetDesignInput(member: SchemeMember, basis: PlanDesignBasis, s
     allowedNominalDepths: settings?.allowedNominalDepths ?? null,
     includeSelfWeight: true,
     Lb_override_ft: settings?.Lb_override_ft ?? null,
+    // composite members: the slab, effective width, studs and construction loads the scheme used
+    ...(member.designExtras ?? {}),
   };
 }
 
