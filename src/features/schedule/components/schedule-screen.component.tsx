@@ -9,6 +9,7 @@ import { UnitsSwitch, useUnits } from '../../../lib/units-context';
 import { useEditMarks, useRenumberMarks } from '../api/edit-marks.api';
 import { exportLinks, useSchedule } from '../api/get-schedule.api';
 import { ScheduleTable } from './schedule-table.component';
+import { ColumnScheduleTable } from './column-schedule.component';
 
 export interface SchemeChoice {
   id: string;
@@ -169,6 +170,7 @@ export function ScheduleScreen({ schemes, mayEditMarks, renderSheet }: ScheduleS
             onSaveMark={saveMark}
             savingMark={editMarks.isPending}
           />
+          {view.columnSchedule ? <ColumnScheduleTable schedule={view.columnSchedule} method={view.basis.method} units={system} /> : null}
           <EngineerCaution />
         </>
       ) : null}
