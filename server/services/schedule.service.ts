@@ -1,3 +1,4 @@
+import { buildColumnSchedule, type ColumnSchedule } from '../../shared/drafting/column-schedule.drafting';
 import type { SchemeResult } from '../../shared/engine/index';
 import { SCHEME_CAUTION } from '../../shared/engine/index';
 import { scheduleBasis, scheduleMarkRows, scheduleRows, type ScheduleBasis, type ScheduleRow } from '../../shared/drafting/schedule.drafting';
@@ -21,6 +22,7 @@ export interface ScheduleView {
   problems: PlanProblem[];
   caution: string;
   compositeNote: string;
+  columnSchedule: ColumnSchedule;
 }
 
 export interface SchemeDrafting {
@@ -53,6 +55,7 @@ export async function getSchedule(ctx: SchemeServiceContext, schemeId: string): 
     problems: design.problems ?? [],
     caution: design.caution ?? SCHEME_CAUTION,
     compositeNote: COMPOSITE_NOTE,
+    columnSchedule: buildColumnSchedule(design, plan),
   };
 }
 

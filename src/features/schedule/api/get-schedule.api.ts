@@ -1,6 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import type { ScheduleBasis, ScheduleRow } from '../../../../shared/drafting/schedule.drafting';
+import type { ColumnSchedule } from '../../../../shared/drafting/column-schedule.drafting';
 
 export interface ScheduleView {
   scheme: { id: string; projectId: string; name: string; revision: number };
@@ -11,6 +12,8 @@ export interface ScheduleView {
   problems: { message: string; elementId?: string }[];
   caution: string;
   compositeNote: string;
+  /** Absent from a server older than the column schedule. */
+  columnSchedule?: ColumnSchedule;
 }
 
 export const scheduleQueryKey = (schemeId: string) => ['schemes', schemeId, 'schedule'] as const;

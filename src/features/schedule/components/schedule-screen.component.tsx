@@ -10,6 +10,7 @@ import { useEditMarks, useRenumberMarks } from '../api/edit-marks.api';
 import { exportLinks, useSchedule } from '../api/get-schedule.api';
 import { ScheduleTable } from './schedule-table.component';
 import { ScheduleMarkTable } from './schedule-mark-table.component';
+import { ColumnScheduleTable } from './column-schedule.component';
 
 export interface SchemeChoice {
   id: string;
@@ -194,6 +195,7 @@ export function ScheduleScreen({ schemes, mayEditMarks, renderSheet }: ScheduleS
               savingMark={editMarks.isPending}
             />
           )}
+          {view.columnSchedule ? <ColumnScheduleTable schedule={view.columnSchedule} method={view.basis.method} units={system} /> : null}
           <EngineerCaution />
         </>
       ) : null}
