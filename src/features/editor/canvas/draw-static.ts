@@ -91,6 +91,20 @@ export function drawStatic(ctx: CanvasRenderingContext2D, plan: Plan, geo: Stati
     const [sx, sy] = toScreen(view, c);
     ctx.fillRect(sx - colSize / 2, sy - colSize / 2, colSize, colSize);
   }
+  // Column marks and sizes (the length below this level), above-left of each column, once zoomed in enough to read.
+  if (view.scale >= 4) {
+    ctx.save();
+    ctx.font = `500 10px ${MONO}`;
+    ctx.textAlign = 'right';
+    ctx.textBaseline = 'bottom';
+    ctx.fillStyle = theme.ink;
+    for (const l of geo.columnLabels) {
+      if (!onScreen(l.at)) continue;
+      const [sx, sy] = toScreen(view, l.at);
+      ctx.fillText(l.text, sx - colSize / 2 - 3, sy - colSize / 2 - 2);
+    }
+    ctx.restore();
+  }
   const labelled = drawMemberLabels(ctx, geo, view, theme, onScreen);
   for (const p of geo.pointLoads) if (onScreen(p.at)) drawPointLoad(ctx, toScreen(view, p.at), pointLoadText(p.D_kip, p.L_kip, system), theme);
   ctx.font = `10px ${MONO}`;
