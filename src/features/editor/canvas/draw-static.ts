@@ -96,6 +96,23 @@ export function drawStatic(ctx: CanvasRenderingContext2D, plan: Plan, geo: Stati
   // member labels next (moved along or across their member to clear a symbol); then the
   // load values and zone names, each in the first free spot, left out when none is free.
   const placer = new LabelPlacer(2);
+  // Column marks and sizes (the length below this level), above-left of each column, once zoomed in enough to read.
+  if (view.scale >= 4) {
+    ctx.save();
+    ctx.font = `500 10px ${MONO}`;
+    ctx.textAlign = 'right';
+    ctx.textBaseline = 'bottom';
+    ctx.fillStyle = theme.ink;
+    for (const l of geo.columnLabels) {
+      if (!onScreen(l.at)) continue;
+      const [sx, sy] = toScreen(view, l.at);
+      const x1 = sx - colSize / 2 - 3;
+      const y1 = sy - colSize / 2 - 2;
+      ctx.fillText(l.text, x1, y1);
+      placer.reserve({ x0: x1 - ctx.measureText(l.text).width, y0: y1 - 11, x1, y1, what: `column label ${l.text}` });
+    }
+    ctx.restore();
+  }
   const points = geo.pointLoads.filter((p) => onScreen(p.at)).map((p) => ({ p, at: toScreen(view, p.at) }));
   for (const { p, at } of points) placer.reserve({ x0: at[0] - 8, y0: at[1] - 8, x1: at[0] + 8, y1: at[1] + 8, what: `point load ${p.id} symbol` });
   const labelled = drawMemberLabels(ctx, geo, view, theme, onScreen, placer);

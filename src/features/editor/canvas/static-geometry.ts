@@ -9,6 +9,7 @@ import type { LiveDesignSnapshot } from '../design/live-design';
 import { memberStatus, type MemberStatus } from '../members/member-status';
 import type { UtilisationBand } from '../../../lib/utilisation';
 import type { PlanPoint } from '../store/editor.types';
+import { gridIntersectionLabel } from '../../../../shared/drafting/grid-location.drafting';
 
 export interface MemberLabel {
   id: string;
@@ -24,10 +25,24 @@ export interface StaticGeometry {
   decks: { id: string; polygon: PlanPoint[]; spanDirection: 'x' | 'y'; zoneIndex: number; zoneName: string }[];
   openings: { id: string; polygon: PlanPoint[] }[];
   columns: PlanPoint[];
+  /** Column mark (grid intersection or id) and the size of its length below this level, where designed. */
+  columnLabels: { at: PlanPoint; text: string }[];
   /** Loads in plan units (kip, klf); their labels are written in the reader's units when drawn. */
   pointLoads: { id: string; at: PlanPoint; D_kip: number; L_kip: number }[];
   lineLoads: { id: string; start: PlanPoint; end: PlanPoint; D_klf: number; L_klf: number }[];
   memberCount: number;
+}
+
+function columnLabels(plan: Plan, levelId: string, design: LiveDesignSnapshot): { at: PlanPoint; text: string }[] {
+  const designed = new Map((design.result?.columns ?? []).map((c) => [c.id, c]));
+  const out: { at: PlanPoint; text: string }[] = [];
+  for (const c of plan.columns) {
+    if (!c.levels.includes(levelId)) continue;
+    const mark = gridIntersectionLabel(c.x_ft, c.y_ft, plan.grids) ?? c.id;
+    const shape = designed.get(c.id)?.levels?.find((l) => l.level === levelId)?.shape;
+    out.push({ at: [c.x_ft, c.y_ft], text: shape ? `${mark} ${shape}` : mark });
+  }
+  return out;
 }
 
 export function buildStaticGeometry(plan: Plan, levelId: string, design: LiveDesignSnapshot): StaticGeometry {
@@ -55,6 +70,7 @@ export function buildStaticGeometry(plan: Plan, levelId: string, design: LiveDes
     decks: plan.decks.filter((d) => d.level === levelId).map((d) => ({ id: d.id, polygon: d.polygon, spanDirection: d.spanDirection, zoneIndex: zoneIndex.get(d.zone) ?? -1, zoneName: plan.zones.find((z) => z.id === d.zone)?.name ?? d.zone })),
     openings: plan.openings.filter((o) => o.level === levelId).map((o) => ({ id: o.id, polygon: o.polygon })),
     columns: plan.columns.filter((c) => c.levels.includes(levelId)).map((c) => [c.x_ft, c.y_ft] as PlanPoint),
+    columnLabels: columnLabels(plan, levelId, design),
     pointLoads: plan.pointLoads.filter((p) => p.level === levelId).map((p) => ({ id: p.id, at: [p.x_ft, p.y_ft] as PlanPoint, D_kip: p.D_kip, L_kip: p.L_kip })),
     lineLoads: plan.lineLoads.filter((w) => w.level === levelId).map((w) => ({ id: w.id, start: w.start, end: w.end, D_klf: w.D_klf, L_klf: w.L_klf })),
     memberCount: labels.length,
