@@ -10,9 +10,31 @@ test.setTimeout(150_000);
 test('a drafter filters the schedule, downloads the CSV and the plan sheet, and edits nothing but marks', async ({ page }) => {
   await signInAs(page, 'drafter@example.com');
   await page.getByRole('table').getByRole('link').first().click();
+  await page.setViewportSize({ width: 1440, height: 900 });
   await page.getByRole('link', { name: 'Schedule' }).click();
 
+  // By default one row per mark, with its quantity and the envelope of its reactions, and every
+  // column (Camber, Studs, Level, Kind included) inside the window at 1440 px.
+  const byMark = page.getByRole('table', { name: 'Schedule by mark' });
+  await expect(byMark).toBeVisible({ timeout: 30_000 });
+  await expect(byMark.getByRole('columnheader', { name: /Reaction, envelope of the ends/ })).toBeVisible();
+  const quantities = await byMark.locator('tbody tr[data-mark]').evaluateAll((rows) => rows.map((r) => Number(r.getAttribute('data-quantity'))));
+  expect(quantities.some((q) => q > 1)).toBe(true);
+  const fit = await byMark.evaluate((t) => ({ table: t.scrollWidth, box: t.parentElement!.clientWidth, right: t.getBoundingClientRect().right }));
+  expect(fit.table).toBeLessThanOrEqual(fit.box);
+  expect(fit.right).toBeLessThanOrEqual(1440);
+  for (const name of [/^Camber/, 'Studs', 'Level', 'Kind']) await expect(byMark.getByRole('columnheader', { name })).toBeInViewport();
+  await page.screenshot({ path: `${SCREENSHOT_DIR}/schedule-by-mark.png`, fullPage: false });
+  const [markCsv] = await Promise.all([page.waitForEvent('download'), page.getByRole('link', { name: 'Download CSV' }).click()]);
+  const markLines = readFileSync((await markCsv.path())!, 'utf8').split('\r\n').filter(Boolean);
+  expect(markLines[0]).toMatch(/^level,level_name,mark,kind,size,quantity,/);
+  expect(markLines).toHaveLength(quantities.length + 1);
+
+  await page.getByRole('combobox', { name: 'Rows' }).selectOption('member');
   const table = page.getByRole('table', { name: 'Member schedule' });
+  await expect(table).toBeVisible();
+  const memberFit = await table.evaluate((t) => ({ table: t.scrollWidth, box: t.parentElement!.clientWidth }));
+  expect(memberFit.table).toBeLessThanOrEqual(memberFit.box);
   await expect(table).toBeVisible({ timeout: 30_000 });
   await expect(page.getByText('licensed engineer').first()).toBeVisible();
   await expect(page.getByText(/composite design is not in Baywright yet/)).toBeVisible();

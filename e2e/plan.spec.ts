@@ -9,8 +9,8 @@ async function openDemoProjectPlan(page: Page) {
 
 test.describe('plan', () => {
   test('when an engineer lays out a 3 × 2 bay floor, then every member is sized on the canvas and in the list', async ({ page, browser }) => {
-    test.setTimeout(180_000);
-    await page.setViewportSize({ width: 1600, height: 1000 });
+    test.setTimeout(360_000);
+    await page.setViewportSize({ width: 1440, height: 900 });
     await signInAs(page, 'engineer@example.com');
     await openDemoProjectPlan(page);
 
@@ -78,9 +78,14 @@ test.describe('plan', () => {
 
     // A heavy point load at midspan of the beam on x = 10 ft makes it deeper or heavier.
     await clickPlan(page, canvas, 10, 18);
-    const selectedRow = page.locator('tbody tr[data-selected]');
-    await expect(selectedRow).toHaveCount(1);
-    const sizeBefore = (await selectedRow.locator('td').nth(2).textContent())!;
+    // The Member sheet opens beside the canvas: plan and sheet in view together.
+    const sheetShape = page.getByTestId('member-sheet-shape');
+    await expect(sheetShape).toBeVisible();
+    const [canvasBox, sheetBox] = [await canvas.boundingBox(), await page.getByTestId('member-sheet-slot').boundingBox()];
+    expect(sheetBox!.x).toBeGreaterThanOrEqual(canvasBox!.x + canvasBox!.width - 1);
+    expect(canvasBox!.y + canvasBox!.height).toBeLessThanOrEqual(page.viewportSize()!.height);
+    await expect(page.getByTestId('save-status')).toBeInViewport();
+    const sizeBefore = (await sheetShape.textContent())!;
     await page.keyboard.press('Escape');
     await page.keyboard.press('p');
     await page.getByLabel('Dead, kip').fill('20');
@@ -88,18 +93,24 @@ test.describe('plan', () => {
     await clickPlan(page, canvas, 10, 18);
     await page.keyboard.press('v');
     await clickPlan(page, canvas, 10, 9);
-    await expect(selectedRow.locator('td').nth(2)).not.toHaveText(sizeBefore, { timeout: 30_000 });
-    const sizeAfter = (await selectedRow.locator('td').nth(2).textContent())!;
+    await expect(sheetShape).not.toHaveText(sizeBefore, { timeout: 30_000 });
+    const sizeAfter = (await sheetShape.textContent())!;
     expect(weight(sizeAfter)).toBeGreaterThanOrEqual(weight(sizeBefore));
 
     // Undo takes the point load away (the size returns); redo puts it back.
     await page.getByRole('button', { name: 'Undo' }).click();
-    await expect(selectedRow.locator('td').nth(2)).toHaveText(sizeBefore, { timeout: 30_000 });
+    await expect(sheetShape).toHaveText(sizeBefore, { timeout: 30_000 });
     await page.getByRole('button', { name: 'Redo' }).click();
-    await expect(selectedRow.locator('td').nth(2)).toHaveText(sizeAfter, { timeout: 30_000 });
+    await expect(sheetShape).toHaveText(sizeAfter, { timeout: 30_000 });
     await expect(page.getByTestId('save-status')).toHaveText(/^Saved · revision \d+/, { timeout: 15_000 });
-    await page.getByTestId('member-sheet-slot').scrollIntoViewIfNeeded();
-    await page.screenshot({ path: `${SCREENSHOT_DIR}/plan-member-sheet.png`, fullPage: true });
+    await page.screenshot({ path: `${SCREENSHOT_DIR}/plan-member-sheet.png` });
+    // The Design basis opens as a panel beside the canvas too; the canvas does not move down.
+    const canvasTop = (await canvas.boundingBox())!.y;
+    await page.getByRole('button', { name: 'Design basis' }).click();
+    await expect(page.getByRole('complementary', { name: 'Design basis panel' })).toBeVisible();
+    expect((await canvas.boundingBox())!.y).toBe(canvasTop);
+    await page.screenshot({ path: `${SCREENSHOT_DIR}/plan-design-basis.png` });
+    await page.getByRole('button', { name: 'Design basis' }).click();
 
     // A drafter opens the same plan: read only, no tools.
     const url = page.url();

@@ -11,6 +11,7 @@ import { securityHeaders } from './middleware/security.middleware';
 import { defineModels, type Models } from './models/models';
 import { apiRoutes } from './routes/api.routes';
 import { serveClient } from './static-client';
+import { configureDesignRuns } from './services/design-runs/design-pool';
 
 export interface CreateAppOptions {
   sequelize: Sequelize;
@@ -36,6 +37,7 @@ export function createApp(options: CreateAppOptions): Express {
     limiters: createSignInLimiters({ relaxed: config.rateLimitRelaxed }),
   };
 
+  configureDesignRuns(config.designRuns);
   setDesignRunsKept(sequelize, config.designRunsKept);
 
   const app = express();

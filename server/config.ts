@@ -24,6 +24,17 @@ const databaseUrl = z
     'DATABASE_URL must start with sqlite: (e.g. sqlite:./data/baywright.sqlite or sqlite::memory:) or postgres://',
   );
 
+const positiveWhole = (name: string, max: number) =>
+  z.preprocess(
+    emptyToUndefined,
+    z.coerce
+      .number({ error: `${name} must be a whole number` })
+      .int(`${name} must be a whole number`)
+      .min(1, `${name} must be at least 1`)
+      .max(max, `${name} must be at most ${max}`)
+      .optional(),
+  );
+
 const envSchema = z.object({
   PORT: z.preprocess(
     emptyToUndefined,
@@ -58,6 +69,9 @@ const envSchema = z.object({
       .max(65535)
       .optional(),
   ),
+  DESIGN_TIMEOUT_MS: positiveWhole('DESIGN_TIMEOUT_MS', 3_600_000),
+  DESIGN_MEMORY_MB: positiveWhole('DESIGN_MEMORY_MB', 65_536),
+  DESIGN_WORKERS: positiveWhole('DESIGN_WORKERS', 64),
   SMTP_USER: z.preprocess(emptyToUndefined, z.string().optional()),
   SMTP_PASSWORD: z.preprocess(emptyToUndefined, z.string().optional()),
   SMTP_FROM: z.preprocess(
@@ -119,6 +133,8 @@ export interface Config {
    * links fall back to the request's own origin.
    */
   appUrl?: string;
+  /** Budget of a design run (worker threads): time, memory, parallel runs; unset parts take the defaults. */
+  designRuns?: { timeoutMs?: number; memoryMb?: number; workers?: number; maxQueue?: number };
   /**
    * Design runs whose full result is kept per scheme (the newest); older runs keep their summary
    * (revision, weight, pieces, failures: what the activity feed lists) and drop the result.
@@ -181,5 +197,10 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
         }
       : null,
     ...(e.APP_URL ? { appUrl: e.APP_URL } : {}),
+    designRuns: {
+      ...(e.DESIGN_TIMEOUT_MS ? { timeoutMs: e.DESIGN_TIMEOUT_MS } : {}),
+      ...(e.DESIGN_MEMORY_MB ? { memoryMb: e.DESIGN_MEMORY_MB } : {}),
+      ...(e.DESIGN_WORKERS ? { workers: e.DESIGN_WORKERS } : {}),
+    },
   };
 }

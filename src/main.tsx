@@ -1,3 +1,4 @@
+import './lib/zod-jitless';
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { AppProviders } from './app/app.providers';

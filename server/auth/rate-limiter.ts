@@ -72,6 +72,12 @@ export interface SignInLimiters {
   perAccountFailures: RateLimiter;
   /** Sign-in and sign-up attempts per client IP: 30 per minute (relaxed for e2e). */
   perIpAttempts: RateLimiter;
+  /**
+   * Uses of a one-time link per client IP (password reset check and completion, invitation
+   * preview and acceptance): 30 per minute, relaxed like sign-in. Completion and acceptance
+   * hash a password, so without it one address could keep the server hashing.
+   */
+  perIpTokenUses: RateLimiter;
 }
 
 export const ACCOUNT_FAILURE_LIMIT = 5;
@@ -87,6 +93,11 @@ export function createSignInLimiters(
   return {
     perAccountFailures: new RateLimiter(ACCOUNT_FAILURE_LIMIT, ACCOUNT_WINDOW_MS, now),
     perIpAttempts: new RateLimiter(
+      options.relaxed ? IP_ATTEMPT_LIMIT_RELAXED : IP_ATTEMPT_LIMIT,
+      IP_WINDOW_MS,
+      now,
+    ),
+    perIpTokenUses: new RateLimiter(
       options.relaxed ? IP_ATTEMPT_LIMIT_RELAXED : IP_ATTEMPT_LIMIT,
       IP_WINDOW_MS,
       now,

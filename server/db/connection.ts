@@ -1,7 +1,9 @@
+import { AsyncLocalStorage } from 'node:async_hooks';
 import { mkdirSync } from 'node:fs';
 import { dirname } from 'node:path';
-import { Sequelize } from 'sequelize';
+import { Sequelize, Transaction } from 'sequelize';
 import { defineModels, type Db } from '../models/models';
+import { serializeSqliteTransactions } from './sqlite-serial';
 
 export type DatabaseTarget =
   | { dialect: 'sqlite'; storage: string; inMemory: boolean }
@@ -17,15 +19,67 @@ export function parseDatabaseUrl(url: string): DatabaseTarget {
   throw new Error(`Unsupported DATABASE_URL: ${url}`);
 }
 
+/** How long a SQLite statement waits for another connection's write lock before failing. */
+export const SQLITE_BUSY_TIMEOUT_MS = 10_000;
+
+/**
+ * SQLite allows one writer at a time, and Sequelize's sqlite driver shares one connection for
+ * an in-memory database (so two open transactions would interleave their BEGIN/COMMIT) and
+ * opens one connection per transaction for a file (so a second writer fails at once with
+ * SQLITE_BUSY). Three things make concurrent requests behave as they do on PostgreSQL:
+ * transactions run one after another in this process (a queue), they start IMMEDIATE (the
+ * write lock is taken at BEGIN, so a transaction never fails half way on a stale snapshot),
+ * and every connection waits for the lock instead of failing (busy timeout).
+ */
+function hardenSqlite(sequelize: Sequelize): void {
+  type ConnectionManager = { getConnection(options?: unknown): Promise<{ configure(option: 'busyTimeout', ms: number): void }> };
+  const manager = (sequelize as unknown as { connectionManager: ConnectionManager }).connectionManager;
+  const getConnection = manager.getConnection.bind(manager);
+  const configured = new WeakSet<object>();
+  manager.getConnection = async (options?: unknown) => {
+    const connection = await getConnection(options);
+    if (!configured.has(connection)) {
+      connection.configure('busyTimeout', SQLITE_BUSY_TIMEOUT_MS);
+      configured.add(connection);
+    }
+    return connection;
+  };
+
+  const original = sequelize.transaction.bind(sequelize) as (options?: unknown, fn?: unknown) => Promise<unknown>;
+  const inside = new AsyncLocalStorage<true>();
+  let tail: Promise<unknown> = Promise.resolve();
+  const queued = (options?: unknown, fn?: unknown): Promise<unknown> => {
+    const callback = typeof options === 'function' ? options : fn;
+    const opts = typeof options === 'function' ? {} : (options ?? {});
+    if (typeof callback !== 'function') return original(opts); // unmanaged: the caller commits
+    if (inside.getStore()) {
+      // Would wait for itself; every service passes the open transaction down instead.
+      return Promise.reject(new Error('A transaction was opened inside another transaction (pass the open one down instead).'));
+    }
+    const run = tail.then(() => inside.run(true, () => original(opts, callback)));
+    tail = run.catch(() => undefined);
+    return run;
+  };
+  (sequelize as unknown as { transaction: typeof queued }).transaction = queued;
+}
+
 /** Opens the database and defines the models. Does not run migrations. */
 export async function connectDatabase(databaseUrl: string): Promise<Db> {
   const target = parseDatabaseUrl(databaseUrl);
   let sequelize: Sequelize;
   if (target.dialect === 'sqlite') {
     if (!target.inMemory) mkdirSync(dirname(target.storage), { recursive: true });
-    sequelize = new Sequelize({ dialect: 'sqlite', storage: target.storage, logging: false });
+    sequelize = new Sequelize({
+      dialect: 'sqlite',
+      storage: target.storage,
+      logging: false,
+      transactionType: Transaction.TYPES.IMMEDIATE,
+    });
+    hardenSqlite(sequelize);
+    // Queries from outside an open transaction wait for it too (one shared connection in memory).
+    serializeSqliteTransactions(sequelize);
   } else {
-    // Needs the `pg` package installed; nothing in the models or migrations is SQLite-only.
+    // The `pg` client (pure JavaScript); nothing in the models or migrations is SQLite-only.
     sequelize = new Sequelize(target.url, { dialect: 'postgres', logging: false });
   }
   await sequelize.authenticate();

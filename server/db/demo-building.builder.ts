@@ -160,7 +160,7 @@ export function buildDemoBuildingPlan(options: DemoBuildingOptions): Plan {
 
   return {
     format: PLAN_FORMAT,
-    version: 1,
+    version: 2,
     name: options.name,
     designBasis: { method: 'LRFD', Fy_ksi: 50, liveLoadReduction: true, deflectionLimits: { live: 360, total: 240 } },
     grids,

@@ -6,6 +6,8 @@ import * as m0003 from './migrations/0003-schemes-plans';
 import * as m0004 from './migrations/0004-team-mail-audit';
 import * as m0005 from './migrations/0005-underlays';
 import * as m0006 from './migrations/0006-scheme-status-prices';
+import * as m0007 from './migrations/0007-plan-v2-composite-columns';
+import * as m0008 from './migrations/0008-underlay-pdf-pages';
 
 export type Migration = MigrationFn<QueryInterface>;
 
@@ -18,7 +20,12 @@ const MIGRATIONS: { name: string; up: Migration; down: Migration }[] = [
   { name: '0004-team-mail-audit', ...m0004 },
   { name: '0005-underlays', ...m0005 },
   { name: '0006-scheme-status-prices', ...m0006 },
+  { name: '0007-plan-v2-composite-columns', ...m0007 },
+  { name: '0008-underlay-pdf-pages', ...m0008 },
 ];
+
+/** The migration names in the order they run. */
+export const MIGRATION_NAMES: readonly string[] = MIGRATIONS.map((m) => m.name);
 
 export function createMigrator(sequelize: Sequelize) {
   return new Umzug({

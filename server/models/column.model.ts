@@ -6,6 +6,12 @@ export interface ColumnAttributes extends PlanElementBase {
   yFt: number;
   /** Level ids at which the column supports framing (it runs through all of them). */
   levels: string[];
+  /** Plan version 2: a locked column size. */
+  shape: string | null;
+  /** Plan version 2: level ids where a new tier starts. */
+  spliceLevels: string[] | null;
+  /** Comma list of optional fields the file gave as an explicit null. */
+  nullFields: string | null;
 }
 
 export function defineColumnModel(sequelize: Sequelize) {
@@ -13,5 +19,8 @@ export function defineColumnModel(sequelize: Sequelize) {
     xFt: { type: DataTypes.DOUBLE, allowNull: false },
     yFt: { type: DataTypes.DOUBLE, allowNull: false },
     levels: { type: DataTypes.JSON, allowNull: false },
+    shape: { type: DataTypes.STRING(40), allowNull: true },
+    spliceLevels: { type: DataTypes.JSON, allowNull: true },
+    nullFields: { type: DataTypes.STRING(200), allowNull: true },
   });
 }

@@ -1,5 +1,5 @@
 import { DataTypes, type Sequelize } from 'sequelize';
-import type { PlanPolygon } from '../../shared/schemas/plan.schema';
+import type { PlanPolygon, PlanSlab } from '../../shared/schemas/plan.schema';
 import { definePlanElementModel, type PlanElementBase } from './plan-element.base';
 
 export interface DeckAttributes extends PlanElementBase {
@@ -7,6 +7,8 @@ export interface DeckAttributes extends PlanElementBase {
   polygon: PlanPolygon;
   spanDirection: 'x' | 'y';
   zoneId: string;
+  /** Plan version 2: the slab build-up, or NULL when absent. */
+  slab: PlanSlab | null;
 }
 
 export function defineDeckModel(sequelize: Sequelize) {
@@ -15,5 +17,6 @@ export function defineDeckModel(sequelize: Sequelize) {
     polygon: { type: DataTypes.JSON, allowNull: false },
     spanDirection: { type: DataTypes.STRING(1), allowNull: false },
     zoneId: { type: DataTypes.STRING(255), allowNull: false },
+    slab: { type: DataTypes.JSON, allowNull: true },
   });
 }

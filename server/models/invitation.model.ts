@@ -1,4 +1,5 @@
 import { DataTypes, type Model, type ModelStatic, type Optional, type Sequelize } from 'sequelize';
+import { emailAttribute } from './email-attribute';
 import type { Role } from '../auth/policy';
 
 export const INVITATION_STATUSES = ['pending', 'accepted', 'revoked', 'replaced'] as const;
@@ -33,7 +34,7 @@ export function defineInvitationModel(sequelize: Sequelize): InvitationModel {
     {
       id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
       firmId: { type: DataTypes.UUID, allowNull: false },
-      email: { type: DataTypes.STRING(254), allowNull: false },
+      email: emailAttribute(),
       role: { type: DataTypes.STRING(20), allowNull: false },
       tokenHash: { type: DataTypes.STRING(64), allowNull: false, unique: true },
       status: { type: DataTypes.STRING(20), allowNull: false },

@@ -18,6 +18,10 @@ export interface MemberAttributes extends PlanElementBase {
   bracing: PlanBracing | null;
   mark: string | null;
   markLocked: boolean | null;
+  /** Plan version 2: composite on/off (NULL with 'composite' in nullFields = follow the design basis). */
+  composite: boolean | null;
+  /** Plan version 2: a stud count to check. */
+  studs: number | null;
   /** Comma list of optional fields the file gave as an explicit null (NULL alone means absent). */
   nullFields: string | null;
 }
@@ -38,6 +42,8 @@ export function defineMemberModel(sequelize: Sequelize) {
     bracing: { type: DataTypes.JSON, allowNull: true },
     mark: { type: DataTypes.STRING(40), allowNull: true },
     markLocked: { type: DataTypes.BOOLEAN, allowNull: true },
+    composite: { type: DataTypes.BOOLEAN, allowNull: true },
+    studs: { type: DataTypes.INTEGER, allowNull: true },
     nullFields: { type: DataTypes.STRING(200), allowNull: true },
   });
 }

@@ -8,12 +8,18 @@ export interface UnderlayAttributes {
   levelId: string;
   /** The name the file was uploaded with (display only; the bytes are stored under storageKey). */
   filename: string;
-  /** From the file's content: image/png or image/jpeg. */
-  mime: 'image/png' | 'image/jpeg';
+  /** From the file's content: image/png, image/jpeg or application/pdf. */
+  mime: 'image/png' | 'image/jpeg' | 'application/pdf';
   bytes: number;
+  /** Image pixels; for a PDF, the shown page's size in PDF points (1/72 in) at scale 1. */
   widthPx: number;
   heightPx: number;
   storageKey: string;
+  /** PDF only (migration 0007): the page shown (1-based) and how many the document has. */
+  pageNumber: number | null;
+  pageCount: number | null;
+  /** Locked: placement (calibration) cannot change until unlocked. */
+  locked: boolean;
   /** Plan coordinates (ft) of the image's top-left pixel. */
   originXFt: number;
   originYFt: number;
@@ -28,7 +34,7 @@ export interface UnderlayAttributes {
 }
 export type UnderlayCreation = Optional<
   UnderlayAttributes,
-  'id' | 'originXFt' | 'originYFt' | 'rotationDeg' | 'opacity' | 'visible' | 'createdAt' | 'updatedAt'
+  'id' | 'originXFt' | 'originYFt' | 'rotationDeg' | 'opacity' | 'visible' | 'pageNumber' | 'pageCount' | 'locked' | 'createdAt' | 'updatedAt'
 >;
 export type UnderlayModel = ModelStatic<Model<UnderlayAttributes, UnderlayCreation>>;
 
@@ -45,6 +51,9 @@ export function defineUnderlayModel(sequelize: Sequelize): UnderlayModel {
       widthPx: { type: DataTypes.INTEGER, allowNull: false },
       heightPx: { type: DataTypes.INTEGER, allowNull: false },
       storageKey: { type: DataTypes.STRING(100), allowNull: false, unique: true },
+      pageNumber: { type: DataTypes.INTEGER, allowNull: true },
+      pageCount: { type: DataTypes.INTEGER, allowNull: true },
+      locked: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
       originXFt: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 0 },
       originYFt: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 0 },
       scaleFtPerPx: { type: DataTypes.DOUBLE, allowNull: false },

@@ -1,4 +1,5 @@
 import { DataTypes, type Model, type ModelStatic, type Optional, type Sequelize } from 'sequelize';
+import { emailAttribute } from './email-attribute';
 
 export interface UserAttributes {
   id: string;
@@ -17,7 +18,7 @@ export function defineUserModel(sequelize: Sequelize): UserModel {
     'User',
     {
       id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
-      email: { type: DataTypes.STRING(254), allowNull: false, unique: true },
+      email: emailAttribute({ unique: true }),
       name: { type: DataTypes.STRING(200), allowNull: false },
       passwordHash: { type: DataTypes.STRING(255), allowNull: false },
       createdAt: { type: DataTypes.DATE, allowNull: false },

@@ -1,6 +1,7 @@
 import express, { Router } from 'express';
 import type { AppContext } from '../app-context';
 import { loadSession } from '../auth/auth.middleware';
+import { limitJsonDepth, requireJsonBody } from '../middleware/body-type.middleware';
 import { requireSameOrigin } from '../middleware/csrf.middleware';
 import { apiNotFound } from '../middleware/error.middleware';
 import { auditRoutes } from './audit.routes';
@@ -8,6 +9,7 @@ import { calcBookRoutes } from './calc-book.routes';
 import { comparisonRoutes } from './comparison.routes';
 import { firmsRoutes } from './firms.routes';
 import { healthRoutes } from './health.routes';
+import { ifcExportRoutes } from './ifc-export.routes';
 import { invitationsRoutes } from './invitations.routes';
 import { marksRoutes } from './marks.routes';
 import { notificationsRoutes } from './notifications.routes';
@@ -21,7 +23,7 @@ import { scheduleRoutes } from './schedule.routes';
 import { projectSchemesRoutes, schemesRoutes } from './schemes.routes';
 import { sessionRoutes } from './session.routes';
 import { teamRoutes } from './team.routes';
-import { underlaysRoutes } from './underlays.routes';
+import { UNDERLAY_UPLOAD_PATHS, underlaysRoutes } from './underlays.routes';
 import { unitPricesRoutes } from './unit-prices.routes';
 
 export const JSON_BODY_LIMIT = '2mb';
@@ -30,7 +32,9 @@ export const JSON_BODY_LIMIT = '2mb';
 export function apiRoutes(ctx: AppContext): Router {
   const api = Router();
   api.use(requireSameOrigin);
+  api.use(requireJsonBody(UNDERLAY_UPLOAD_PATHS));
   api.use(express.json({ limit: JSON_BODY_LIMIT }));
+  api.use(limitJsonDepth);
   api.use(loadSession(ctx));
 
   api.use('/health', healthRoutes());
@@ -44,6 +48,8 @@ export function apiRoutes(ctx: AppContext): Router {
   api.use('/schemes', scheduleRoutes(ctx));
   api.use('/schemes', planSheetRoutes(ctx));
   api.use('/schemes', calcBookRoutes(ctx));
+  // Models out (issue 14): the framing as IFC4.
+  api.use('/schemes', ifcExportRoutes(ctx));
   // Review (issue 7): status, comments, activity; Tonnage comparison; firm unit prices.
   api.use('/schemes', schemeStatusRoutes(ctx));
   api.use('/schemes', schemeCommentsRoutes(ctx));

@@ -1,6 +1,7 @@
 import { Router, type Request } from 'express';
 import type { AppContext } from '../app-context';
 import { authOf, requireRole } from '../auth/auth.middleware';
+import { limitTokenUsePerIp } from '../middleware/rate-limit.middleware';
 import { idParams, validate } from '../middleware/validate.middleware';
 import { invitationAcceptBody, invitationCreateBody, tokenParams } from '../schemas/team.schema';
 import {
@@ -18,6 +19,7 @@ const requestAddress = (req: Request) => ({ protocol: req.protocol, host: req.ge
 
 export function invitationsRoutes(ctx: AppContext): Router {
   const router = Router();
+  const limited = limitTokenUsePerIp(ctx);
 
   router.get('/', requireRole('team:manage'), async (_req, res) => {
     res.json({ invitations: await listPendingInvitations(ctx, authOf(res).firmId) });
@@ -41,15 +43,14 @@ export function invitationsRoutes(ctx: AppContext): Router {
     res.status(204).end();
   });
 
-  // Public: the link in the e-mail is the credential.
-  router.get('/:token', async (req, res) => {
+  // Public: the link in the e-mail is the credential. Both uses count against the per-IP
+  // one-time-link limit (acceptance hashes a password).
+  router.get('/:token', limited, async (req, res) => {
     const { params } = validate(req, { params: tokenParams });
     res.json({ invitation: await previewInvitation(ctx, params.token) });
   });
 
-  // Not counted against the per-IP sign-in limit: a 256-bit token cannot be guessed, and an
-  // unknown one is refused before any password hashing.
-  router.post('/:token/accept', async (req, res) => {
+  router.post('/:token/accept', limited, async (req, res) => {
     const { params, body } = validate(req, { params: tokenParams, body: invitationAcceptBody });
     const result = await acceptInvitation(ctx, params.token, body);
     await signOut(ctx, res.locals.auth?.sessionId);

@@ -1,5 +1,6 @@
 import { Router } from 'express';
 import type { AppContext } from '../app-context';
+import { limitTokenUsePerIp } from '../middleware/rate-limit.middleware';
 import { validate } from '../middleware/validate.middleware';
 import { passwordResetCompleteBody, passwordResetRequestBody, tokenParams } from '../schemas/team.schema';
 import { publicBaseUrl } from '../services/mail.service';
@@ -9,9 +10,11 @@ import {
   requestPasswordReset,
 } from '../services/password-reset.service';
 
-// Public: someone who forgot their password is not signed in.
+// Public: someone who forgot their password is not signed in. Asking for a link counts against
+// the per-IP sign-in limit; using one counts against the per-IP one-time-link limit.
 export function passwordResetRoutes(ctx: AppContext): Router {
   const router = Router();
+  const limited = limitTokenUsePerIp(ctx);
 
   router.post('/', async (req, res) => {
     const { body } = validate(req, { body: passwordResetRequestBody });
@@ -19,12 +22,12 @@ export function passwordResetRoutes(ctx: AppContext): Router {
     res.status(202).json(await requestPasswordReset(ctx, { email: body.email, ip: req.ip ?? 'unknown', baseUrl }));
   });
 
-  router.get('/:token', async (req, res) => {
+  router.get('/:token', limited, async (req, res) => {
     const { params } = validate(req, { params: tokenParams });
     res.json({ reset: await checkPasswordReset(ctx, params.token) });
   });
 
-  router.post('/:token', async (req, res) => {
+  router.post('/:token', limited, async (req, res) => {
     const { params, body } = validate(req, { params: tokenParams, body: passwordResetCompleteBody });
     const result = await completePasswordReset(ctx, params.token, body);
     // Every session of the person ended, this browser's included.

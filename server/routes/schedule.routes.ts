@@ -1,4 +1,5 @@
 import { Router, type Response } from 'express';
+import { z } from 'zod';
 import type { AppContext } from '../app-context';
 import { authOf, requireRole } from '../auth/auth.middleware';
 import { idParams, validate } from '../middleware/validate.middleware';
@@ -15,6 +16,10 @@ export function cautionHeader(caution: string): string {
   return caution.replace(/[\u2018\u2019]/g, "'").replace(/[\u201c\u201d]/g, '"').replace(/[\u2013\u2014]/g, '-').replace(/[^\x20-\x7e]/g, '');
 }
 
+const csvQuery = z.object({
+  by: z.enum(['member', 'mark'], { message: 'by: "member" (one row per member) or "mark" (one row per mark)' }).default('member'),
+});
+
 /** /api/schemes/:id/schedule…: the member schedule as JSON and CSV. */
 export function scheduleRoutes(ctx: AppContext): Router {
   const router = Router();
@@ -25,8 +30,8 @@ export function scheduleRoutes(ctx: AppContext): Router {
   });
 
   router.get('/:id/schedule.csv', requireRole('export:read'), async (req, res) => {
-    const { params } = validate(req, { params: idParams });
-    const { filename, csv, caution } = await getScheduleCsv(serviceContext(ctx, res), params.id);
+    const { params, query } = validate(req, { params: idParams, query: csvQuery });
+    const { filename, csv, caution } = await getScheduleCsv(serviceContext(ctx, res), params.id, query.by);
     res.setHeader('Content-Disposition', `attachment; filename="${filename}"`);
     res.setHeader('X-Baywright-Caution', cautionHeader(caution));
     res.setHeader('Access-Control-Expose-Headers', 'X-Baywright-Caution');

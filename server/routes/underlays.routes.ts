@@ -1,56 +1,50 @@
-import type { Request, Response } from 'express';
 import { Router } from 'express';
-import multer from 'multer';
 import { z } from 'zod';
 import type { AppContext } from '../app-context';
 import { authOf, requireRole } from '../auth/auth.middleware';
-import { AppError } from '../errors/app-error';
+import { receiveCheckedUpload } from '../middleware/upload.middleware';
+import { isPdf } from '../pdf/pdf-pages.reader';
 import { idParams, validate } from '../middleware/validate.middleware';
 import {
   createUnderlay,
   deleteUnderlay,
   getUnderlayImage,
   listUnderlays,
+  sniffImage,
   UNDERLAY_MAX_BYTES,
   updateUnderlay,
 } from '../services/underlays.service';
 
-// POST   /api/schemes/:id/underlays   multipart: file (PNG or JPEG, ≤ 10 MB), level   owner, engineer
+// POST   /api/schemes/:id/underlays   multipart: file (PNG, JPEG or PDF, ≤ 10 MB), level, page?   owner, engineer
 // GET    /api/schemes/:id/underlays                                                   every role
-// GET    /api/underlays/:id/image     the stored bytes                                every role
-// PATCH  /api/underlays/:id           { placement?, opacity?, visible? }              owner, engineer
+// GET    /api/underlays/:id/image     the stored bytes (image or PDF)                 every role
+// PATCH  /api/underlays/:id           { placement?, opacity?, visible?, locked?, page? }   owner, engineer
 // DELETE /api/underlays/:id                                                           owner, engineer
 
-const upload = multer({
-  storage: multer.memoryStorage(),
-  limits: { fileSize: UNDERLAY_MAX_BYTES, files: 1, fields: 5, fieldSize: 1024, parts: 8 },
-});
+/**
+ * Underlay files: checked by content before anything is stored. Images are walked whole here
+ * (PNG or JPEG structure and size); a PDF is recognised by its header here and read whole by
+ * pdfjs (pages, encryption, damage) in createUnderlay before it is stored.
+ */
+const underlayUpload = {
+  field: 'file',
+  maxBytes: UNDERLAY_MAX_BYTES,
+  what: 'a PNG or JPEG image or a PDF',
+  check: (buf: Buffer) => (isPdf(buf) ? ('pdf' as const) : sniffImage(buf)),
+};
 
-const MB = UNDERLAY_MAX_BYTES / (1024 * 1024);
-
-/** Reads the multipart body; multer's limits become clear 413/400 answers. */
-function receiveUpload(req: Request, res: Response): Promise<void> {
-  return new Promise((resolve, reject) => {
-    upload.single('file')(req, res, (err: unknown) => {
-      if (!err) return resolve();
-      if (err instanceof multer.MulterError) {
-        if (err.code === 'LIMIT_FILE_SIZE') {
-          return reject(new AppError(413, 'payload_too_large', `The image is larger than ${MB} MB. Reduce its resolution or save it as JPEG and try again.`, {
-            fields: { file: `At most ${MB} MB` },
-          }));
-        }
-        if (err.code === 'LIMIT_UNEXPECTED_FILE') {
-          return reject(AppError.badRequest(`Send one image in the multipart part named "file" (got "${err.field ?? ''}").`, { file: 'Send one image as "file"' }));
-        }
-        return reject(AppError.badRequest(`The upload could not be read: ${err.message}.`));
-      }
-      reject(err);
-    });
-  });
-}
+const pageNumber = z.number({ error: 'page must be a whole number from 1' }).int('page must be a whole number from 1').min(1, 'page must be a whole number from 1').max(100000, 'page is out of range');
 
 const uploadFields = z.object({
   level: z.string({ error: 'Choose the level this plan belongs to' }).trim().min(1, 'Choose the level this plan belongs to').max(255),
+  // Multipart fields arrive as text: only digits are a page number.
+  page: z
+    .string()
+    .trim()
+    .regex(/^\d{1,6}$/, 'page must be a whole number from 1')
+    .transform(Number)
+    .pipe(pageNumber)
+    .optional(),
 });
 
 const finite = (what: string) => z.number({ error: `${what} must be a number` }).refine(Number.isFinite, `${what} must be a finite number`);
@@ -69,9 +63,14 @@ const underlayPatchBody = z
     placement: placementPatch.optional(),
     opacity: z.number({ error: 'opacity must be a number from 0 to 1' }).min(0, 'opacity must be from 0 to 1').max(1, 'opacity must be from 0 to 1').optional(),
     visible: z.boolean({ error: 'visible must be true or false' }).optional(),
+    locked: z.boolean({ error: 'locked must be true or false' }).optional(),
+    page: pageNumber.optional(),
   })
   .strict()
-  .refine((b) => b.placement !== undefined || b.opacity !== undefined || b.visible !== undefined, 'Send placement, opacity or visible');
+  .refine((b) => Object.values(b).some((v) => v !== undefined), 'Send placement, opacity, visible, locked or page');
+
+/** Paths (under /api) whose write takes a multipart body; every other write body is JSON. */
+export const UNDERLAY_UPLOAD_PATHS: readonly RegExp[] = [/^\/schemes\/[^/]+\/underlays\/?$/];
 
 export function underlaysRoutes(ctx: AppContext): Router {
   const router = Router();
@@ -80,11 +79,12 @@ export function underlaysRoutes(ctx: AppContext): Router {
 
   router.post('/schemes/:id/underlays', requireRole('plan:write'), async (req, res) => {
     const { params } = validate(req, { params: idParams });
-    await receiveUpload(req, res);
+    const file = await receiveCheckedUpload(req, res, underlayUpload);
     const { body } = validate(req, { body: uploadFields });
     const underlay = await createUnderlay(db, storage, authOf(res), params.id, {
       levelId: body.level,
-      file: req.file ? { buffer: req.file.buffer, originalName: req.file.originalname } : null,
+      page: body.page,
+      file: file ? { buffer: file.buffer, originalName: file.originalName } : null,
     });
     res.status(201).json({ underlay });
   });
@@ -103,6 +103,8 @@ export function underlaysRoutes(ctx: AppContext): Router {
         {
           headers: {
             'Content-Type': image.mime,
+            // A PDF opened straight in a tab runs in a sandbox: no scripts, no same-origin access.
+            'Content-Security-Policy': 'sandbox',
             'Cache-Control': 'private, max-age=3600',
             'X-Content-Type-Options': 'nosniff',
             'Content-Disposition': `inline; filename="${image.filename.replace(/["\\]/g, '_').replace(/[^\x20-\x7e]/g, '_')}"`,
@@ -115,7 +117,7 @@ export function underlaysRoutes(ctx: AppContext): Router {
 
   router.patch('/underlays/:id', requireRole('plan:write'), async (req, res) => {
     const { params, body } = validate(req, { params: idParams, body: underlayPatchBody });
-    res.json({ underlay: await updateUnderlay(db, authOf(res).firmId, params.id, body) });
+    res.json({ underlay: await updateUnderlay(db, storage, authOf(res).firmId, params.id, body) });
   });
 
   router.delete('/underlays/:id', requireRole('plan:write'), async (req, res) => {

@@ -1,5 +1,5 @@
 import { SCHEME_CAUTION, type SchemeResult } from '../../shared/engine/index';
-import { assignMarks } from '../../shared/engine/scheme/member-marks.scheme';
+import { assignMarks, withIssuedMarks } from '../../shared/engine/scheme/member-marks.scheme';
 import type { Plan, PlanMember } from '../../shared/schemas/plan.schema';
 import { formatFeetInches } from '../../shared/drafting/grid-location.drafting';
 import { AppError } from '../errors/app-error';
@@ -59,31 +59,44 @@ function conflict(current: number, yours: number): AppError {
 }
 
 /**
- * Manual marks on one level may be shared only by members of the same kind, size and span
- * (one piece mark = one fabricated piece). Each level is checked on its own.
+ * A manual mark on one level may be shared only by members of the same kind, size and span
+ * (one piece mark = one fabricated piece): neither by other members locked to it, nor by the
+ * members that already carry it as issued (`current`, the marks before the edit). Each level
+ * is checked on its own.
  */
-export function checkManualMarks(plan: Plan, design: Pick<SchemeResult, 'members'>, levelName: (id: string) => string): void {
+export function checkManualMarks(
+  plan: Plan,
+  design: Pick<SchemeResult, 'members'>,
+  levelName: (id: string) => string,
+  current: ReadonlyMap<string, string> = new Map(),
+): void {
   const designed = new Map(design.members.map((m) => [m.id, m]));
-  const byMark = new Map<string, PlanMember>();
+  const carriers = new Map<string, PlanMember[]>();
+  const add = (key: string, m: PlanMember) => {
+    const list = carriers.get(key);
+    if (list) list.push(m);
+    else carriers.set(key, [m]);
+  };
   for (const m of plan.members) {
-    if (!m.markLocked || !m.mark) continue;
-    const key = `${m.level}\u0000${m.mark}`;
-    const first = byMark.get(key);
-    if (!first) {
-      byMark.set(key, m);
-      continue;
-    }
-    const a = designed.get(first.id);
-    const b = designed.get(m.id);
-    const same =
-      a && b && a.kind === b.kind && a.shape !== null && a.shape === b.shape && Math.abs(a.span_ft - b.span_ft) <= SPAN_TOLERANCE_FT;
-    if (!same) {
+    const mark = m.markLocked && m.mark ? m.mark : current.get(m.id);
+    if (mark) add(`${m.level}\u0000${mark}`, m);
+  }
+  for (const list of carriers.values()) {
+    // The holder is a member already carrying the mark as issued, else the first locked to it.
+    const holder = list.find((m) => !(m.markLocked && m.mark)) ?? list[0];
+    const a = designed.get(holder.id);
+    for (const m of list) {
+      if (m === holder || !(m.markLocked && m.mark)) continue;
+      const b = designed.get(m.id);
+      const same =
+        a && b && a.kind === b.kind && a.shape !== null && a.shape === b.shape && Math.abs(a.span_ft - b.span_ft) <= SPAN_TOLERANCE_FT;
+      if (same) continue;
       const describe = (d: typeof a, id: string) =>
         d ? `${d.kind} ${d.shape ?? 'not sized'}, span ${formatFeetInches(d.span_ft)}` : `member ${id} (not designed)`;
       throw marksInvalid(
-        `Mark ${m.mark} on ${levelName(m.level)} is already used by member ${first.id} (${describe(a, first.id)}); member ${m.id} is ${describe(b, m.id)}. A mark can be shared only by members of the same size and span.`,
+        `Mark ${m.mark} on ${levelName(m.level)} is already used by member ${holder.id} (${describe(a, holder.id)}); member ${m.id} is ${describe(b, m.id)}. A mark can be shared only by members of the same size and span.`,
         m.id,
-        m.mark,
+        m.mark!,
       );
     }
   }
@@ -103,6 +116,7 @@ function remark(design: DesignView, plan: Plan): SchemeResult {
         span_ft: d.span_ft,
         midpoint: [(m.start[0] + m.end[0]) / 2, (m.start[1] + m.end[1]) / 2] as const,
         lockedMark: m.markLocked && m.mark ? m.mark : null,
+        issuedMark: m.markLocked ? null : (m.mark ?? null),
       };
     }),
     plan.levels,
@@ -119,11 +133,14 @@ function memberMarks(result: Pick<SchemeResult, 'members'>, plan: Plan): MemberM
 async function saveMarks(
   ctx: SchemeServiceContext,
   scheme: SchemeRow,
-  plan: Plan,
+  edited: Plan,
   design: DesignView,
   expectedRevision: number,
   note: string,
 ): Promise<MarksResult> {
+  const result = remark(design, edited);
+  // The marks given are stored on the members, so later designs keep them.
+  const plan = withIssuedMarks(edited, new Map(result.members.map((m) => [m.id, m.mark])));
   let revision: number;
   try {
     revision = await commitPlanRevision(ctx.db, scheme, { plan, userId: ctx.actor.userId, note, expectedRevision });
@@ -134,7 +151,6 @@ async function saveMarks(
     }
     throw err;
   }
-  const result = remark(design, plan);
   if (design.revision === expectedRevision) {
     await storeDesignRun(ctx.db, { schemeId: scheme.getDataValue('id'), revision, result, userId: ctx.actor.userId });
   }
@@ -148,9 +164,12 @@ export async function editMarks(
   input: { revision: number; marks: MarkEdit[] },
 ): Promise<MarksResult> {
   const scheme = await findOwnScheme(ctx, schemeId);
-  const current = scheme.getDataValue('revision');
-  if (current !== input.revision) throw conflict(current, input.revision);
-  const plan = await readPlan(ctx.db, scheme.get({ plain: true }));
+  const currentRevision = scheme.getDataValue('revision');
+  if (currentRevision !== input.revision) throw conflict(currentRevision, input.revision);
+  const design = (await getSchemeDesign(ctx, schemeId, { designIfStale: true })) as unknown as DesignView;
+  // Marks as they stand are issued onto the members first, so the members not edited keep theirs.
+  const current = new Map(design.members.map((m) => [m.id, m.mark]));
+  const plan = withIssuedMarks(await readPlan(ctx.db, scheme.get({ plain: true })), current);
   const seen = new Set<string>();
   const byId = new Map(plan.members.map((m) => [m.id, m]));
   for (const edit of input.marks) {
@@ -166,31 +185,33 @@ export async function editMarks(
       member.markLocked = true;
     }
   }
-  const design = (await getSchemeDesign(ctx, schemeId, { designIfStale: true })) as unknown as DesignView;
   const names = new Map(plan.levels.map((l) => [l.id, l.name]));
-  checkManualMarks(plan, design, (id) => names.get(id) ?? id);
+  const edited = new Set(input.marks.map((e) => e.memberId));
+  checkManualMarks(plan, design, (id) => names.get(id) ?? id, new Map([...current].filter(([id]) => !edited.has(id))));
   const list = input.marks.map((e) => `${e.memberId}→${e.mark ?? 'rule'}`).join(', ');
   return saveMarks(ctx, scheme, plan, design, input.revision, `Marks edited: ${list}`.slice(0, 500));
 }
 
-/** POST /api/schemes/:id/marks/renumber: marks by the rule again; manual ones stay unless keepManual is false. */
+/**
+ * POST /api/schemes/:id/marks/renumber: the one place marks move. Issued marks are cleared and
+ * every design numbered afresh in plan order; manual ones stay unless keepManual is false.
+ */
 export async function renumberMarks(ctx: SchemeServiceContext, schemeId: string, input: { keepManual: boolean }): Promise<MarksResult> {
   const scheme = await findOwnScheme(ctx, schemeId);
   const revision = scheme.getDataValue('revision');
   const design = (await getSchemeDesign(ctx, schemeId, { designIfStale: true })) as unknown as DesignView;
-  const plan = await readPlan(ctx.db, scheme.get({ plain: true }));
-  let changed = false;
+  const stored = await readPlan(ctx.db, scheme.get({ plain: true }));
+  const plan: Plan = structuredClone(stored);
   for (const m of plan.members) {
     if (input.keepManual && m.markLocked && m.mark) continue;
-    if (m.mark !== undefined || m.markLocked !== undefined) {
-      delete m.mark;
-      delete m.markLocked;
-      changed = true;
-    }
+    delete m.mark;
+    delete m.markLocked;
   }
-  if (!changed) {
-    const result = remark(design, plan);
-    return { revision, changed: false, marks: memberMarks(result, plan), caution: result.caution ?? SCHEME_CAUTION };
+  const result = remark(design, plan);
+  const renumbered = withIssuedMarks(plan, new Map(result.members.map((m) => [m.id, m.mark])));
+  const same = (a: PlanMember, b: PlanMember) => (a.mark ?? null) === (b.mark ?? null) && Boolean(a.markLocked) === Boolean(b.markLocked);
+  if (renumbered.members.every((m, i) => same(m, stored.members[i]))) {
+    return { revision, changed: false, marks: memberMarks(result, stored), caution: result.caution ?? SCHEME_CAUTION };
   }
   const note = input.keepManual ? 'Marks renumbered (manual marks kept)' : 'Marks renumbered (manual marks released)';
   return saveMarks(ctx, scheme, plan, design, revision, note);

@@ -105,7 +105,7 @@ export function storageProblems(plan: Plan): PlanProblem[] {
 
 /** Member fields that are optional and may also be null: NULL in the column means absent
  *  unless the field is listed in null_fields. */
-const MEMBER_OPTIONAL_NULLABLE = ['minDepth_in', 'allowedNominalDepths', 'Lb_override_ft', 'bracing', 'mark'] as const;
+const MEMBER_OPTIONAL_NULLABLE = ['minDepth_in', 'allowedNominalDepths', 'Lb_override_ft', 'bracing', 'mark', 'composite', 'studs'] as const;
 
 function memberRow(schemeId: string, m: PlanMember, position: number): Omit<MemberAttributes, 'id'> {
   const explicitNulls = MEMBER_OPTIONAL_NULLABLE.filter((k) => k in m && m[k] === null);
@@ -127,6 +127,8 @@ function memberRow(schemeId: string, m: PlanMember, position: number): Omit<Memb
     bracing: m.bracing ?? null,
     mark: m.mark ?? null,
     markLocked: m.markLocked ?? null,
+    composite: m.composite ?? null,
+    studs: m.studs ?? null,
     nullFields: explicitNulls.length > 0 ? explicitNulls.join(',') : null,
   };
 }
@@ -155,7 +157,15 @@ export async function replacePlanRows(db: Db, schemeId: string, plan: Plan, tran
   );
   await models.Column.bulkCreate(
     at(plan.columns).map(({ item: c, position }) => ({
-      schemeId, elementId: c.id, position, xFt: c.x_ft, yFt: c.y_ft, levels: c.levels,
+      schemeId,
+      elementId: c.id,
+      position,
+      xFt: c.x_ft,
+      yFt: c.y_ft,
+      levels: c.levels,
+      shape: c.shape ?? null,
+      spliceLevels: c.spliceLevels ?? null,
+      nullFields: 'shape' in c && c.shape === null ? 'shape' : null,
     })),
     opts,
   );
@@ -178,7 +188,7 @@ export async function replacePlanRows(db: Db, schemeId: string, plan: Plan, tran
   );
   await models.Deck.bulkCreate(
     at(plan.decks).map(({ item: d, position }) => ({
-      schemeId, elementId: d.id, position, levelId: d.level, polygon: d.polygon, spanDirection: d.spanDirection, zoneId: d.zone,
+      schemeId, elementId: d.id, position, levelId: d.level, polygon: d.polygon, spanDirection: d.spanDirection, zoneId: d.zone, slab: d.slab ?? null,
     })),
     opts,
   );
@@ -254,7 +264,7 @@ export async function readPlan(db: Db, scheme: SchemeAttributes, transaction?: T
 
   const plan: Plan = {
     format: PLAN_FORMAT,
-    version: 1,
+    version: 2,
     name: scheme.name,
     designBasis: json(scheme.designBasis),
     levels: a<LevelAttributes>(levels).map((l) => {
@@ -262,7 +272,12 @@ export async function readPlan(db: Db, scheme: SchemeAttributes, transaction?: T
       setOptional(level, 'roof', bool(l.roof));
       return level;
     }),
-    columns: a<ColumnAttributes>(columns).map((c) => ({ id: c.elementId, x_ft: c.xFt, y_ft: c.yFt, levels: json<string[]>(c.levels) })),
+    columns: a<ColumnAttributes>(columns).map((c) => {
+      const column: Plan['columns'][number] = { id: c.elementId, x_ft: c.xFt, y_ft: c.yFt, levels: json<string[]>(c.levels) };
+      setOptional(column, 'shape', c.shape, (c.nullFields ?? '').split(',').includes('shape'));
+      setOptional(column, 'spliceLevels', c.spliceLevels === null ? null : json(c.spliceLevels));
+      return column;
+    }),
     members: a<MemberAttributes>(members).map((r) => {
       const nulls = new Set((r.nullFields ?? '').split(',').filter(Boolean));
       const m: PlanMember = {
@@ -280,6 +295,8 @@ export async function readPlan(db: Db, scheme: SchemeAttributes, transaction?: T
       setOptional(m, 'bracing', r.bracing === null ? null : json(r.bracing), nulls.has('bracing'));
       setOptional(m, 'mark', r.mark, nulls.has('mark'));
       setOptional(m, 'markLocked', bool(r.markLocked));
+      setOptional(m, 'composite', bool(r.composite), nulls.has('composite'));
+      setOptional(m, 'studs', r.studs, nulls.has('studs'));
       return m;
     }),
     zones: a<ZoneAttributes>(zones).map((z) => ({
@@ -293,9 +310,11 @@ export async function readPlan(db: Db, scheme: SchemeAttributes, transaction?: T
       roofLive_psf: z.roofLivePsf,
       snow_psf: z.snowPsf,
     })),
-    decks: a<DeckAttributes>(decks).map((d) => ({
-      id: d.elementId, level: d.levelId, polygon: json(d.polygon), spanDirection: d.spanDirection, zone: d.zoneId,
-    })),
+    decks: a<DeckAttributes>(decks).map((d) => {
+      const deck: Plan['decks'][number] = { id: d.elementId, level: d.levelId, polygon: json(d.polygon), spanDirection: d.spanDirection, zone: d.zoneId };
+      setOptional(deck, 'slab', d.slab === null ? null : json(d.slab));
+      return deck;
+    }),
     pointLoads: a<PointLoadAttributes>(pointLoads).map((p) => {
       const load: Plan['pointLoads'][number] = { id: p.elementId, level: p.levelId, x_ft: p.xFt, y_ft: p.yFt, D_kip: p.dKip, L_kip: p.lKip };
       setOptional(load, 'Lr_kip', p.lrKip);

@@ -1,7 +1,7 @@
 import type { SchemeResult } from '../../shared/engine/index';
 import { SCHEME_CAUTION } from '../../shared/engine/index';
-import { scheduleBasis, scheduleRows, type ScheduleBasis, type ScheduleRow } from '../../shared/drafting/schedule.drafting';
-import { scheduleCsv } from '../../shared/drafting/schedule-csv.drafting';
+import { scheduleBasis, scheduleMarkRows, scheduleRows, type ScheduleBasis, type ScheduleRow } from '../../shared/drafting/schedule.drafting';
+import { SCHEDULE_MARK_CSV_COLUMNS, scheduleCsv } from '../../shared/drafting/schedule-csv.drafting';
 import type { Plan, PlanProblem } from '../../shared/schemas/plan.schema';
 import { findOwnScheme, readPlan, type SchemeServiceContext } from './plan-store.service';
 import { getSchemeDesign } from './scheme-design.service';
@@ -56,15 +56,16 @@ export async function getSchedule(ctx: SchemeServiceContext, schemeId: string): 
   };
 }
 
-/** GET …/schedule.csv: the same rows as the schedule, one per member. */
+/** GET …/schedule.csv: the schedule's rows, one per member (or one per mark with `by: 'mark'`). */
 export async function getScheduleCsv(
   ctx: SchemeServiceContext,
   schemeId: string,
+  by: 'member' | 'mark' = 'member',
 ): Promise<{ filename: string; csv: string; caution: string }> {
   const schedule = await getSchedule(ctx, schemeId);
   return {
-    filename: `${fileSlug(schedule.scheme.name)}-schedule-r${schedule.scheme.revision}.csv`,
-    csv: scheduleCsv(schedule.rows),
+    filename: `${fileSlug(schedule.scheme.name)}-schedule${by === 'mark' ? '-by-mark' : ''}-r${schedule.scheme.revision}.csv`,
+    csv: by === 'mark' ? scheduleCsv(scheduleMarkRows(schedule.rows), SCHEDULE_MARK_CSV_COLUMNS) : scheduleCsv(schedule.rows),
     caution: schedule.caution,
   };
 }

@@ -1,7 +1,8 @@
 import { Op, type Model, type Transaction } from 'sequelize';
-import { designScheme, type SchemeResult } from '../../shared/engine/index';
+import type { SchemeResult } from '../../shared/engine/index';
 import type { Plan } from '../../shared/schemas/plan.schema';
 import { AppError } from '../errors/app-error';
+import { designPool } from './design-runs/design-pool';
 import type { DesignRunAttributes, DesignRunCreation } from '../models/design-run.model';
 import type { Db } from '../models/models';
 import { findOwnScheme, readPlan, type SchemeServiceContext } from './plan-store.service';
@@ -87,14 +88,12 @@ async function latestRun(db: Db, schemeId: string, transaction?: Transaction): P
   });
 }
 
-/** Runs the engine on a plan; an engine failure is a clear 422, never a 500. */
-export function runEngine(plan: Plan): SchemeResult {
-  try {
-    return designScheme(plan);
-  } catch (err) {
-    const reason = err instanceof Error ? err.message : String(err);
-    throw new AppError(422, 'design_failed', `The plan could not be designed: ${reason}`);
-  }
+/**
+ * Runs the engine on a plan in a design worker (off the request thread, within the time and
+ * memory budget); an engine failure or a run over budget is a clear 422, never a 500.
+ */
+export function runEngine(plan: Plan): Promise<SchemeResult> {
+  return designPool().run(plan);
 }
 
 /** Stores a design result against a revision; returns the stored row. */
@@ -159,7 +158,7 @@ export async function designSchemeNow(
   const scheme = await findOwnScheme(ctx, schemeId);
   const attrs = scheme.get({ plain: true });
   const plan = await readPlan(ctx.db, attrs);
-  const result = runEngine(plan);
+  const result = await runEngine(plan);
   const run = await storeDesignRun(ctx.db, {
     schemeId,
     revision: attrs.revision,

@@ -1,6 +1,7 @@
 import type { WhereOptions } from 'sequelize';
-import { buildFramingTopology } from '../../shared/engine/index';
+import { buildFramingTopology, deckOverlapProblems } from '../../shared/engine/index';
 import {
+  DEFAULT_COMPOSITE_SETTINGS,
   exportPlanFile,
   parsePlanFile,
   PLAN_FORMAT,
@@ -36,13 +37,16 @@ export const DEFAULT_DESIGN_BASIS: PlanDesignBasis = {
   Fy_ksi: 50,
   liveLoadReduction: true,
   deflectionLimits: { live: 360, total: 240 },
+  // Composite design is the normal case for beams under concrete on deck (design-basis §6);
+  // members of a deck without a slab build-up stay bare steel and say so.
+  composite: { ...DEFAULT_COMPOSITE_SETTINGS, enabled: true },
 };
 
 /** A new scheme: one level, no framing yet. */
 export function emptyPlan(name: string): Plan {
   return {
     format: PLAN_FORMAT,
-    version: 1,
+    version: 2,
     name,
     designBasis: structuredClone(DEFAULT_DESIGN_BASIS),
     grids: [],
@@ -152,7 +156,7 @@ export function acceptPlan(
  */
 function topologyProblems(plan: Plan): PlanProblem[] {
   try {
-    return buildFramingTopology(plan).problems;
+    return [...buildFramingTopology(plan).problems, ...deckOverlapProblems(plan)];
   } catch {
     return [];
   }

@@ -18,9 +18,12 @@ function rateLimited(retryAfterSeconds: number, message: string): AppError {
   });
 }
 
-/** Counts one sign-in or sign-up attempt from ip; throws 429 above the per-IP ceiling. */
-export function countAttemptFromIp(ctx: AppContext, ip: string): void {
-  const decision = ctx.limiters.perIpAttempts.consume(ip);
+/**
+ * Counts one sign-in or sign-up attempt (or, with the token limiter, one use of a one-time
+ * link) from ip; throws 429 above the per-IP ceiling.
+ */
+export function countAttemptFromIp(ctx: AppContext, ip: string, limiter = ctx.limiters.perIpAttempts): void {
+  const decision = limiter.consume(ip);
   if (!decision.allowed) {
     throw rateLimited(
       decision.retryAfterSeconds,

@@ -1,16 +1,20 @@
-// Underlays: an architectural plan image under one level of a scheme, to trace framing over.
-// The type is read from the file's CONTENT (magic bytes and header), never from its name or
-// the browser's mime type; the pixel size comes from the header too. Bytes are stored on disk
-// under <uploadDir>/underlays/<uuid>.<ext>; the row keeps the metadata and the placement.
+// Underlays: an architectural plan (PNG or JPEG image, or one page of a PDF) under one level
+// of a scheme, to trace framing over. The type is read from the file's CONTENT (magic bytes
+// and header; a PDF is opened with pdfjs-dist), never from its name or the browser's mime
+// type; the pixel size comes from the header (a PDF page: its size in points). Bytes are
+// stored once, as uploaded, on disk under <uploadDir>/underlays/<uuid>.<ext>; the row keeps
+// the metadata, the PDF page shown and the placement. The browser renders PDF pages.
 // Every lookup goes through the scheme's project to the caller's firm: another firm's scheme
 // or underlay is "not found", never forbidden.
 import { randomUUID } from 'node:crypto';
-import { mkdir, rm, stat, writeFile } from 'node:fs/promises';
+import { mkdir, readFile, rm, stat, writeFile } from 'node:fs/promises';
 import { basename, join, resolve } from 'node:path';
 import type { Model } from 'sequelize';
 import { AppError } from '../errors/app-error';
+import { isPdf, readPdfPage } from '../pdf/pdf-pages.reader';
 import type { Db } from '../models/models';
 import type { UnderlayAttributes, UnderlayCreation } from '../models/underlay.model';
+import { checkJpegEnd, checkPngStructure, looksLikeJpeg, looksLikePng, unsupportedContent } from './file-content.service';
 
 export const UNDERLAY_MAX_BYTES = 10 * 1024 * 1024;
 /** Larger sides do not draw reliably in browser canvases. */
@@ -19,10 +23,10 @@ export const UNDERLAY_MAX_SIDE_PX = 16384;
 export const UNDERLAY_DEFAULT_SCALE_FT_PER_PX = 0.05;
 export const UNDERLAY_DEFAULT_OPACITY = 0.5;
 
-export type UnderlayMime = 'image/png' | 'image/jpeg';
+export type UnderlayMime = 'image/png' | 'image/jpeg' | 'application/pdf';
 
 export interface ImageInfo {
-  mime: UnderlayMime;
+  mime: 'image/png' | 'image/jpeg';
   extension: 'png' | 'jpg';
   widthPx: number;
   heightPx: number;
@@ -43,11 +47,18 @@ export interface UnderlayView {
   filename: string;
   mime: UnderlayMime;
   bytes: number;
+  /** Image pixels; for a PDF, the shown page in points (1/72 in), the unit its placement scales. */
   width_px: number;
   height_px: number;
+  /** PDF only: the page shown (1-based) and the document's page count; null for images. */
+  page: number | null;
+  pageCount: number | null;
   placement: UnderlayPlacement;
   opacity: number;
   visible: boolean;
+  /** Locked: the placement cannot change until unlocked. */
+  locked: boolean;
+  /** The stored file (image or PDF). */
   imageUrl: string;
   createdBy: string | null;
   createdAt: string;
@@ -58,17 +69,12 @@ export interface UnderlayPatch {
   placement?: Partial<UnderlayPlacement>;
   opacity?: number;
   visible?: boolean;
+  locked?: boolean;
+  /** PDF only: show another page. */
+  page?: number;
 }
 
-const PNG_SIGNATURE = [0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a];
-
-function startsWith(buf: Uint8Array, bytes: readonly number[]): boolean {
-  return buf.length >= bytes.length && bytes.every((b, i) => buf[i] === b);
-}
-
-function unsupported(message: string): AppError {
-  return new AppError(415, 'unsupported_media_type', message, { fields: { file: message } });
-}
+const unsupported = (message: string) => unsupportedContent(message);
 
 /** PNG: 8-byte signature, then the IHDR chunk (PNG spec §11.2.2) with width and height. */
 function readPng(buf: Buffer): ImageInfo {
@@ -105,17 +111,15 @@ function readJpeg(buf: Buffer): ImageInfo {
 }
 
 /**
- * What the file is, from its bytes: PNG or JPEG with its pixel size. PDF and anything else
- * answer 415 with a message saying what to do instead.
+ * What an image file is, from its bytes: PNG or JPEG with its pixel size. Anything else
+ * answers 415 (PDFs are read by readPdfPage before this is asked).
  */
 export function sniffImage(buf: Buffer): ImageInfo {
   let info: ImageInfo;
-  if (startsWith(buf, PNG_SIGNATURE)) info = readPng(buf);
-  else if (startsWith(buf, [0xff, 0xd8, 0xff])) info = readJpeg(buf);
-  else if (buf.toString('latin1', 0, 5) === '%PDF-') {
-    throw unsupported('PDF underlays are not supported: export the drawing page as a PNG or JPEG image and upload that.');
-  } else {
-    throw unsupported('The file is not a PNG or JPEG image (its content was checked, not its name).');
+  if (looksLikePng(buf)) info = readPng(buf);
+  else if (looksLikeJpeg(buf)) info = readJpeg(buf);
+  else {
+    throw unsupported('The file is not a PNG or JPEG image or a PDF (its content was checked, not its name).');
   }
   if (info.widthPx < 1 || info.heightPx < 1) throw unsupported('The image header gives a width or height of zero.');
   if (info.widthPx > UNDERLAY_MAX_SIDE_PX || info.heightPx > UNDERLAY_MAX_SIDE_PX) {
@@ -123,7 +127,41 @@ export function sniffImage(buf: Buffer): ImageInfo {
       file: `Largest side accepted: ${UNDERLAY_MAX_SIDE_PX} px`,
     });
   }
+  // The whole file, not only its header: a damaged or disguised file is never stored.
+  if (info.mime === 'image/png') checkPngStructure(buf);
+  else checkJpegEnd(buf);
   return info;
+}
+
+type UnderlayFileInfo = {
+  mime: UnderlayMime;
+  extension: 'png' | 'jpg' | 'pdf';
+  widthPx: number;
+  heightPx: number;
+  page: number | null;
+  pageCount: number | null;
+};
+
+/** An image (PNG, JPEG) or a PDF page, by content; `page` is for PDFs only. */
+export async function sniffUnderlay(buf: Buffer, page: number | undefined): Promise<UnderlayFileInfo> {
+  if (isPdf(buf)) {
+    const info = await readPdfPage(buf, page ?? 1);
+    // Whole points: a page is a whole number of points in practice (A1 is 2384 × 1684 pt).
+    return { mime: 'application/pdf', extension: 'pdf', widthPx: Math.round(info.widthPt), heightPx: Math.round(info.heightPt), page: info.pageNumber, pageCount: info.pageCount };
+  }
+  const image = sniffImage(buf);
+  if (page !== undefined && page !== 1) {
+    throw new AppError(422, 'invalid_page', 'Only a PDF has pages; an image is one picture.', { fields: { page: 'Only a PDF has pages' } });
+  }
+  return { ...image, page: null, pageCount: null };
+}
+
+async function readStored(storage: { uploadDir: string }, storageKey: string): Promise<Buffer> {
+  try {
+    return await readFile(join(underlayDir(storage.uploadDir), basename(storageKey)));
+  } catch {
+    throw new AppError(404, 'not_found', 'The file of this underlay is missing from the server; delete the underlay and upload it again.');
+  }
 }
 
 /** The uploaded name, for display only: no path, no control characters, at most 200 characters. */
@@ -150,9 +188,12 @@ function toView(row: Model<UnderlayAttributes, UnderlayCreation>): UnderlayView 
     bytes: u.bytes,
     width_px: u.widthPx,
     height_px: u.heightPx,
+    page: u.mime === 'application/pdf' ? (u.pageNumber ?? 1) : null,
+    pageCount: u.mime === 'application/pdf' ? (u.pageCount ?? null) : null,
     placement: { origin_ft: [u.originXFt, u.originYFt], scale_ft_per_px: u.scaleFtPerPx, rotation_deg: u.rotationDeg },
     opacity: u.opacity,
     visible: Boolean(u.visible),
+    locked: Boolean(u.locked),
     imageUrl: `/api/underlays/${u.id}/image`,
     createdBy: u.createdBy ?? null,
     createdAt: new Date(u.createdAt).toISOString(),
@@ -188,6 +229,8 @@ export async function listUnderlays(db: Db, firmId: string, schemeId: string): P
 
 export interface UnderlayUpload {
   levelId: string;
+  /** PDF only: the page to show (1-based; default 1). */
+  page?: number;
   /** The multipart file part, or null when none was sent. */
   file: { buffer: Buffer; originalName: string | undefined } | null;
 }
@@ -201,13 +244,13 @@ export async function createUnderlay(
 ): Promise<UnderlayView> {
   await findOwnScheme(db, actor.firmId, schemeId);
   if (!upload.file || upload.file.buffer.length === 0) {
-    throw AppError.badRequest('Attach the plan image as the "file" part (PNG or JPEG).', { file: 'Choose a PNG or JPEG image' });
+    throw AppError.badRequest('Attach the plan as the "file" part (PNG, JPEG or PDF).', { file: 'Choose a PNG or JPEG image or a PDF' });
   }
   const level = await db.models.Level.findOne({ where: { schemeId, elementId: upload.levelId } });
   if (!level) {
     throw AppError.badRequest(`Level "${upload.levelId}" is not a level of this scheme.`, { level: `No level "${upload.levelId}" in this scheme` });
   }
-  const info = sniffImage(upload.file.buffer);
+  const info = await sniffUnderlay(upload.file.buffer, upload.page);
 
   const dir = underlayDir(storage.uploadDir);
   await mkdir(dir, { recursive: true });
@@ -224,6 +267,9 @@ export async function createUnderlay(
       bytes: upload.file.buffer.length,
       widthPx: info.widthPx,
       heightPx: info.heightPx,
+      pageNumber: info.page,
+      pageCount: info.pageCount,
+      locked: false,
       storageKey,
       // Bottom-left corner of the image on the plan origin, image above and to the right.
       originXFt: 0,
@@ -258,9 +304,28 @@ export async function getUnderlayImage(
   return { path, mime: u.mime, bytes: u.bytes, filename: u.filename };
 }
 
-export async function updateUnderlay(db: Db, firmId: string, id: string, patch: UnderlayPatch): Promise<UnderlayView> {
+export async function updateUnderlay(db: Db, storage: { uploadDir: string }, firmId: string, id: string, patch: UnderlayPatch): Promise<UnderlayView> {
   const row = await findOwnUnderlay(db, firmId, id);
+  const u = row.get({ plain: true });
   const changes: Partial<UnderlayAttributes> = {};
+  // A locked underlay keeps its place and page; the same request may unlock it first.
+  const lockedAfter = patch.locked ?? Boolean(u.locked);
+  if (Boolean(u.locked) && lockedAfter && (patch.placement !== undefined || patch.page !== undefined)) {
+    const field = patch.placement !== undefined ? 'placement' : 'page';
+    throw AppError.conflict('underlay_locked', 'This underlay is locked: unlock it before moving, calibrating or changing its page.', { [field]: 'Unlock the underlay first' });
+  }
+  if (patch.page !== undefined) {
+    if (u.mime !== 'application/pdf') {
+      throw new AppError(422, 'invalid_page', 'Only a PDF underlay has pages.', { fields: { page: 'Only a PDF underlay has pages' } });
+    }
+    const buf = await readStored(storage, u.storageKey);
+    const page = await readPdfPage(buf, patch.page);
+    changes.pageNumber = page.pageNumber;
+    changes.pageCount = page.pageCount;
+    changes.widthPx = Math.round(page.widthPt);
+    changes.heightPx = Math.round(page.heightPt);
+  }
+  if (patch.locked !== undefined) changes.locked = patch.locked;
   const p = patch.placement;
   if (p?.origin_ft) {
     changes.originXFt = p.origin_ft[0];

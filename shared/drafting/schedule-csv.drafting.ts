@@ -5,11 +5,11 @@
  * The caution travels in the X-Baywright-Caution response header so the file stays
  * machine-readable.
  */
-import type { ScheduleRow } from './schedule.drafting';
+import type { ScheduleMarkRow, ScheduleRow } from './schedule.drafting';
 
-export interface CsvColumn {
+export interface CsvColumn<Row = ScheduleRow> {
   header: string;
-  value: (row: ScheduleRow) => string | number | null;
+  value: (row: Row) => string | number | null;
 }
 
 /** Numbers to a fixed precision, trailing zeros kept off ("12.5", not "12.500"). */
@@ -17,6 +17,11 @@ function num(value: number | null, digits: number): string {
   if (value === null || !Number.isFinite(value)) return '';
   const text = Number(value.toFixed(digits)).toString();
   return text === '-0' ? '0' : text;
+}
+
+/** Ratios are rounded up so the file never understates a member's utilisation. */
+function ratioText(ratio: number | null): string {
+  return ratio === null || !Number.isFinite(ratio) ? '' : String(Math.ceil(ratio * 1000 - 1e-9) / 1000);
 }
 
 export const SCHEDULE_CSV_COLUMNS: readonly CsvColumn[] = [
@@ -44,12 +49,40 @@ export const SCHEDULE_CSV_COLUMNS: readonly CsvColumn[] = [
   { header: 'R_end_combination', value: (r) => r.end.combination },
   { header: 'R_end_supported_by', value: (r) => r.end.supportedBy ?? '' },
   { header: 'governing', value: (r) => r.governing ?? '' },
-  // Ratios are rounded up so the file never understates a member's utilisation.
-  { header: 'ratio', value: (r) => (r.ratio === null || !Number.isFinite(r.ratio) ? '' : String(Math.ceil(r.ratio * 1000 - 1e-9) / 1000)) },
+  { header: 'ratio', value: (r) => ratioText(r.ratio) },
   { header: 'passes', value: (r) => (r.passes ? 'yes' : 'no') },
   { header: 'weight_plf', value: (r) => num(r.weight_plf, 2) },
   { header: 'camber_in', value: (r) => num(r.camber_in, 2) },
   { header: 'studs', value: (r) => (r.studs === null ? '' : r.studs) },
+];
+
+/**
+ * One row per piece mark. The reaction columns are the envelope over both ends of every member
+ * of the row (the column names say so); grid locations are joined with "; ".
+ */
+export const SCHEDULE_MARK_CSV_COLUMNS: readonly CsvColumn<ScheduleMarkRow>[] = [
+  { header: 'level', value: (r) => r.level },
+  { header: 'level_name', value: (r) => r.levelName },
+  { header: 'mark', value: (r) => r.mark },
+  { header: 'kind', value: (r) => r.kind },
+  { header: 'size', value: (r) => r.size ?? '' },
+  { header: 'quantity', value: (r) => r.quantity },
+  { header: 'span_ft', value: (r) => num(r.span_ft, 3) },
+  { header: 'grid_locations', value: (r) => r.gridLocations.join('; ') },
+  { header: 'R_envelope_D_kip', value: (r) => num(r.reaction.D_kip, 3) },
+  { header: 'R_envelope_L_kip', value: (r) => num(r.reaction.L_kip, 3) },
+  { header: 'R_envelope_Lr_kip', value: (r) => num(r.reaction.Lr_kip, 3) },
+  { header: 'R_envelope_S_kip', value: (r) => num(r.reaction.S_kip, 3) },
+  { header: 'R_envelope_factored_kip', value: (r) => num(r.reaction.factored_kip, 3) },
+  { header: 'R_envelope_combination', value: (r) => r.reaction.combination },
+  { header: 'governing', value: (r) => r.governing ?? '' },
+  { header: 'ratio_max', value: (r) => ratioText(r.ratio) },
+  { header: 'passes', value: (r) => (r.passes ? 'yes' : 'no') },
+  { header: 'weight_plf', value: (r) => num(r.weight_plf, 2) },
+  { header: 'camber_in', value: (r) => num(r.camber_in, 2) },
+  { header: 'studs', value: (r) => (r.studs === null ? '' : r.studs) },
+  { header: 'mark_split', value: (r) => (r.split ? 'yes' : 'no') },
+  { header: 'member_ids', value: (r) => r.memberIds.join(' ') },
 ];
 
 /** One RFC 4180 field. */
@@ -58,7 +91,7 @@ export function csvField(value: string | number | null): string {
   return /[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
 }
 
-export function scheduleCsv(rows: readonly ScheduleRow[], columns: readonly CsvColumn[] = SCHEDULE_CSV_COLUMNS): string {
+export function scheduleCsv<Row = ScheduleRow>(rows: readonly Row[], columns: readonly CsvColumn<Row>[] = SCHEDULE_CSV_COLUMNS as unknown as readonly CsvColumn<Row>[]): string {
   const lines = [columns.map((c) => csvField(c.header)).join(',')];
   for (const row of rows) lines.push(columns.map((c) => csvField(c.value(row))).join(','));
   return `${lines.join('\r\n')}\r\n`;

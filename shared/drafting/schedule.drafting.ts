@@ -138,3 +138,100 @@ export function scheduleRows(design: Pick<SchemeResult, 'members' | 'method'>, p
     (a, b) => a.levelOrder - b.levelOrder || compareMarks(a.mark, b.mark) || (a.memberId < b.memberId ? -1 : a.memberId > b.memberId ? 1 : 0),
   );
 }
+
+/** One row per piece mark: the members of a level carrying one mark with one size and span. */
+export interface ScheduleMarkRow {
+  /** Unique per row: level, mark and (when a mark is split) size and span. */
+  key: string;
+  level: string;
+  levelName: string;
+  levelOrder: number;
+  kind: 'girder' | 'beam';
+  mark: string;
+  size: string | null;
+  /** How many members carry this mark with this size and span. */
+  quantity: number;
+  span_ft: number;
+  /** Grid locations of the members, in schedule order, without repeats. */
+  gridLocations: string[];
+  memberIds: string[];
+  /**
+   * Reaction envelope: the largest of each case over both ends of every member of the row, and
+   * the largest combined reaction with its combination. Conservative for every connection of
+   * the piece (ends drawn either way round share one envelope); said as such on screen.
+   */
+  reaction: Omit<ScheduleReactionEnd, 'supportedBy'>;
+  /** True when the ends' reactions differ, so the envelope is larger than some of them. */
+  enveloped: boolean;
+  governing: string | null;
+  /** Largest ratio of the row's members. */
+  ratio: number | null;
+  passes: boolean;
+  weight_plf: number;
+  camber_in: number | null;
+  studs: number | null;
+  /** True when this mark is carried by members of another size, span, camber or stud count too (one row each). */
+  split: boolean;
+}
+
+const spanKey = (span_ft: number) => span_ft.toFixed(2);
+const maxOrNull = (values: (number | null)[]) => {
+  const real = values.filter((v): v is number => v !== null && Number.isFinite(v));
+  return real.length ? Math.max(...real) : null;
+};
+
+/** The schedule grouped by mark: one row per (level, mark, size, span), in schedule order. */
+export function scheduleMarkRows(rows: readonly ScheduleRow[]): ScheduleMarkRow[] {
+  const groups = new Map<string, ScheduleRow[]>();
+  const designsOfMark = new Map<string, Set<string>>();
+  for (const r of rows) {
+    const markKey = `${r.level}\u0000${r.mark}`;
+    // Camber and studs split a mark too: one row states one piece.
+    const key = `${markKey}\u0000${r.size ?? ''}\u0000${spanKey(r.span_ft)}\u0000${r.camber_in ?? ''}\u0000${r.studs ?? ''}`;
+    const list = groups.get(key);
+    if (list) list.push(r);
+    else groups.set(key, [r]);
+    let designs = designsOfMark.get(markKey);
+    if (!designs) designsOfMark.set(markKey, (designs = new Set()));
+    designs.add(key);
+  }
+  const out: ScheduleMarkRow[] = [];
+  for (const [key, list] of groups) {
+    const first = list[0];
+    const ends = list.flatMap((r) => [r.start, r.end]);
+    const top = ends.reduce((a, b) => (b.factored_kip > a.factored_kip ? b : a));
+    const reaction = {
+      D_kip: Math.max(...ends.map((e) => e.D_kip)),
+      L_kip: Math.max(...ends.map((e) => e.L_kip)),
+      Lr_kip: Math.max(...ends.map((e) => e.Lr_kip)),
+      S_kip: Math.max(...ends.map((e) => e.S_kip)),
+      factored_kip: top.factored_kip,
+      combination: top.combination,
+    };
+    const enveloped = ends.some((e) => e.D_kip !== reaction.D_kip || e.L_kip !== reaction.L_kip || e.Lr_kip !== reaction.Lr_kip || e.S_kip !== reaction.S_kip || e.factored_kip !== reaction.factored_kip);
+    const worst = list.reduce((a, b) => ((b.ratio ?? -1) > (a.ratio ?? -1) ? b : a));
+    out.push({
+      key,
+      level: first.level,
+      levelName: first.levelName,
+      levelOrder: first.levelOrder,
+      kind: first.kind,
+      mark: first.mark,
+      size: first.size,
+      quantity: list.length,
+      span_ft: Math.max(...list.map((r) => r.span_ft)),
+      gridLocations: [...new Set(list.map((r) => r.gridLocation).filter((g): g is string => !!g))],
+      memberIds: list.map((r) => r.memberId),
+      reaction,
+      enveloped,
+      governing: worst.governing,
+      ratio: maxOrNull(list.map((r) => r.ratio)),
+      passes: list.every((r) => r.passes),
+      weight_plf: first.weight_plf,
+      camber_in: first.camber_in,
+      studs: first.studs,
+      split: designsOfMark.get(`${first.level}\u0000${first.mark}`)!.size > 1,
+    });
+  }
+  return out;
+}

@@ -1,11 +1,12 @@
 /**
  * Ordered migrations of the plan file. Each migration takes a document at version `from`
- * and returns one at `from + 1`. Version 1 is current, so the list is empty today; when
- * version 2 comes, append { from: 1, describe, migrate } and bump CURRENT_PLAN_VERSION.
+ * and returns one at `from + 1`. Append new steps and bump CURRENT_PLAN_VERSION; never edit
+ * a step that has shipped (its defaults are written out here, not imported, so they stay
+ * what version 2 said they were).
  */
 import { planProblem, type PlanProblem } from './plan-problem.schema';
 
-export const CURRENT_PLAN_VERSION = 1;
+export const CURRENT_PLAN_VERSION = 2;
 
 export interface PlanMigration {
   from: number;
@@ -14,7 +15,38 @@ export interface PlanMigration {
   migrate: (document: Record<string, unknown>) => Record<string, unknown>;
 }
 
-export const PLAN_MIGRATIONS: readonly PlanMigration[] = [];
+const isObject = (v: unknown): v is Record<string, unknown> => v !== null && typeof v === 'object' && !Array.isArray(v);
+
+/**
+ * Version 1 → 2 (calc-interface.md "Additions for composite beams and columns"):
+ * designBasis.composite with the published defaults and enabled: false (a version 1 plan was
+ * designed bare steel and stays so until the engineer turns composite on). The member and
+ * column additions (members[].composite, members[].studs, columns[].shape) default to null,
+ * and an absent field reads as null, so the migration leaves them absent: a version 1 plan's
+ * members and columns come out exactly as they were. decks[].slab and columns[].spliceLevels
+ * are optional and stay absent. A composite object already present is kept.
+ */
+export const migrateV1ToV2: PlanMigration = {
+  from: 1,
+  describe: 'composite settings added with composite off (members follow them, studs designed, columns sized)',
+  migrate: (document) => {
+    const designBasis = document.designBasis;
+    if (isObject(designBasis) && designBasis.composite === undefined) {
+      designBasis.composite = {
+        enabled: false,
+        studDiameter_in: 0.75,
+        studFu_ksi: 65,
+        minPercentComposite: 0.25,
+        constructionLive_psf: 20,
+        shored: false,
+        camber: true,
+      };
+    }
+    return document;
+  },
+};
+
+export const PLAN_MIGRATIONS: readonly PlanMigration[] = [migrateV1ToV2];
 
 export type MigrationOutcome =
   | { ok: true; document: Record<string, unknown>; applied: string[] }

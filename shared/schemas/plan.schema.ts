@@ -1,5 +1,5 @@
 /**
- * The Baywright plan file ("baywright-plan", version 1): the scheme the app exports and
+ * The Baywright plan file ("baywright-plan", version 2; version 1 files migrate on read): the scheme the app exports and
  * imports and `calc plan` reads. Field names follow shared/reference/calc-interface.md and
  * are a contract: fields may be added, none renamed.
  *
@@ -13,38 +13,74 @@ import { z } from 'zod';
 import { migratePlanDocument, CURRENT_PLAN_VERSION, PLAN_MIGRATIONS, type PlanMigration } from './plan-migrations';
 import { repairPlan } from './plan-repair';
 import { planProblem, type PlanProblem } from './plan-problem.schema';
+import { formatJsonPath, jsonTooDeepAt, MAX_JSON_DEPTH } from './json-depth';
+import {
+  PLAN_LIMITS, alongSpanFt, boundedList, coordinateFt, deflectionDenominator, depthIn, elevationFt, fyKsi, lineLoadKlf,
+  nonNegativeMagnitude, planLimitProblems, pointLoadKip, positiveMagnitude, pressurePsf, studCount,
+} from './plan-limits';
 
 export type { PlanProblem } from './plan-problem.schema';
 export { CURRENT_PLAN_VERSION } from './plan-migrations';
 export const PLAN_FORMAT = 'baywright-plan' as const;
 
-const finite = z.number();
-const nonNegative = z.number().nonnegative();
-const positive = z.number().positive();
+const LIMIT = PLAN_LIMITS.counts;
+const positive = positiveMagnitude;
+const nonNegative = nonNegativeMagnitude;
 
-export const pointSchema = z.tuple([finite, finite]);
+export const pointSchema = z.tuple([coordinateFt, coordinateFt]);
 export type PlanPoint = z.infer<typeof pointSchema>;
 
-export const polygonSchema = z.array(pointSchema);
+export const polygonSchema = boundedList(pointSchema, LIMIT.polygonPoints, 'points');
 export type PlanPolygon = z.infer<typeof polygonSchema>;
+
+/**
+ * designBasis.composite (plan file version 2, calc-interface.md "Additions"). Version 1 files
+ * migrate to enabled: false. studEquivalentWeight_lb is the steel weight one stud counts as
+ * when selection compares shapes (design-basis §6a, common practice about 10 lb).
+ */
+export const compositeSettingsSchema = z.object({
+  enabled: z.boolean(),
+  studDiameter_in: positive.default(0.75),
+  studFu_ksi: positive.default(65),
+  minPercentComposite: z.number().min(0).max(1).default(0.25),
+  constructionLive_psf: pressurePsf.default(20),
+  shored: z.boolean().default(false),
+  camber: z.boolean().default(true),
+  studEquivalentWeight_lb: nonNegative.optional(),
+});
+export type PlanCompositeSettings = z.infer<typeof compositeSettingsSchema>;
+
+/** The defaults of calc-interface.md "Additions" (what a version 1 file migrates to, with enabled: false). */
+export const DEFAULT_COMPOSITE_SETTINGS: PlanCompositeSettings = {
+  enabled: false,
+  studDiameter_in: 0.75,
+  studFu_ksi: 65,
+  minPercentComposite: 0.25,
+  constructionLive_psf: 20,
+  shored: false,
+  camber: true,
+};
 
 export const designBasisSchema = z.object({
   method: z.enum(['LRFD', 'ASD']),
-  Fy_ksi: positive.default(50),
+  Fy_ksi: fyKsi.default(50),
   liveLoadReduction: z.boolean(),
   deflectionLimits: z.object({
-    live: positive.nullable(),
-    total: positive.nullable(),
+    live: deflectionDenominator.nullable(),
+    total: deflectionDenominator.nullable(),
   }),
   /** What "total" deflection includes (design-basis §5): all dead + live, or superimposed dead + live. */
   totalDeflectionIncludes: z.enum(['deadAndLive', 'superimposedDeadAndLive']).optional(),
+  /** Composite beams (AISC 360-16 Chapter I; design-basis §6, §6a). Absent = not composite. */
+  composite: compositeSettingsSchema.optional(),
 });
 export type PlanDesignBasis = z.infer<typeof designBasisSchema>;
+
 
 export const levelSchema = z.object({
   id: z.string().min(1),
   name: z.string(),
-  elevation_ft: finite,
+  elevation_ft: elevationFt,
   /** A roof level: its live load is roof live (Lr), not reduced by ASCE 7-16 §4.7. */
   roof: z.boolean().optional(),
 });
@@ -54,16 +90,20 @@ export const gridSchema = z.object({
   id: z.string().min(1),
   axis: z.enum(['x', 'y']),
   label: z.string(),
-  offset_ft: finite,
+  offset_ft: coordinateFt,
 });
 export type PlanGrid = z.infer<typeof gridSchema>;
 
 export const columnSchema = z.object({
   id: z.string().min(1),
-  x_ft: finite,
-  y_ft: finite,
+  x_ft: coordinateFt,
+  y_ft: coordinateFt,
   /** Level ids at which the column supports framing. */
-  levels: z.array(z.string().min(1)),
+  levels: boundedList(z.string().min(1), LIMIT.columnLevels, 'levels'),
+  /** Version 2: a locked column size, or null (or absent) to size it. */
+  shape: z.string().nullable().optional(),
+  /** Version 2 (optional): level ids where a new column tier starts. */
+  spliceLevels: boundedList(z.string().min(1), LIMIT.columnLevels, 'splice levels').optional(),
 });
 export type PlanColumn = z.infer<typeof columnSchema>;
 
@@ -71,7 +111,7 @@ export type PlanColumn = z.infer<typeof columnSchema>;
 export const bracingSchema = z.union([
   z.literal('continuous'),
   z.literal('none'),
-  z.object({ points_ft: z.array(nonNegative) }),
+  z.object({ points_ft: boundedList(alongSpanFt, LIMIT.bracingPoints, 'brace points') }),
 ]);
 export type PlanBracing = z.infer<typeof bracingSchema>;
 
@@ -84,29 +124,50 @@ export const memberSchema = z.object({
   /** Locked shape (e.g. "W18X35") or null to let the engine select. */
   shape: z.string().nullable(),
   /** Bound on the actual depth d, in. */
-  maxDepth_in: positive.nullable(),
-  minDepth_in: positive.nullable().optional(),
-  allowedNominalDepths: z.array(positive).nullable().optional(),
-  Lb_override_ft: nonNegative.nullable().optional(),
+  maxDepth_in: depthIn.nullable(),
+  minDepth_in: depthIn.nullable().optional(),
+  allowedNominalDepths: boundedList(depthIn, LIMIT.nominalDepths, 'nominal depths').nullable().optional(),
+  Lb_override_ft: alongSpanFt.nullable().optional(),
   /** Bracing override; without it the engine derives bracing from deck and framing. */
   bracing: bracingSchema.nullable().optional(),
   mark: z.string().nullable().optional(),
   markLocked: z.boolean().optional(),
+  /** Version 2: null (or absent) follows designBasis.composite; true/false forces composite on/off. */
+  composite: z.boolean().nullable().optional(),
+  /** Version 2: null (or absent) designs the studs; a count is checked (total on the member). */
+  studs: studCount.nullable().optional(),
 });
 export type PlanMember = z.infer<typeof memberSchema>;
 
 export const zoneSchema = z.object({
   id: z.string().min(1),
   name: z.string(),
-  dead_psf: nonNegative,
-  superimposedDead_psf: nonNegative,
-  partition_psf: nonNegative,
-  live_psf: nonNegative,
+  dead_psf: pressurePsf,
+  superimposedDead_psf: pressurePsf,
+  partition_psf: pressurePsf,
+  live_psf: pressurePsf,
   liveReducible: z.boolean(),
-  roofLive_psf: nonNegative,
-  snow_psf: nonNegative,
+  roofLive_psf: pressurePsf,
+  snow_psf: pressurePsf,
 });
 export type PlanZone = z.infer<typeof zoneSchema>;
+
+/**
+ * decks[].slab (version 2): concrete on fluted deck. Where present the slab weight comes from
+ * it and replaces the zone's dead_psf (calc-interface.md "Additions").
+ */
+export const slabSchema = z.object({
+  ribHeight_in: positive,
+  toppingThickness_in: positive,
+  ribAvgWidth_in: positive,
+  ribSpacing_in: positive,
+  concreteWeight_pcf: positive,
+  fc_ksi: positive,
+  deckWeight_psf: nonNegative,
+  /** The library profile it started from (Baywright's own names), for the screens only. */
+  profile: z.string().optional(),
+}).refine((s) => s.ribAvgWidth_in <= s.ribSpacing_in, { message: 'ribAvgWidth_in must not exceed ribSpacing_in', path: ['ribAvgWidth_in'] });
+export type PlanSlab = z.infer<typeof slabSchema>;
 
 export const deckSchema = z.object({
   id: z.string().min(1),
@@ -114,18 +175,19 @@ export const deckSchema = z.object({
   polygon: polygonSchema,
   spanDirection: z.enum(['x', 'y']),
   zone: z.string().min(1),
+  slab: slabSchema.optional(),
 });
 export type PlanDeck = z.infer<typeof deckSchema>;
 
 export const pointLoadSchema = z.object({
   id: z.string().min(1).optional(),
   level: z.string().min(1),
-  x_ft: finite,
-  y_ft: finite,
-  D_kip: finite.default(0),
-  L_kip: finite.default(0),
-  Lr_kip: finite.optional(),
-  S_kip: finite.optional(),
+  x_ft: coordinateFt,
+  y_ft: coordinateFt,
+  D_kip: pointLoadKip.default(0),
+  L_kip: pointLoadKip.default(0),
+  Lr_kip: pointLoadKip.optional(),
+  S_kip: pointLoadKip.optional(),
 });
 export type PlanPointLoad = z.infer<typeof pointLoadSchema>;
 
@@ -134,10 +196,10 @@ export const lineLoadSchema = z.object({
   level: z.string().min(1),
   start: pointSchema,
   end: pointSchema,
-  D_klf: finite.default(0),
-  L_klf: finite.default(0),
-  Lr_klf: finite.optional(),
-  S_klf: finite.optional(),
+  D_klf: lineLoadKlf.default(0),
+  L_klf: lineLoadKlf.default(0),
+  Lr_klf: lineLoadKlf.optional(),
+  S_klf: lineLoadKlf.optional(),
 });
 export type PlanLineLoad = z.infer<typeof lineLoadSchema>;
 
@@ -150,18 +212,18 @@ export type PlanOpening = z.infer<typeof openingSchema>;
 
 export const planSchema = z.object({
   format: z.literal(PLAN_FORMAT),
-  version: z.literal(1),
+  version: z.literal(2),
   name: z.string(),
   designBasis: designBasisSchema,
-  grids: z.array(gridSchema).optional(),
-  levels: z.array(levelSchema),
-  columns: z.array(columnSchema).default([]),
-  members: z.array(memberSchema).default([]),
-  zones: z.array(zoneSchema).default([]),
-  decks: z.array(deckSchema).default([]),
-  pointLoads: z.array(pointLoadSchema).default([]),
-  lineLoads: z.array(lineLoadSchema).default([]),
-  openings: z.array(openingSchema).default([]),
+  grids: boundedList(gridSchema, LIMIT.grids, 'grid lines').optional(),
+  levels: boundedList(levelSchema, LIMIT.levels, 'levels'),
+  columns: boundedList(columnSchema, LIMIT.columns, 'columns').default([]),
+  members: boundedList(memberSchema, LIMIT.members, 'members').default([]),
+  zones: boundedList(zoneSchema, LIMIT.zones, 'zones').default([]),
+  decks: boundedList(deckSchema, LIMIT.decks, 'decks').default([]),
+  pointLoads: boundedList(pointLoadSchema, LIMIT.pointLoads, 'point loads').default([]),
+  lineLoads: boundedList(lineLoadSchema, LIMIT.lineLoads, 'line loads').default([]),
+  openings: boundedList(openingSchema, LIMIT.openings, 'openings').default([]),
 });
 /** A plan as parsed (defaults applied; ids on loads/openings may still be missing before repair). */
 export type PlanFile = z.infer<typeof planSchema>;
@@ -215,6 +277,11 @@ export function describeIssuePath(raw: unknown, path: readonly PropertyKey[]): {
  * Never throws on bad input: the problems say what is wrong and where.
  */
 export function parsePlanFile(json: unknown, migrations: readonly PlanMigration[] = PLAN_MIGRATIONS): ParsePlanResult {
+  const tooDeep = jsonTooDeepAt(json);
+  if (tooDeep) {
+    const path = formatJsonPath(tooDeep) || '(file)';
+    return { plan: null, repairs: [], problems: [planProblem('error', 'plan-invalid', `${path}: nested more than ${MAX_JSON_DEPTH} levels deep`, { path })] };
+  }
   const migrated = migratePlanDocument(json, migrations);
   if (!migrated.ok) return { plan: null, repairs: [], problems: [migrated.problem] };
   const parsed = planSchema.safeParse(migrated.document);
@@ -226,7 +293,8 @@ export function parsePlanFile(json: unknown, migrations: readonly PlanMigration[
     return { plan: null, repairs: migrated.applied, problems };
   }
   const repaired = repairPlan(parsed.data);
-  return { plan: repaired.plan, repairs: [...migrated.applied, ...repaired.repairs], problems: repaired.problems };
+  const problems = [...repaired.problems, ...planLimitProblems(repaired.plan)];
+  return { plan: repaired.plan, repairs: [...migrated.applied, ...repaired.repairs], problems };
 }
 
 /** The plan as it is written to a file (export); parsePlanFile(exportPlanFile(p)).plan deep-equals p. */

@@ -31,7 +31,8 @@ export function AppShellLayout() {
   return (
     <div className="flex min-h-dvh flex-col">
       <AppHeader session={session.data} />
-      <main className="mx-auto w-full max-w-6xl flex-1 px-4 py-8 sm:px-6">
+      {/* A scheme open on the Plan keeps the page's top margin small: the editor fills the window. */}
+      <main className={`mx-auto w-full max-w-6xl flex-1 px-4 sm:px-6 ${/\/projects\/[^/]+\/plan$/.test(location.pathname) && new URLSearchParams(location.search).has('scheme') ? 'py-2' : 'py-8'}`}>
         <Outlet />
       </main>
       <AppFooter />

@@ -204,3 +204,19 @@ export function parseQuantity(kind: QuantityKind, text: string, system: UnitSyst
   }
   return { ok: true, value: fromDisplay(kind, number, written) };
 }
+
+/**
+ * A level elevation as drawings give it: feet and inches to the nearest 1/4 in in US
+ * ("14'-0""), metres to the centimetre in SI ("4.27 m"), never the raw conversion.
+ */
+export function formatElevation(valueFt: number, system: UnitSystem): string {
+  if (!Number.isFinite(valueFt)) return '—';
+  if (system === 'SI') return formatQuantity('length_ft', valueFt, 'SI', { digits: 2 });
+  const sign = valueFt < 0 ? '−' : '';
+  const quarters = Math.round(Math.abs(valueFt) * 48);
+  const feet = Math.floor(quarters / 48);
+  const inQuarters = quarters - feet * 48;
+  const inches = Math.floor(inQuarters / 4);
+  const frac = ['', ' 1/4', ' 1/2', ' 3/4'][inQuarters % 4];
+  return `${sign}${feet}'-${inches}${frac}"`;
+}

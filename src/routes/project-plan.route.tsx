@@ -15,6 +15,7 @@ import { PlanEditor } from '../features/editor/components/plan-editor.component'
 import { MemberSheet } from '../features/member-sheet/components/member-sheet.component';
 import { useCreateScheme } from '../features/schemes/api/create-scheme.api';
 import { useSchemes } from '../features/schemes/api/get-schemes.api';
+import { BuildingView } from '../features/building-view/components/building-view.component';
 import { useUnderlays } from '../features/underlay/api/get-underlays.api';
 import { UnderlayImage } from '../features/underlay/components/underlay-image.component';
 import { UnderlayPanel } from '../features/underlay/components/underlay-panel.component';
@@ -41,11 +42,23 @@ export default function ProjectPlanRoute() {
           projectId={projectId}
           schemeId={schemeId}
           levelId={search.get('level')}
+          view={search.get('view') === 'building' ? 'building' : 'plan'}
           onLevel={(level) => {
             if (search.get('level') === level) return;
             const next = new URLSearchParams(search);
             next.set('level', level);
             setSearch(next, { replace: true });
+          }}
+          onView={(view) => {
+            setSearch(
+              (prev) => {
+                const next = new URLSearchParams(prev);
+                if (view === 'building') next.set('view', 'building');
+                else next.delete('view');
+                return next;
+              },
+              { replace: true },
+            );
           }}
         />
       ) : (
@@ -55,7 +68,16 @@ export default function ProjectPlanRoute() {
   );
 }
 
-function SchemePlan({ projectId, schemeId, levelId, onLevel }: { projectId: string; schemeId: string; levelId: string | null; onLevel: (l: string) => void }) {
+function SchemePlan({
+  projectId, schemeId, levelId, view, onLevel, onView,
+}: {
+  projectId: string;
+  schemeId: string;
+  levelId: string | null;
+  view: 'plan' | 'building';
+  onLevel: (l: string) => void;
+  onView: (v: 'plan' | 'building') => void;
+}) {
   const session = useCurrentSession();
   const scheme = useEditorScheme(schemeId);
   const queryClient = useQueryClient();
@@ -117,6 +139,9 @@ function SchemePlan({ projectId, schemeId, levelId, onLevel }: { projectId: stri
           initialLevelId={levelId}
           onLevelChange={onLevel}
           onSaved={onSaved}
+          initialView={view}
+          onViewChange={onView}
+          renderBuildingView={({ plan, result, selection, select }) => <BuildingView plan={plan} design={result} selection={selection} onSelect={select} />}
           renderUnderlayPanel={(level) => <UnderlayPanel schemeId={schemeId} levelId={level} canEdit={canEdit} units={system} />}
           renderUnderlayImages={(level, view) => <LevelUnderlays schemeId={schemeId} levelId={level} view={view} />}
           renderDesignBasis={({ designBasis, canEdit: can, submit }) => <DesignBasisForm value={designBasis} canEdit={can} onSubmit={submit} units={system} />}

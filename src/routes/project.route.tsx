@@ -1,4 +1,4 @@
-import { Link, NavLink, Outlet, useParams } from 'react-router-dom';
+import { Link, NavLink, Outlet, useMatch, useParams, useSearchParams } from 'react-router-dom';
 import { FormAlert } from '../components/ui/form-alert.ui';
 import { Loading } from '../components/ui/loading.ui';
 import { paths } from '../config/paths';
@@ -17,6 +17,11 @@ const SECTIONS = [
 export default function ProjectRoute() {
   const { projectId = '' } = useParams();
   const project = useProject(projectId);
+  // With a scheme open on the Plan the title block folds to one line, so the editor starts
+  // high on the page and fills the window.
+  const onPlan = useMatch(paths.projectPlan.path);
+  const [search] = useSearchParams();
+  const compact = !!onPlan && search.has('scheme');
 
   if (project.isPending) return <Loading label="Loading project…" />;
   if (project.isError) {
@@ -37,9 +42,19 @@ export default function ProjectRoute() {
 
   const p = project.data;
   return (
-    <div className="flex flex-col gap-6">
+    <div className={`flex flex-col ${compact ? 'gap-2' : 'gap-6'}`}>
       <title>{`${p.name} · Baywright`}</title>
-      <header className="border-2 border-ink bg-paper-raised">
+      <header className="border-2 border-ink bg-paper-raised" data-compact={compact || undefined}>
+        {compact ? (
+          <div className="flex items-center gap-3 px-3 py-1.5">
+            <Link to={paths.projects.href()} className="label-caps hover:text-ink hover:underline">
+              Projects
+            </Link>
+            <span aria-hidden className="text-ink-faint">/</span>
+            <h1 className="truncate text-base font-semibold text-ink">{p.name}</h1>
+            {p.number ? <span className="figures font-mono text-xs text-ink-soft">{p.number}</span> : null}
+          </div>
+        ) : (
         <div className="flex flex-wrap items-stretch">
           <div className="min-w-0 flex-1 px-5 py-4">
             <div className="label-caps mb-1">
@@ -60,6 +75,7 @@ export default function ProjectRoute() {
             <dd className="max-w-64 truncate text-ink">{p.address || '—'}</dd>
           </dl>
         </div>
+        )}
         <nav aria-label="Project sections" className="flex gap-1 overflow-x-auto border-t border-ink bg-paper px-3">
           {SECTIONS.map((section) => (
             <NavLink

@@ -78,7 +78,7 @@ describe('scheme and plan events', () => {
       ['scheme.deleted', t.seed.userIds.engineer, ENGINEER, target],
     ]);
     const [imported, revised, restored, designed, deleted] = events;
-    expect(imported.detail).toEqual({ schemeId, projectId: t.seed.projectId, revision: 1, repairs: 0 });
+    expect(imported.detail).toEqual({ schemeId, projectId: t.seed.projectId, revision: 1, repairs: 1 }); // the version 1 → 2 migration is listed as a repair
     expect(revised.detail).toEqual({ schemeId, projectId: t.seed.projectId, revision: 2, previousRevision: 1, note: 'fewer beams' });
     expect(restored.detail).toEqual({ schemeId, projectId: t.seed.projectId, revision: 3, restoredFrom: 1, previousRevision: 2 });
     // The run is of revision 3 (the restored plan) and carries the response's totals.

@@ -4,43 +4,52 @@ import { join } from 'node:path';
 import { QueryTypes } from 'sequelize';
 import { afterAll, describe, expect, it } from 'vitest';
 import { connectDatabase } from '../../server/db/connection';
-import { createMigrator, migrateToLatest } from '../../server/db/migrator';
+import { createMigrator, migrateToLatest, MIGRATION_NAMES } from '../../server/db/migrator';
 import { DEMO_USERS, seedDemo } from '../../server/db/seed-demo';
 import { createTestApp } from './helpers/test-app';
+import { freshTestDatabase, testDialect } from './helpers/test-database';
 
 const tmp = mkdtempSync(join(tmpdir(), 'baywright-db-'));
 afterAll(() => rmSync(tmp, { recursive: true, force: true }));
 
-describe('database: migrations and demo seed', () => {
+/** A fresh database on the dialect under test (SQLite in memory, or PostgreSQL), dropped after. */
+async function withFreshDb(fn: (db: Awaited<ReturnType<typeof connectDatabase>>) => Promise<void>): Promise<void> {
+  const target = await freshTestDatabase();
+  const db = await connectDatabase(target.url);
+  try {
+    await fn(db);
+  } finally {
+    await db.sequelize.close();
+    await target.drop();
+  }
+}
+
+describe(`database (${testDialect}): migrations and demo seed`, () => {
   it('when migrations run twice, then the second run applies nothing and every one is recorded', async () => {
-    const db = await connectDatabase('sqlite::memory:');
-    try {
-      expect(await migrateToLatest(db.sequelize)).toEqual(['0001-accounts', '0002-projects', '0003-schemes-plans', '0004-team-mail-audit', '0005-underlays', '0006-scheme-status-prices']);
+    await withFreshDb(async (db) => {
+      // Every migration in the migrator's list, in its numbered order, each recorded once.
+      expect(MIGRATION_NAMES.slice(0, 8)).toEqual(['0001-accounts', '0002-projects', '0003-schemes-plans', '0004-team-mail-audit', '0005-underlays', '0006-scheme-status-prices', '0007-plan-v2-composite-columns', '0008-underlay-pdf-pages']);
+      expect(MIGRATION_NAMES.map((n) => n.slice(0, 4))).toEqual(MIGRATION_NAMES.map((_, i) => String(i + 1).padStart(4, '0')));
+      expect(await migrateToLatest(db.sequelize)).toEqual(MIGRATION_NAMES);
       expect(await migrateToLatest(db.sequelize)).toEqual([]);
       const executed = await createMigrator(db.sequelize).executed();
-      expect(executed.map((m) => m.name)).toEqual(['0001-accounts', '0002-projects', '0003-schemes-plans', '0004-team-mail-audit', '0005-underlays', '0006-scheme-status-prices']);
-    } finally {
-      await db.sequelize.close();
-    }
+      expect(executed.map((m) => m.name)).toEqual(MIGRATION_NAMES);
+    });
   });
 
   it('when migrations are rolled all the way down and up again, then the schema comes back', async () => {
-    const db = await connectDatabase('sqlite::memory:');
-    try {
+    await withFreshDb(async (db) => {
       await migrateToLatest(db.sequelize);
       await createMigrator(db.sequelize).down({ to: 0 });
       const tables = await db.sequelize.getQueryInterface().showAllTables();
       expect(tables.filter((n) => n !== 'schema_migrations')).toEqual([]);
       await migrateToLatest(db.sequelize);
       expect(await seedDemo(db)).toMatchObject({ firmId: expect.any(String) });
-    } finally {
-      await db.sequelize.close();
-    }
+    });
   });
 
   it('when the demo seed runs twice, then nothing is duplicated', async () => {
-    const db = await connectDatabase('sqlite::memory:');
-    try {
+    await withFreshDb(async (db) => {
       await migrateToLatest(db.sequelize);
       const first = await seedDemo(db);
       const second = await seedDemo(db);
@@ -52,12 +61,10 @@ describe('database: migrations and demo seed', () => {
       expect(await Project.count()).toBe(1);
       const roles = (await Membership.findAll()).map((m) => m.getDataValue('role')).sort();
       expect(roles).toEqual(['drafter', 'engineer', 'manager', 'owner']);
-    } finally {
-      await db.sequelize.close();
-    }
+    });
   });
 
-  it('when the database is a file in a missing folder, then the folder is created, WAL and foreign keys are on', async () => {
+  it.skipIf(testDialect !== 'sqlite')('when the database is a file in a missing folder, then the folder is created, WAL and foreign keys are on', async () => {
     const file = join(tmp, 'nested', 'bw.sqlite');
     const db = await connectDatabase(`sqlite:${file}`);
     try {
@@ -81,7 +88,7 @@ describe('database: migrations and demo seed', () => {
 });
 
 describe('file database end to end', () => {
-  it('when the app runs on a SQLite file, then sign-up (a transaction), sign-in and a project round trip work', async () => {
+  it.skipIf(testDialect !== 'sqlite')('when the app runs on a SQLite file, then sign-up (a transaction), sign-in and a project round trip work', async () => {
     const t = await createTestApp({ databaseUrl: `sqlite:${join(tmp, 'app.sqlite')}` });
     try {
       // createTestApp signed every demo role in and signed the other firm up.
@@ -100,14 +107,15 @@ describe('unexpected failures', () => {
   it('when the database fails under a route, then 500 with the generic body and the error is logged', async () => {
     const t = await createTestApp();
     try {
-      await t.ctx.db.sequelize.getQueryInterface().dropTable('projects');
+      await t.ctx.db.sequelize.getQueryInterface().dropTable('projects', { cascade: true });
       const res = await t.agents.owner.get('/api/projects');
       expect(res.status).toBe(500);
       expect(res.body).toEqual({
         error: { code: 'internal', message: 'Something went wrong on our side. Please try again.' },
       });
       expect(t.serverErrors).toHaveLength(1);
-      expect(String(t.serverErrors[0])).toMatch(/no such table/);
+      // SQLite: 'no such table: projects'; PostgreSQL: 'relation "projects" does not exist'.
+      expect(String(t.serverErrors[0])).toMatch(/no such table|relation "projects" does not exist/);
     } finally {
       await t.close();
     }

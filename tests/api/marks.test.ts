@@ -108,6 +108,49 @@ describe('PATCH /api/schemes/:id/marks', () => {
   });
 });
 
+describe('marks once issued stay put', () => {
+  it('when one member of a mark is given that same mark by hand, then the others keep it and no later mark moves', async () => {
+    const { schemeId } = await makeScheme(t, { designed: true });
+    const before = await marksOf(schemeId);
+    const sharers = [...before.byId].filter(([, mark]) => mark === before.byId.get('b3')).map(([id]) => id);
+    expect(sharers.length).toBeGreaterThan(1);
+    const res = await t.agents.drafter.patch(`/api/schemes/${schemeId}/marks`).send({ revision: 1, marks: [{ memberId: 'b3', mark: before.byId.get('b3') }] });
+    expect(res.status, JSON.stringify(res.body)).toBe(200);
+    const after = await marksOf(schemeId);
+    expect(Object.fromEntries(after.byId)).toEqual(Object.fromEntries(before.byId));
+  });
+
+  it('when an engineer adds an unrelated beam first in plan order, then every existing mark stays and the new beam gets the next number', async () => {
+    const { schemeId } = await makeScheme(t, { designed: true });
+    // A drafter's edit stores the marks as issued on every member.
+    expect((await t.agents.drafter.patch(`/api/schemes/${schemeId}/marks`).send({ revision: 1, marks: [{ memberId: 'gA12', mark: '2G1' }] })).status).toBe(200);
+    const before = await marksOf(schemeId);
+    const plan = (await t.agents.engineer.get(`/api/schemes/${schemeId}/export`)).body;
+    // A beam west of the framing, column to column, carries only itself (a new design that
+    // changes no other member) and sits first among the beams in plan order (midpoint y = 0).
+    plan.columns.push({ id: 'C-W', x_ft: -20, y_ft: 0, levels: ['L2'] });
+    plan.members.push({ id: 'bNew', level: 'L2', kind: 'beam', start: [-20, 0], end: [0, 0], shape: null, maxDepth_in: null });
+    const put = await t.agents.engineer.put(`/api/schemes/${schemeId}/plan`).send({ revision: 2, plan });
+    expect(put.status, JSON.stringify(put.body)).toBe(200);
+    expect((await t.agents.engineer.post(`/api/schemes/${schemeId}/design`).send({})).status).toBe(200);
+    const after = await marksOf(schemeId);
+    for (const [id, mark] of before.byId) expect(after.byId.get(id), id).toBe(mark);
+    const highest = Math.max(...[...before.byId.values()].filter((m) => /^2B\d+$/.test(m)).map((m) => Number(m.slice(2))));
+    expect(after.byId.get('bNew')).toBe(`2B${highest + 1}`);
+  });
+
+  it('when a drafter gives a member a mark another design already carries, then 422 names both members and nothing is saved', async () => {
+    const { schemeId } = await makeScheme(t, { designed: true });
+    const before = await marksOf(schemeId);
+    const otherMark = before.byId.get('b2')!;
+    expect(otherMark).not.toBe(before.byId.get('b1'));
+    const res = await t.agents.drafter.patch(`/api/schemes/${schemeId}/marks`).send({ revision: 1, marks: [{ memberId: 'b1', mark: otherMark }] });
+    expect(res.status).toBe(422);
+    expect(res.body.error.message).toContain(`Mark ${otherMark} on Level 2 is already used by member b2`);
+    expect(await t.ctx.db.models.PlanRevision.count({ where: { schemeId } })).toBe(1);
+  });
+});
+
 describe('POST /api/schemes/:id/marks/renumber', () => {
   async function withManualMark() {
     const { schemeId } = await makeScheme(t, { designed: true });
@@ -131,8 +174,9 @@ describe('POST /api/schemes/:id/marks/renumber', () => {
     expect(res.status).toBe(200);
     expect(res.body).toMatchObject({ revision: 3, changed: true });
     expect(res.body.marks.find((m: { memberId: string }) => m.memberId === 'b2')).toMatchObject({ mark: '2B2', manual: false });
+    // Stored as issued (not locked), so later designs keep it.
     const stored = await storedMember(schemeId, 'b2');
-    expect(stored.mark).toBeNull();
+    expect(stored.mark).toBe('2B2');
     expect(stored.markLocked).toBeNull();
     const design = await marksOf(schemeId);
     expect(design).toMatchObject({ stale: false, revision: 3 });

@@ -61,7 +61,10 @@ describe('import and export', () => {
     delete (raw as Record<string, unknown>).grids;
     const res = await t.agents.owner.post(`/api/projects/${t.seed.projectId}/schemes`).send({ plan: raw });
     expect(res.status, JSON.stringify(res.body)).toBe(201);
-    expect(res.body.repairs).toEqual(['members[1] (id gA23): shape "w18x35 " written as "W18X35"']);
+    expect(res.body.repairs).toEqual([
+      'Migrated from version 1 to 2: composite settings added with composite off (members follow them, studs designed, columns sized)',
+      'members[1] (id gA23): shape "w18x35 " written as "W18X35"',
+    ]);
     const expected = JSON.parse(JSON.stringify(parsePlanFile(raw).plan));
     const got = await t.agents.manager.get(`/api/schemes/${res.body.scheme.id}`);
     expect(got.body.scheme.plan).toEqual(expected);
@@ -69,6 +72,29 @@ describe('import and export', () => {
     expect(got.body.scheme.plan.members[0]).toHaveProperty('minDepth_in', null);
     expect(got.body.scheme.plan.members[1]).not.toHaveProperty('minDepth_in');
     expect(got.body.scheme.plan.members[1].shape).toBe('W18X35');
+  });
+
+  it('when a version 2 plan with slab, member composite/studs and column shape/splices is imported, then the export keeps each as written', async () => {
+    const raw = { ...twoBayPlan(), version: 2 } as Record<string, any>;
+    raw.designBasis.composite = { enabled: true, studDiameter_in: 0.75, studFu_ksi: 65, minPercentComposite: 0.25, constructionLive_psf: 20, shored: false, camber: true, studEquivalentWeight_lb: 10 };
+    raw.decks[0].slab = { ribHeight_in: 3, toppingThickness_in: 3.25, ribAvgWidth_in: 6, ribSpacing_in: 12, concreteWeight_pcf: 115, fc_ksi: 3, deckWeight_psf: 2, profile: 'B3-12' };
+    raw.members[0] = { ...raw.members[0], composite: false, studs: null };
+    raw.members[1] = { ...raw.members[1], composite: null, studs: 18 };
+    raw.columns[0] = { ...raw.columns[0], shape: null, spliceLevels: ['L2'] };
+    raw.columns[1] = { ...raw.columns[1], shape: 'W10X33' };
+    const res = await t.agents.engineer.post(`/api/projects/${t.seed.projectId}/schemes`).send({ plan: raw });
+    expect(res.status, JSON.stringify(res.body)).toBe(201);
+    expect(res.body.repairs).toEqual([]);
+    const exported = await t.agents.drafter.get(`/api/schemes/${res.body.scheme.id}/export`);
+    const plan = JSON.parse(exported.text);
+    expect(plan).toEqual(JSON.parse(JSON.stringify(parsePlanFile(raw).plan)));
+    expect(plan.version).toBe(2);
+    expect(plan.members[0]).toMatchObject({ composite: false, studs: null });
+    expect(plan.members[2]).not.toHaveProperty('composite');
+    expect(plan.columns[0]).toMatchObject({ shape: null, spliceLevels: ['L2'] });
+    expect(plan.columns[2]).not.toHaveProperty('shape');
+    const deck = await models().Deck.findOne({ where: { schemeId: res.body.scheme.id, elementId: raw.decks[0].id } });
+    expect(JSON.parse(JSON.stringify(deck?.getDataValue('slab')))).toMatchObject({ ribHeight_in: 3, concreteWeight_pcf: 115 });
   });
 
   it('when an imported plan cannot be repaired, then 422 plan_invalid names each element and nothing is stored', async () => {
@@ -99,7 +125,7 @@ describe('import and export', () => {
 describe('PUT /api/schemes/:id/plan', () => {
   it('when the revision is current, then 200 with the next revision and rows replaced in place', async () => {
     const { schemeId } = await makeScheme(t);
-    const plan = twoBayPlan() as { members: Record<string, unknown>[] };
+    const plan = { ...(twoBayPlan() as object), version: 2 } as unknown as { members: Record<string, unknown>[] };
     plan.members = plan.members.filter((m) => m.id !== 'b3');
     const res = await t.agents.engineer.put(`/api/schemes/${schemeId}/plan`).send({ revision: 1, plan, note: 'dropped b3' });
     expect(res.status, JSON.stringify(res.body)).toBe(200);

@@ -1,39 +1,16 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { ROLES, type Role } from '../../server/auth/policy';
-import { createProject } from '../../server/services/projects.service';
 import { listRoutes } from './helpers/list-routes';
+import { makeRouteFixture } from './helpers/route-fixture';
 import { ROUTE_TABLE, type RouteCase, type RouteFixture } from './helpers/route-table';
 import { createTestApp, type Agent, type TestApp } from './helpers/test-app';
 
 let t: TestApp;
 let fx: RouteFixture;
-let emailCounter = 0;
 
 beforeAll(async () => {
   t = await createTestApp();
-  const otherOwnerId = (await t.ctx.db.models.User.findOne({
-    where: { email: 'rosalind@quillon.example' },
-  }))!.getDataValue('id');
-  fx = {
-    t,
-    async ownProjectId() {
-      const p = await createProject(
-        t.ctx.db,
-        { firmId: t.seed.firmId!, userId: t.seed.userIds.engineer! },
-        { name: 'Matrix fixture project' },
-      );
-      return p.id;
-    },
-    async foreignProjectId() {
-      const p = await createProject(
-        t.ctx.db,
-        { firmId: t.otherFirmId, userId: otherOwnerId },
-        { name: 'Other firm project' },
-      );
-      return p.id;
-    },
-    uniqueEmail: () => `matrix-${++emailCounter}@example.org`,
-  };
+  fx = await makeRouteFixture(t);
 });
 
 afterAll(async () => {

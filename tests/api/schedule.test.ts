@@ -24,6 +24,36 @@ interface DesignMember {
   reactions: Record<'start' | 'end', { D_kip: number; L_kip: number }>;
 }
 
+describe('GET /api/schemes/:id/schedule.csv?by=mark', () => {
+  it('when a drafter downloads it by mark, then it is a plain table: header first, one row per mark with its quantity and envelope reactions', async () => {
+    const { schemeId } = await makeScheme(t, { designed: true, name: 'By mark' });
+    const design = await t.agents.drafter.get(`/api/schemes/${schemeId}/design`);
+    const res = await t.agents.drafter.get(`/api/schemes/${schemeId}/schedule.csv?by=mark`).buffer(true);
+    expect(res.status).toBe(200);
+    expect(res.headers['content-disposition']).toBe('attachment; filename="by-mark-schedule-by-mark-r1.csv"');
+    const [header, ...records] = parseCsv(res.text);
+    expect(header.slice(0, 6)).toEqual(['level', 'level_name', 'mark', 'kind', 'size', 'quantity']);
+    const members = design.body.members as DesignMember[];
+    const marks = new Set(members.map((m) => `${m.level} ${m.mark}`));
+    expect(records).toHaveLength(marks.size);
+    const rows = records.map((r) => Object.fromEntries(header.map((h, i) => [h, r[i]])));
+    expect(rows.reduce((n, r) => n + Number(r.quantity), 0)).toBe(members.length);
+    for (const row of rows) {
+      const mine = members.filter((m) => m.mark === row.mark && m.level === row.level);
+      expect(Number(row.quantity)).toBe(mine.length);
+      const maxD = Math.max(...mine.flatMap((m) => [m.reactions.start.D_kip, m.reactions.end.D_kip]));
+      expect(Number(row.R_envelope_D_kip)).toBeCloseTo(maxD, 3);
+    }
+  });
+
+  it('when "by" is neither member nor mark, then 400 names the field', async () => {
+    const { schemeId } = await makeScheme(t, { designed: true });
+    const res = await t.agents.drafter.get(`/api/schemes/${schemeId}/schedule.csv?by=level`);
+    expect(res.status).toBe(400);
+    expect(Object.keys(res.body.error.fields ?? {})).toContain('by');
+  });
+});
+
 describe('GET /api/schemes/:id/schedule.csv', () => {
   it('when a drafter downloads it, then it matches the stored design row for row, with units in the headers', async () => {
     const { schemeId } = await makeScheme(t, { designed: true, name: 'Scheme A, "north" bays' });

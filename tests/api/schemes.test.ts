@@ -30,9 +30,13 @@ describe('create and list', () => {
     expect(s.createdBy).toEqual({ id: t.seed.userIds.engineer, name: 'Tobias Renfrew' });
     expect(s.plan).toEqual({
       format: 'baywright-plan',
-      version: 1,
+      version: 2,
       name: 'Scheme C — long span',
-      designBasis: { method: 'LRFD', Fy_ksi: 50, liveLoadReduction: true, deflectionLimits: { live: 360, total: 240 } },
+      designBasis: {
+        method: 'LRFD', Fy_ksi: 50, liveLoadReduction: true, deflectionLimits: { live: 360, total: 240 },
+        // plan file version 2 defaults, composite on for a new scheme (calc-interface.md "Additions")
+        composite: { enabled: true, studDiameter_in: 0.75, studFu_ksi: 65, minPercentComposite: 0.25, constructionLive_psf: 20, shored: false, camber: true },
+      },
       grids: [],
       levels: [{ id: 'L2', name: 'Level 2', elevation_ft: 14 }],
       columns: [], members: [], zones: [], decks: [], pointLoads: [], lineLoads: [], openings: [],

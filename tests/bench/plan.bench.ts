@@ -50,7 +50,7 @@ export function regularBuildingPlan(levelsCount: number, baysX: number, baysY: n
   const levels = Array.from({ length: levelsCount }, (_, i) => ({ id: `L${i + 2}`, name: `Level ${i + 2}`, elevation_ft: 14 * (i + 1), ...(i === levelsCount - 1 ? { roof: true } : {}) }));
   const plan: Plan = {
     format: 'baywright-plan',
-    version: 1,
+    version: 2,
     name: 'Bench: regular building',
     designBasis: { method: 'LRFD', Fy_ksi: 50, liveLoadReduction: true, deflectionLimits: { live: 360, total: 240 } },
     levels,

@@ -4,6 +4,7 @@ import { render, screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it } from 'vitest';
 import { ScheduleTable } from '../../src/features/schedule/components/schedule-table.component';
+import { ScheduleMarkTable } from '../../src/features/schedule/components/schedule-mark-table.component';
 import { defaultSchemeId } from '../../src/features/schedule/components/schedule-screen.component';
 import { designScheme } from '../../shared/engine/index';
 import { scheduleBasis, scheduleRows } from '../../shared/drafting/schedule.drafting';
@@ -92,6 +93,52 @@ describe('ScheduleTable', () => {
     unmount();
     renderTable(true);
     expect(screen.getAllByRole('button', { name: /Edit mark/ })).toHaveLength(22);
+  });
+});
+
+describe('ScheduleMarkTable: one row per mark', () => {
+  const markRows = () => within(screen.getByRole('table', { name: 'Schedule by mark' })).getAllByRole('row').filter((r) => r.hasAttribute('data-mark'));
+
+  it('when shown, then each mark has one row with its quantity, and the reactions are headed as the envelope of the ends', () => {
+    render(<ScheduleMarkTable rows={rows} levels={levels} basis={scheduleBasis('LRFD')} units="US" mayEditMarks={false} />);
+    const marks = new Set(rows.map((r) => `${r.level} ${r.mark}`));
+    expect(markRows()).toHaveLength(marks.size);
+    const total = markRows().reduce((n, r) => n + Number(r.getAttribute('data-quantity')), 0);
+    expect(total).toBe(22);
+    for (const r of markRows()) {
+      const mark = r.getAttribute('data-mark')!;
+      const n = rows.filter((x) => x.mark === mark).length;
+      expect(Number(r.getAttribute('data-quantity'))).toBe(n);
+    }
+    expect(screen.getByRole('columnheader', { name: /Reaction, envelope of the ends \(kip\)/ })).toBeInTheDocument();
+    expect(screen.queryByText(/^×\d+$/)).toBeNull();
+  });
+
+  it('when the Level and Kind columns are unticked in Columns, then they are not shown', async () => {
+    const user = userEvent.setup();
+    render(<ScheduleMarkTable rows={rows} levels={levels} basis={scheduleBasis('LRFD')} units="US" mayEditMarks={false} />);
+    expect(screen.getByRole('columnheader', { name: 'Level' })).toBeInTheDocument();
+    await user.click(screen.getByText(/^Columns \(/));
+    await user.click(screen.getByRole('checkbox', { name: 'Level' }));
+    await user.click(screen.getByRole('checkbox', { name: 'Kind' }));
+    expect(screen.queryByRole('columnheader', { name: 'Level' })).toBeNull();
+    expect(screen.queryByRole('columnheader', { name: 'Kind' })).toBeNull();
+  });
+
+  it('when a drafter edits the mark of a row, then every member of the row is given the new mark', async () => {
+    const user = userEvent.setup();
+    const saved: [string[], string | null][] = [];
+    render(<ScheduleMarkTable rows={rows} levels={levels} basis={scheduleBasis('LRFD')} units="US" mayEditMarks onSaveMarks={async (ids, mark) => void saved.push([ids, mark])} />);
+    const row = markRows().find((r) => Number(r.getAttribute('data-quantity')) > 1)!;
+    const mark = row.getAttribute('data-mark')!;
+    await user.click(within(row).getByRole('button', { name: /^Edit mark of the/ }));
+    const input = within(row).getByRole('textbox');
+    await user.clear(input);
+    await user.type(input, 'B-TYP');
+    await user.click(within(row).getByRole('button', { name: 'Save' }));
+    expect(saved).toHaveLength(1);
+    expect(saved[0][1]).toBe('B-TYP');
+    expect(saved[0][0].sort()).toEqual(rows.filter((r) => r.mark === mark).map((r) => r.memberId).sort());
   });
 });
 

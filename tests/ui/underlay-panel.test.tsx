@@ -10,6 +10,15 @@ import { UnderlayImage } from '../../src/features/underlay/components/underlay-i
 import { UnderlayPanel, type UnderlayPanelProps } from '../../src/features/underlay/components/underlay-panel.component';
 import { jsonResponse, testQueryClient } from '../../src/testing/test-utils';
 
+// pdfjs cannot draw in jsdom: the page renderer stands in here (the browser spec draws for real).
+const pdfPages = vi.hoisted(() => ({ calls: [] as [string, number][] }));
+vi.mock('../../src/features/underlay/lib/pdf-page-image', () => ({
+  pdfPageImageUrl: async (url: string, page: number) => {
+    pdfPages.calls.push([url, page]);
+    return `blob:rendered-page-${page}`;
+  },
+}));
+
 const SCHEME = '0b5d2c7e-1111-4a2b-9c3d-222222222222';
 
 function underlay(overrides: Partial<Underlay> = {}): Underlay {
@@ -25,6 +34,9 @@ function underlay(overrides: Partial<Underlay> = {}): Underlay {
     placement: { origin_ft: [0, 80], scale_ft_per_px: 0.05, rotation_deg: 0 },
     opacity: 0.5,
     visible: true,
+    page: null,
+    pageCount: null,
+    locked: false,
     imageUrl: '/api/underlays/u-1/image',
     createdBy: 'u-eng',
     createdAt: '2025-01-01T00:00:00.000Z',
@@ -81,7 +93,7 @@ describe('UnderlayPanel', () => {
     renderPanel();
     await screen.findByText(/No drawing under this level yet/);
     const file = new File([new Uint8Array([0x89, 0x50, 0x4e, 0x47])], 'new-plan.png', { type: 'image/png' });
-    await userEvent.upload(screen.getByLabelText('Upload a plan image'), file);
+    await userEvent.upload(screen.getByLabelText('Upload a plan (image or PDF)'), file);
     expect(await screen.findByText('new-plan.png')).toBeInTheDocument();
     const post = calls.find((c) => c.method === 'POST')!;
     expect(post.url).toBe(`/api/schemes/${SCHEME}/underlays`);
@@ -94,7 +106,7 @@ describe('UnderlayPanel', () => {
     stubServer([], jsonResponse(415, { error: { code: 'unsupported_media_type', message: 'The file is not a PNG or JPEG image (its content was checked, not its name).' } }));
     renderPanel();
     await screen.findByText(/No drawing under this level yet/);
-    await userEvent.upload(screen.getByLabelText('Upload a plan image'), new File(['hello'], 'fake.png', { type: 'image/png' }));
+    await userEvent.upload(screen.getByLabelText('Upload a plan (image or PDF)'), new File(['hello'], 'fake.png', { type: 'image/png' }));
     expect(await screen.findByRole('alert')).toHaveTextContent('The file is not a PNG or JPEG image');
   });
 
@@ -103,8 +115,8 @@ describe('UnderlayPanel', () => {
     renderPanel();
     await screen.findByText(/No drawing under this level yet/);
     const big = new File([new Uint8Array(10 * 1024 * 1024 + 1)], 'scan.jpg', { type: 'image/jpeg' });
-    await userEvent.upload(screen.getByLabelText('Upload a plan image'), big);
-    expect(await screen.findByRole('alert')).toHaveTextContent('scan.jpg is 10.0 MB; the largest image accepted is 10 MB.');
+    await userEvent.upload(screen.getByLabelText('Upload a plan (image or PDF)'), big);
+    expect(await screen.findByRole('alert')).toHaveTextContent('scan.jpg is 10.0 MB; the largest file accepted is 10 MB.');
     expect(calls.filter((c) => c.method === 'POST')).toEqual([]);
   });
 
@@ -174,10 +186,73 @@ describe('UnderlayPanel', () => {
     renderPanel({ canEdit: false });
     expect(await screen.findByText('level-2-arch.png')).toBeInTheDocument();
     expect(screen.getByText('Hidden.')).toBeInTheDocument();
-    expect(screen.queryByLabelText('Upload a plan image')).not.toBeInTheDocument();
+    expect(screen.queryByLabelText('Upload a plan (image or PDF)')).not.toBeInTheDocument();
     expect(screen.queryByRole('checkbox', { name: 'Show' })).not.toBeInTheDocument();
     expect(screen.queryByRole('button', { name: 'Calibrate' })).not.toBeInTheDocument();
     expect(screen.queryByRole('button', { name: 'Delete…' })).not.toBeInTheDocument();
+  });
+});
+
+describe('UnderlayPanel: PDF underlays', () => {
+  const pdf = (over: Partial<Underlay> = {}) =>
+    underlay({ id: 'u-pdf', filename: 'A-201.pdf', mime: 'application/pdf', width_px: 2592, height_px: 1728, page: 2, pageCount: 3, ...over });
+
+  it('when a PDF underlay is listed, then its page, page count and size in points show, and the page is drawn', async () => {
+    stubServer([pdf()]);
+    renderPanel();
+    expect(await screen.findByText(/PDF page 2 of 3 · 2592 × 1728 pt/)).toBeInTheDocument();
+    expect(screen.getByText(/1 pt = 0\.0500 ft/)).toBeInTheDocument();
+    expect(await screen.findByTestId('pdf-page-ready')).toHaveTextContent('Page 2 drawn.');
+    expect(pdfPages.calls).toContainEqual(['/api/underlays/u-1/image', 2]);
+  });
+
+  it('when another page is picked, then page: 3 is sent; when Lock is ticked, then locked: true is sent', async () => {
+    const calls = stubServer([pdf()]);
+    renderPanel();
+    await userEvent.selectOptions(await screen.findByRole('combobox', { name: 'Page' }), '3');
+    await waitFor(() => expect(calls.filter((c) => c.method === 'PATCH')).toHaveLength(1));
+    expect(JSON.parse(String(calls.find((c) => c.method === 'PATCH')!.body))).toEqual({ page: 3 });
+    await userEvent.click(screen.getByRole('checkbox', { name: 'Lock' }));
+    await waitFor(() => expect(calls.filter((c) => c.method === 'PATCH')).toHaveLength(2));
+    expect(JSON.parse(String(calls.filter((c) => c.method === 'PATCH')[1].body))).toEqual({ locked: true });
+  });
+
+  it('when the underlay is locked, then Calibrate, Pick on the plan and the page picker are disabled', async () => {
+    stubServer([pdf({ locked: true })]);
+    renderPanel({ onPickCalibration: () => undefined });
+    expect(await screen.findByRole('button', { name: 'Calibrate' })).toBeDisabled();
+    expect(screen.getByRole('button', { name: 'Pick on the plan' })).toBeDisabled();
+    expect(screen.getByRole('combobox', { name: 'Page' })).toBeDisabled();
+    expect(screen.getByRole('checkbox', { name: 'Lock' })).toBeChecked();
+  });
+
+  it('when a PDF underlay is drawn on the plan, then its rendered page is the Konva image, sized by its points and the scale', async () => {
+    const sources: string[] = [];
+    const loaded: { onload: (() => void) | null }[] = [];
+    class FakeImage {
+      onload: (() => void) | null = null;
+      onerror: (() => void) | null = null;
+      set src(v: string) {
+        sources.push(v);
+        loaded.push(this);
+      }
+    }
+    vi.stubGlobal('Image', FakeImage);
+    const stage = createRef<Konva.Stage>();
+    render(
+      <Stage ref={stage} width={800} height={600}>
+        <Layer>
+          <UnderlayImage underlay={pdf({ id: 'u-pdf', placement: { origin_ft: [0, 86.4], scale_ft_per_px: 0.05, rotation_deg: 0 } })} view={{ scale: 2, x: 0, y: 400 }} />
+        </Layer>
+      </Stage>,
+    );
+    await waitFor(() => expect(sources).toEqual(['blob:rendered-page-2']));
+    act(() => loaded[0].onload!());
+    // 2592 pt × 0.05 ft/pt × 2 px/ft = 259.2 px wide; top at −86.4 × 2 + 400 = 227.2 px.
+    const node = stage.current!.findOne('.underlay-u-pdf')!;
+    expect(node.getAttrs().width).toBeCloseTo(259.2, 9);
+    expect(node.getAttrs().height).toBeCloseTo(172.8, 9);
+    expect(node.getAttrs().y).toBeCloseTo(227.2, 9);
   });
 });
 

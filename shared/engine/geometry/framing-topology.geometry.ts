@@ -209,21 +209,42 @@ export function buildFramingTopology(plan: Plan): FramingTopology {
     columnIndexByLevel.set(level, idx);
   }
 
+  // Columns at any level: a member end on a column that does not list the member's level is
+  // that omission (not a support cycle of the members meeting there).
+  const columnsAnyLevel = new SegmentGridIndex<{ id: string; at: Point; levels: string[] }>(INDEX_CELL_FT);
+  for (const c of plan.columns) columnsAnyLevel.insert({ id: c.id, at: [c.x_ft, c.y_ft], levels: c.levels }, [c.x_ft, c.y_ft], [c.x_ft, c.y_ft], SUPPORT_TOLERANCE_FT);
+
   let memberIndexInFile: Map<string, number> | null = null; // only for problem paths
+  const pathOf = (fm: FramingMember, end: MemberEnd) => `members[${(memberIndexInFile ??= new Map(plan.members.map((m, i) => [m.id, i]))).get(fm.id)}].${end}`;
   for (const fm of members.values()) {
     const index = indexByLevel.get(fm.level)!;
     const columnIndex = columnIndexByLevel.get(fm.level);
     for (const end of ['start', 'end'] as const) {
       const p = fm[end];
-      const support = findEndSupport(p, fm, columnIndex?.near(p) ?? [], index.near(p));
+      let support = findEndSupport(p, fm, columnIndex?.near(p) ?? [], index.near(p));
+      let levelMissing = false;
+      if (support.kind !== 'column') {
+        const onMemberInterior = support.kind === 'member' && support.position_ft > SUPPORT_TOLERANCE_FT && support.position_ft < members.get(support.id)!.span_ft - SUPPORT_TOLERANCE_FT;
+        const column = onMemberInterior ? undefined : columnsAnyLevel.near(p).filter((c) => distanceFt(c.at, p) <= SUPPORT_TOLERANCE_FT).sort((a, b) => (a.id < b.id ? -1 : 1))[0];
+        if (column) {
+          support = { kind: 'none' };
+          levelMissing = true;
+          problems.push(
+            planProblem('error', 'column-level-missing', `Member ${fm.id}: ${end} ${fmt(p)} is on column ${column.id}, but the column's levels (${column.levels.join(', ') || 'none'}) do not include ${fm.level}; add ${fm.level} to the column's levels`, {
+              elementId: fm.id,
+              path: pathOf(fm, end),
+            }),
+          );
+        }
+      }
       fm.supports[end] = support;
       if (support.kind === 'member') {
         members.get(support.id)!.carries.push({ memberId: fm.id, end, position_ft: support.position_ft });
-      } else if (support.kind === 'none') {
+      } else if (support.kind === 'none' && !levelMissing) {
         problems.push(
           planProblem('error', 'member-end-unsupported', `Member ${fm.id}: ${end} ${fmt(p)} lands on no column, member or wall at level ${fm.level}`, {
             elementId: fm.id,
-            path: `members[${(memberIndexInFile ??= new Map(plan.members.map((m, i) => [m.id, i]))).get(fm.id)}].${end}`,
+            path: pathOf(fm, end),
           }),
         );
       }

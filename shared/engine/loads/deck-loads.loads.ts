@@ -6,6 +6,7 @@
 import type { Plan, PlanDeck, PlanZone } from '../../schemas/plan.schema';
 import { planProblem, type PlanProblem } from '../../schemas/plan-problem.schema';
 import { SUPPORT_TOLERANCE_FT, type FramingMember, type FramingTopology } from '../geometry/framing-topology.geometry';
+import { deckOverlapProblems } from '../geometry/polygon-overlap.geometry';
 import { computeDeckTributary, toDeckFrame, type DeckSupporter, type DeckTributaryResult } from './deck-tributary.loads';
 import type { AreaLoad, LoadCase, TakedownLoad } from '../takedown/member-load.takedown';
 
@@ -134,6 +135,7 @@ export function buildDeckContexts(plan: Plan, topology: FramingTopology): { deck
     }
     decks.push({ deck, zone, roof: roofLevels.has(deck.level), supporters, axes, tributary });
   });
+  problems.push(...deckOverlapProblems(plan));
   return { decks, problems };
 }
 

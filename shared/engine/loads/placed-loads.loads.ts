@@ -6,7 +6,9 @@
  *   matching how area load on an overhang is treated;
  * - a line load along a member → that member; across the deck → cut into pieces between
  *   members and shared out by the lever rule along its length (exact: linear pieces).
- * Loads that land on no deck and no member are reported and left out of the applied total.
+ * Loads that land on no deck and no member are reported as errors and still counted in the
+ * applied total (never in the reactions), so `equilibrium` shows them unbalanced instead of
+ * looking balanced with the load silently gone.
  */
 import type { Plan, PlanLineLoadRepaired, PlanPointLoadRepaired } from '../../schemas/plan.schema';
 import { planProblem, type PlanProblem } from '../../schemas/plan-problem.schema';
@@ -94,7 +96,7 @@ function decksByLevel(decks: readonly DeckContext[]): Map<string, DeckContext[]>
   return map;
 }
 
-/** Place every point load; returns the applied totals of the loads that reached the structure. */
+/** Place every point load; returns the applied totals (loads off the floor included, see above). */
 export function placePointLoads(plan: Plan, topology: FramingTopology, decks: readonly DeckContext[], sinks: PlacedLoadSinks): { applied: CaseTotals; problems: PlanProblem[] } {
   const applied = zeroCaseTotals();
   const problems: PlanProblem[] = [];
@@ -124,11 +126,12 @@ export function placePointLoads(plan: Plan, topology: FramingTopology, decks: re
     const shares = ctx ? (() => { const s = leverRuleSupporters(ctx, u, v); return leverFractions(s.left, s.right, u); })() : [];
     if (!ctx || shares.length === 0) {
       problems.push(
-        planProblem('error', 'load-off-floor', `Point load ${pl.id}: at (${pl.x_ft}, ${pl.y_ft}) on level ${pl.level} is on no deck, member or column; it is left out`, {
+        planProblem('error', 'load-off-floor', `Point load ${pl.id}: at (${pl.x_ft}, ${pl.y_ft}) on level ${pl.level} is on no deck, member or column; nothing carries it, so it is in the applied load but in no reaction`, {
           elementId: pl.id,
           path: `pointLoads[${i}]`,
         }),
       );
+      for (const [c, kip] of cases) applied[c] += kip;
       return;
     }
     for (const share of shares) {
@@ -162,7 +165,7 @@ function crossingsWithPolygon(p0: Point, p1: Point, polygon: readonly Point[]): 
   return out;
 }
 
-/** Place every line load; returns the applied totals of the loads that reached the structure. */
+/** Place every line load; returns the applied totals (parts off the floor included, see above). */
 export function placeLineLoads(plan: Plan, topology: FramingTopology, decks: readonly DeckContext[], sinks: PlacedLoadSinks): { applied: CaseTotals; problems: PlanProblem[] } {
   const applied = zeroCaseTotals();
   const problems: PlanProblem[] = [];
@@ -225,6 +228,7 @@ export function placeLineLoads(plan: Plan, topology: FramingTopology, decks: rea
       const sharesMid = leverFractions(sides.left, sides.right, um);
       if (!ctx || sharesMid.length === 0) {
         offFloor_ft += pieceLength;
+        for (const [c, w] of cases) applied[c] += w * pieceLength;
         continue;
       }
       const f0 = leverFractions(sides.left, sides.right, u0);
@@ -257,7 +261,7 @@ export function placeLineLoads(plan: Plan, topology: FramingTopology, decks: rea
     }
     if (offFloor_ft > 1e-6) {
       problems.push(
-        planProblem('error', 'load-off-floor', `Line load ${ll.id}: ${offFloor_ft.toFixed(2)} ft of its length is on no deck or member on level ${ll.level}; that part is left out`, {
+        planProblem('error', 'load-off-floor', `Line load ${ll.id}: ${offFloor_ft.toFixed(2)} ft of its length is on no deck or member on level ${ll.level}; nothing carries that part, so it is in the applied load but in no reaction`, {
           elementId: ll.id,
           path: `lineLoads[${i}]`,
         }),

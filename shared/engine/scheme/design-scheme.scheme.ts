@@ -19,7 +19,7 @@ import type { TakedownLoad } from '../takedown/member-load.takedown';
 import { planGeometry, type PlanGeometry, type PlanGeometryMemo } from './plan-geometry-memo.scheme';
 import { lockedShapeWeightPlf, reducedLiveKip, runTakedown, type EndReaction, type MemberTakedown, type TakedownResult } from '../takedown/gravity-takedown.takedown';
 import type { Bracing } from '../takedown/member-bracing.takedown';
-import { assignMarks } from './member-marks.scheme';
+import { assignMarks, sharedMarkConflicts, type MarkInput } from './member-marks.scheme';
 
 export interface SchemeOptions {
   /** Members of the same level, kind, span, load layout and bracing get one size: the heaviest demand governs. */
@@ -458,21 +458,29 @@ function reportedLoads(mt: MemberTakedown, designed: MemberLoad[] | undefined): 
 function buildSchemeResult(plan: Plan, takedown: TakedownResult, designs: Map<string, DesignEntry>, loadsOf: Map<string, MemberLoad[]>): SchemeResult {
   const problems: PlanProblem[] = [...takedown.problems];
   const fileOrder = plan.members.filter((m) => takedown.members.has(m.id));
-  const marks = assignMarks(
-    fileOrder.map((m) => {
-      const d = designs.get(m.id);
-      return {
-        id: m.id,
-        level: m.level,
-        kind: m.kind,
-        shape: d && !('error' in d) ? d.shape : m.shape,
-        span_ft: takedown.members.get(m.id)!.span_ft,
-        midpoint: [(m.start[0] + m.end[0]) / 2, (m.start[1] + m.end[1]) / 2] as const,
-        lockedMark: m.markLocked && m.mark ? m.mark : null,
-      };
-    }),
-    plan.levels,
-  );
+  const markInputs: MarkInput[] = fileOrder.map((m) => {
+    const d = designs.get(m.id);
+    return {
+      id: m.id,
+      level: m.level,
+      kind: m.kind,
+      shape: d && !('error' in d) ? d.shape : m.shape,
+      span_ft: takedown.members.get(m.id)!.span_ft,
+      midpoint: [(m.start[0] + m.end[0]) / 2, (m.start[1] + m.end[1]) / 2] as const,
+      lockedMark: m.markLocked && m.mark ? m.mark : null,
+      issuedMark: m.markLocked ? null : (m.mark ?? null),
+    };
+  });
+  const marks = assignMarks(markInputs, plan.levels);
+  // A locked mark carried by members that no longer match (a load or span changed since it was
+  // set) is said, never silent: one mark is one fabricated piece.
+  const levelName = new Map(plan.levels.map((l) => [l.id, l.name]));
+  for (const c of sharedMarkConflicts(markInputs, marks)) {
+    const designsText = c.designs.map((d) => `${d.shape ?? 'not sized'} spanning ${d.span_ft.toFixed(2)} ft`).join(', ');
+    problems.push(
+      planProblem('warning', 'mark-shared-by-different-designs', `Mark ${c.mark} on ${levelName.get(c.level) ?? c.level} is carried by ${c.memberIds.length} members of different designs (${designsText}); give one of them another mark.`, { elementId: c.memberIds[0] }),
+    );
+  }
 
   // A member with an error against it (e.g. an end that lands on nothing) never reads as passing,
   // whatever its sizing said: the sizing assumed supports the framing does not have.

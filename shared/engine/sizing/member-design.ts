@@ -36,6 +36,16 @@ function constraintText(input: MemberDesignInput): string {
   return parts.length ? ` within the constraints (${parts.join('; ')})` : '';
 }
 
+/** Why a locked shape breaks the member's depth or series constraints, or null when it keeps them. */
+export function lockedShapeOutsideConstraints(input: MemberDesignInput, k: WShapeConstants): string | null {
+  if (input.maxDepth_in != null && k.dIn > input.maxDepth_in) return `depth d = ${k.dIn} in is more than maxDepth_in = ${input.maxDepth_in} in`;
+  if (input.minDepth_in != null && k.dIn < input.minDepth_in) return `depth d = ${k.dIn} in is less than minDepth_in = ${input.minDepth_in} in`;
+  if (input.allowedNominalDepths?.length && !input.allowedNominalDepths.includes(k.nominalDepthIn)) {
+    return `nominal depth ${k.nominalDepthIn} in is not among allowedNominalDepths (${input.allowedNominalDepths.join(', ')} in)`;
+  }
+  return null;
+}
+
 /**
  * The lightest passing shape among the candidates (exact: each candidate is checked with its own
  * self weight, which is the fixed point of the self-weight iteration). Cheap necessary conditions
@@ -57,7 +67,13 @@ export function designMember(input: MemberDesignInput): MemberDesignResult {
   if (input.shape) {
     const k = shapeConstantsFor(input.shape, input.Fy_ksi)!;
     const result = buildMemberResult(ctx, evaluateShape(ctx, k, true), true);
-    if (!k.webCompact) {
+    const outside = lockedShapeOutsideConstraints(input, k);
+    if (outside) {
+      // A locked size the member's own limits forbid never reads as passing (the architect's
+      // depth limit is as binding as a strength check).
+      result.passes = false;
+      result.failure = `Locked shape ${k.label}: ${outside}.`;
+    } else if (!k.webCompact) {
       result.passes = false;
       result.failure = `Locked shape ${k.label}: web noncompact in flexure at Fy = ${input.Fy_ksi} ksi (AISC 360-16 F4 is outside the engine's scope, so the shape is not permitted).`;
     } else if (!result.passes) {
@@ -97,23 +113,28 @@ function alternative(ev: ShapeEvaluation): AlternativeShape {
 }
 
 /**
- * For a design, the next lighter candidate (immediately lighter in the selection order, checked)
- * and the lightest passing candidate of a smaller nominal depth, with their ratios.
+ * For a design, the next lighter candidate (the heaviest candidate strictly lighter than the
+ * shape, checked), a candidate of the same weight when there is one (named as such, never as
+ * lighter), and the lightest passing candidate of a smaller nominal depth, with their ratios.
  */
 export function memberAlternatives(
   input: MemberDesignInput, shape: string,
-): { nextLighter: AlternativeShape | null; nextShallower: AlternativeShape | null } {
+): { nextLighter: AlternativeShape | null; nextShallower: AlternativeShape | null; sameWeight: AlternativeShape | null } {
   assertValidMemberInput({ ...input, shape });
   const ctx = buildMemberContext(input);
   const k = shapeConstantsFor(shape, input.Fy_ksi)!;
   const candidates = candidateShapes({ ...input, shape: null }).filter((c) => c.webCompact);
   let lighter: WShapeConstants | null = null;
+  let same: WShapeConstants | null = null;
+  // Candidates run lightest first: the last strictly lighter one is the next lighter.
   for (const c of candidates) {
-    if (c.weightPlf < k.weightPlf || (c.weightPlf === k.weightPlf && c.dIn < k.dIn)) lighter = c;
-    else break;
+    if (c.weightPlf < k.weightPlf) lighter = c;
+    else if (c.weightPlf > k.weightPlf) break;
+    else if (c.label !== k.label && same === null) same = c;
   }
   const nextLighter = lighter ? alternative(evaluateShape(ctx, lighter, false)) : null;
+  const sameWeight = same ? alternative(evaluateShape(ctx, same, false)) : null;
   const shallower = candidates.filter((c) => c.nominalDepthIn < k.nominalDepthIn);
   const sel = selectLightest(ctx, shallower);
-  return { nextLighter, nextShallower: sel ? alternative(sel) : null };
+  return { nextLighter, nextShallower: sel ? alternative(sel) : null, sameWeight };
 }

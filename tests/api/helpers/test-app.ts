@@ -12,6 +12,7 @@ import { loadConfig, type Config } from '../../../server/config';
 import { connectDatabase } from '../../../server/db/connection';
 import { migrateToLatest } from '../../../server/db/migrator';
 import { DEMO_PASSWORD, DEMO_USERS, seedDemo, type SeedState } from '../../../server/db/seed-demo';
+import { freshTestDatabase } from './test-database';
 
 export type Agent = ReturnType<typeof request.agent>;
 
@@ -55,11 +56,13 @@ export function testConfig(overrides: Partial<Config> = {}): Config {
 }
 
 /**
- * A fresh in-memory database with migrations and the demo seed, the app listening on an
- * ephemeral port, and signed-in agents for every role.
+ * A fresh database (in-memory SQLite, or a new PostgreSQL database when TEST_PG_URL is set)
+ * with migrations and the demo seed, the app listening on an ephemeral port, and signed-in
+ * agents for every role.
  */
 export async function createTestApp(overrides: Partial<Config> = {}): Promise<TestApp> {
-  const config = testConfig(overrides);
+  const database = overrides.databaseUrl ? null : await freshTestDatabase();
+  const config = testConfig(database ? { ...overrides, databaseUrl: database.url } : overrides);
   const db = await connectDatabase(config.databaseUrl);
   await migrateToLatest(db.sequelize);
   const seed = await seedDemo(db);
@@ -125,6 +128,7 @@ export async function createTestApp(overrides: Partial<Config> = {}): Promise<Te
     async close() {
       await new Promise<void>((resolve) => server.close(() => resolve()));
       await db.sequelize.close();
+      await database?.drop();
     },
   };
 }

@@ -113,3 +113,51 @@ describe('scheduleCsv', () => {
     expect(parseCsv('x,"a ""q"", b"\r\n')).toEqual([['x', 'a "q", b']]);
   });
 });
+
+describe('scheduleMarkRows: one row per mark', () => {
+  const plan = fixture();
+  const design = designScheme(plan);
+  const rows = scheduleRows(design, plan);
+
+  it('when members share a mark, then one row carries the quantity, every member and the envelope of their end reactions', async () => {
+    const { scheduleMarkRows } = await import('../../../shared/drafting/schedule.drafting');
+    const byMark = scheduleMarkRows(rows);
+    expect(byMark.reduce((n, r) => n + r.quantity, 0)).toBe(rows.length);
+    expect(new Set(byMark.map((r) => r.key)).size).toBe(byMark.length);
+    for (const mr of byMark) {
+      const members = rows.filter((r) => r.mark === mr.mark && r.level === mr.level);
+      expect(mr.quantity).toBe(members.length);
+      expect(mr.memberIds.sort()).toEqual(members.map((r) => r.memberId).sort());
+      const ends = members.flatMap((r) => [r.start, r.end]);
+      // Envelope: the largest of each case over every end (common practice for a piece schedule).
+      expect(mr.reaction.D_kip).toBe(Math.max(...ends.map((e) => e.D_kip)));
+      expect(mr.reaction.L_kip).toBe(Math.max(...ends.map((e) => e.L_kip)));
+      expect(mr.reaction.factored_kip).toBe(Math.max(...ends.map((e) => e.factored_kip)));
+      expect(mr.ratio).toBe(Math.max(...members.map((r) => r.ratio ?? -1)));
+      expect(mr.split).toBe(false);
+    }
+    expect(byMark.some((r) => r.quantity > 1)).toBe(true);
+  });
+
+  it('when a locked mark is carried by two sizes, then it is split into one row per size, each saying so', async () => {
+    const { scheduleMarkRows } = await import('../../../shared/drafting/schedule.drafting');
+    const edited = structuredClone(rows);
+    const a = edited.find((r) => r.kind === 'beam')!;
+    const b = edited.find((r) => r.kind === 'beam' && r.size !== a.size)!;
+    a.mark = 'B-X';
+    b.mark = 'B-X';
+    const split = scheduleMarkRows(edited).filter((r) => r.mark === 'B-X');
+    expect(split.map((r) => r.size).sort()).toEqual([a.size, b.size].sort());
+    expect(split.every((r) => r.split && r.quantity === 1)).toBe(true);
+  });
+
+  it('when written as CSV, then the header comes first and there is one line per mark row, nothing else', async () => {
+    const { scheduleMarkRows } = await import('../../../shared/drafting/schedule.drafting');
+    const { SCHEDULE_MARK_CSV_COLUMNS } = await import('../../../shared/drafting/schedule-csv.drafting');
+    const byMark = scheduleMarkRows(rows);
+    const records = parseCsv(scheduleCsv(byMark, SCHEDULE_MARK_CSV_COLUMNS));
+    expect(records[0]).toEqual(SCHEDULE_MARK_CSV_COLUMNS.map((c) => c.header));
+    expect(records).toHaveLength(byMark.length + 1);
+    expect(records.every((r) => r.length === SCHEDULE_MARK_CSV_COLUMNS.length)).toBe(true);
+  });
+});

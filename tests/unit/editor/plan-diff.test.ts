@@ -30,4 +30,12 @@ describe('save-conflict summary', () => {
     const mine = { ...theirs, designBasis: { ...theirs.designBasis, method: 'ASD' as const } };
     expect(describeDiff(diffPlans(theirs, mine))).toBe('name or design basis changed');
   });
+
+  it('when only issued marks differ, then nothing is counted; a locked mark counts as a change', () => {
+    const theirs = twoBayPlan();
+    const issued = { ...theirs, members: theirs.members.map((m) => ({ ...m, mark: '2B1' })) };
+    expect(diffPlans(theirs, issued).total).toBe(0);
+    const locked = { ...theirs, members: theirs.members.map((m, i) => (i === 0 ? { ...m, mark: 'X1', markLocked: true } : m)) };
+    expect(describeDiff(diffPlans(theirs, locked))).toBe('1 member changed');
+  });
 });

@@ -254,3 +254,34 @@ describe('selection properties (fast-check, brute force over the whole catalog)'
     }), { numRuns: 50 });
   });
 });
+
+describe('next lighter is strictly lighter', () => {
+  // AISC Manual 15th ed. Table 1-1 (AISC Shapes Database v15.0): W18X40 and W16X40 both weigh 40 plf; W16X26 and W14X26 both 26 plf.
+  it('when the shape is W18X40 or W16X26, then next lighter weighs less and the equal-weight shape is named as the same weight', () => {
+    for (const [shape, twin] of [['W18X40', 'W16X40'], ['W16X26', 'W14X26']] as const) {
+      const alt = memberAlternatives(base(), shape);
+      const w = Number(shape.split('X')[1]);
+      expect(alt.nextLighter!.weight_plf, shape).toBeLessThan(w);
+      expect(alt.nextLighter!.shape).not.toBe(twin);
+      expect(alt.sameWeight?.weight_plf).toBe(w);
+      expect(alt.sameWeight?.shape).not.toBe(shape);
+    }
+  });
+
+  it('when any compact catalog shape is the design, then next lighter is the heaviest candidate strictly lighter (brute force)', () => {
+    const candidates = candidateShapes({ ...base(), shape: null }).filter((c) => c.webCompact);
+    fc.assert(
+      fc.property(fc.constantFrom(...candidates), (k) => {
+        const alt = memberAlternatives(base(), k.label);
+        const lighter = candidates.filter((c) => c.weightPlf < k.weightPlf);
+        if (lighter.length === 0) {
+          expect(alt.nextLighter).toBeNull();
+        } else {
+          expect(alt.nextLighter!.weight_plf).toBe(Math.max(...lighter.map((c) => c.weightPlf)));
+          expect(alt.nextLighter!.weight_plf).toBeLessThan(k.weightPlf);
+        }
+      }),
+      { numRuns: 60 },
+    );
+  });
+});

@@ -68,15 +68,17 @@ describe('framing topology', () => {
     expect(r.equilibrium.D.applied_kip - r.equilibrium.D.reactions_kip).toBeCloseTo(5, 9);
   });
 
-  it('when loads are off the floor, then each is named and left out of the applied load', () => {
+  it('when loads are off the floor, then each is named and counted as applied but in no reaction, so equilibrium does not balance', () => {
     const plan = singleBay();
     plan.pointLoads.push({ id: 'p9', level: 'L2', x_ft: 45, y_ft: 5, D_kip: 2, L_kip: 0 });
     plan.lineLoads.push({ id: 'w9', level: 'L2', start: [25, 5], end: [35, 5], D_klf: 1, L_klf: 0 });
     const r = runTakedown(plan);
     expect(codes(r.problems)).toEqual(['load-off-floor:p9', 'load-off-floor:w9']);
     expect(r.problems[1].message).toContain('5.00 ft of its length');
-    expect(r.equilibrium.D.applied_kip).toBeCloseTo(54 + 5, 9);
+    // 54 kip of deck + 5 ft × 1 klf carried; 2 kip point and the other 5 ft × 1 klf carried by nothing
+    expect(r.equilibrium.D.applied_kip).toBeCloseTo(54 + 5 + 2 + 5, 9);
     expect(r.equilibrium.D.reactions_kip).toBeCloseTo(54 + 5, 9);
+    expect(r.problems[0].message).toBe('Point load p9: at (45, 5) on level L2 is on no deck, member or column; nothing carries it, so it is in the applied load but in no reaction');
   });
 
   it('when a member is at an angle to the deck span, then a warning names it', () => {

@@ -3,13 +3,15 @@ import { readFileSync } from 'node:fs';
 import { exportPlanFile, parsePlanFile } from '../../../shared/schemas/plan.schema';
 import { migratePlanDocument, type PlanMigration } from '../../../shared/schemas/plan-migrations';
 
+const V1_TO_V2 = 'Migrated from version 1 to 2: composite settings added with composite off (members follow them, studs designed, columns sized)';
 const fixture = () => JSON.parse(readFileSync(new URL('../../fixtures/plans/two-bay.plan.json', import.meta.url), 'utf8'));
 
 describe('parsePlanFile', () => {
-  it('when the two-bay fixture is read, then it parses with no repairs and no problems', () => {
+  it('when the two-bay fixture (version 1) is read, then it migrates to version 2 and parses with no other repairs and no problems', () => {
     const r = parsePlanFile(fixture());
     expect(r.problems).toEqual([]);
-    expect(r.repairs).toEqual([]);
+    expect(r.repairs).toEqual([V1_TO_V2]);
+    expect(r.plan?.version).toBe(2);
     expect(r.plan?.members).toHaveLength(11);
     expect(r.plan?.decks[0].spanDirection).toBe('x');
   });
@@ -43,6 +45,7 @@ describe('parsePlanFile', () => {
     expect(r.plan!.lineLoads[1].id).toBe('W1');
     expect(r.plan!.lineLoads[1].L_klf).toBe(0);
     expect(r.repairs).toEqual([
+      V1_TO_V2,
       'pointLoads[0]: had no id, assigned "P1"',
       'lineLoads[1]: had no id, assigned "W1"',
       'openings[0]: had no id, assigned "O1"',
@@ -56,6 +59,7 @@ describe('parsePlanFile', () => {
     expect(r.problems).toEqual([]);
     expect(r.plan!.decks[0].polygon).toEqual([[60, 0], [60, 36], [0, 36], [0, 0]]);
     expect(r.repairs).toEqual([
+      V1_TO_V2,
       'decks[0] (id d1): 2 duplicate polygon point(s) removed',
       'decks[0] (id d1): clockwise polygon re-oriented counter-clockwise',
     ]);
@@ -98,9 +102,64 @@ describe('migratePlanDocument', () => {
     if (!r.ok) expect(r.problem.code).toBe('plan-version-gap');
   });
   it('when the file is current, then nothing runs and the input is not mutated', () => {
-    const doc = { format: 'baywright-plan', version: 1 };
+    const doc = { format: 'baywright-plan', version: 2 };
     const r = migratePlanDocument(doc);
     expect(r.ok && r.applied).toEqual([]);
-    expect(doc).toEqual({ format: 'baywright-plan', version: 1 });
+    expect(doc).toEqual({ format: 'baywright-plan', version: 2 });
+  });
+});
+
+describe('plan file version 1 → 2 (calc-interface.md "Additions for composite beams and columns")', () => {
+  it('when a version 1 file is read, then composite is off with the published defaults, members follow it with studs designed, columns are sized, and nothing else changes', () => {
+    const v1 = fixture();
+    const r = parsePlanFile(v1);
+    const plan = r.plan!;
+    // calc-interface.md "Additions": the defaults shown, version 1 files migrate to enabled: false
+    expect(plan.designBasis.composite).toEqual({
+      enabled: false, studDiameter_in: 0.75, studFu_ksi: 65, minPercentComposite: 0.25, constructionLive_psf: 20, shored: false, camber: true,
+    });
+    // members[].composite / studs and columns[].shape default to null; absent reads as null
+    expect(plan.members.every((m) => (m.composite ?? null) === null && (m.studs ?? null) === null)).toBe(true);
+    expect(plan.columns.every((c) => (c.shape ?? null) === null && c.spliceLevels === undefined)).toBe(true);
+    expect(plan.decks.every((d) => d.slab === undefined)).toBe(true);
+    // the rest of the file is untouched
+    expect(plan.members.map((m) => [m.id, m.start, m.end, m.shape])).toEqual(v1.members.map((m: { id: string; start: unknown; end: unknown; shape: unknown }) => [m.id, m.start, m.end, m.shape]));
+    expect(plan.zones).toEqual(v1.zones);
+  });
+
+  it('when a version 1 file already carries a version 2 field, then the migration keeps it', () => {
+    const doc = fixture();
+    doc.members[0].studs = 12;
+    doc.designBasis.composite = { enabled: true };
+    const plan = parsePlanFile(doc).plan!;
+    expect(plan.members[0].studs).toBe(12);
+    expect(plan.designBasis.composite).toMatchObject({ enabled: true, studDiameter_in: 0.75, minPercentComposite: 0.25 });
+  });
+
+  it('when a version 2 file with every new field is exported and imported again, then it is identical', () => {
+    const doc = { ...fixture(), version: 2 };
+    doc.designBasis.composite = { enabled: true, studDiameter_in: 0.75, studFu_ksi: 65, minPercentComposite: 0.3, constructionLive_psf: 20, shored: false, camber: true, studEquivalentWeight_lb: 10 };
+    doc.decks[0].slab = { ribHeight_in: 3, toppingThickness_in: 3.25, ribAvgWidth_in: 6, ribSpacing_in: 12, concreteWeight_pcf: 115, fc_ksi: 3, deckWeight_psf: 2 };
+    doc.members[0].composite = false;
+    doc.members[1].studs = 20;
+    doc.columns[0].shape = 'W10X33';
+    doc.columns[0].spliceLevels = ['L2'];
+    const first = parsePlanFile(doc);
+    expect(first.problems).toEqual([]);
+    expect(first.repairs).toEqual([]);
+    const again = parsePlanFile(JSON.parse(JSON.stringify(exportPlanFile(first.plan!))));
+    expect(again.repairs).toEqual([]);
+    expect(again.plan).toEqual(first.plan);
+    expect(again.plan!.decks[0].slab?.concreteWeight_pcf).toBe(115);
+    expect(again.plan!.columns[0]).toMatchObject({ shape: 'W10X33', spliceLevels: ['L2'] });
+  });
+
+  it('when a version 2 field is malformed, then the problem names its path and element', () => {
+    const doc = { ...fixture(), version: 2 };
+    doc.members[1].studs = -3;
+    doc.decks[0].slab = { ribHeight_in: 3, toppingThickness_in: 3.25, ribAvgWidth_in: 14, ribSpacing_in: 12, concreteWeight_pcf: 115, fc_ksi: 3, deckWeight_psf: 2 };
+    const r = parsePlanFile(doc);
+    expect(r.plan).toBeNull();
+    expect(r.problems.map((p) => p.path)).toEqual(['members[1] (id gA23).studs', 'decks[0] (id d1).slab.ribAvgWidth_in']);
   });
 });

@@ -14,7 +14,13 @@ describe('loadConfig', () => {
       trustProxy: false,
       designRunsKept: 5,
       smtp: null,
+      designRuns: {},
     });
+  });
+
+  it('when the design budget variables are given, then designRuns carries them; a bad one is named', () => {
+    expect(loadConfig({ DESIGN_TIMEOUT_MS: '5000', DESIGN_MEMORY_MB: '256', DESIGN_WORKERS: '2' }).designRuns).toEqual({ timeoutMs: 5000, memoryMb: 256, workers: 2 });
+    expect(() => loadConfig({ DESIGN_TIMEOUT_MS: '0' })).toThrow('DESIGN_TIMEOUT_MS must be at least 1');
   });
 
   it('when DESIGN_RUNS_KEPT is set, then it is read, and a value that is not a whole number from 1 to 1000 is refused by name', () => {

@@ -34,7 +34,7 @@ export function goldenBuildingPlan(): Plan {
   const Y = baysY * bay;
   const plan: Plan = {
     format: 'baywright-plan',
-    version: 1,
+    version: 2,
     name: 'Golden: three-storey building',
     designBasis: { method: 'LRFD', Fy_ksi: 50, liveLoadReduction: true, deflectionLimits: { live: 360, total: 240 } },
     levels,

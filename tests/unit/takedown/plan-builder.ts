@@ -12,7 +12,7 @@ export function member(id: string, kind: 'girder' | 'beam', start: [number, numb
 export function emptyPlan(levels: string[] = ['L2']): Plan {
   return {
     format: 'baywright-plan',
-    version: 1,
+    version: 2,
     name: 'test',
     designBasis: { method: 'LRFD', Fy_ksi: 50, liveLoadReduction: true, deflectionLimits: { live: 360, total: 240 } },
     levels: levels.map((id, i) => ({ id, name: id, elevation_ft: 14 * (i + 1) })),

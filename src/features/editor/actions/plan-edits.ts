@@ -196,7 +196,11 @@ export function copyLevel(plan: Plan, fromLevel: string, toLevels: readonly stri
   const lineLoads = plan.lineLoads.filter((w) => !onTarget(w));
   const openings = plan.openings.filter((o) => !onTarget(o));
   for (const level of targets) {
-    for (const m of plan.members) if (m.level === fromLevel) members.push({ ...m, id: nextId(plan, m.kind === 'girder' ? 'g' : 'b', taken), level, mark: m.markLocked ? null : m.mark, markLocked: false });
+    for (const m of plan.members) if (m.level === fromLevel) {
+      // A copy is a new piece on its level: the design gives it that level's mark (3B1, not 2B1).
+      const { mark: _mark, markLocked: _locked, ...rest } = m;
+      members.push({ ...rest, id: nextId(plan, m.kind === 'girder' ? 'g' : 'b', taken), level });
+    }
     for (const d of plan.decks) if (d.level === fromLevel) decks.push({ ...d, id: nextId(plan, 'd', taken), level });
     for (const p of plan.pointLoads) if (p.level === fromLevel) pointLoads.push({ ...p, id: nextId(plan, 'P', taken), level });
     for (const w of plan.lineLoads) if (w.level === fromLevel) lineLoads.push({ ...w, id: nextId(plan, 'W', taken), level });

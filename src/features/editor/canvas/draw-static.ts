@@ -12,6 +12,7 @@ import type { StaticGeometry } from './static-geometry';
 import type { UnitSystem } from '../../../lib/units';
 import { MONO, SANS, lengthText, lineLoadText, pointLoadText, type PlanTheme } from './plan-theme';
 import { toScreen, visibleBounds } from './view-transform';
+import { memberChipTexts } from '../members/member-status';
 
 const BUBBLE_R = 11;
 const LINE_PAST_PX = 26;
@@ -319,16 +320,11 @@ function drawMemberLabels(ctx: CanvasRenderingContext2D, geo: StaticGeometry, vi
     // Read from the bottom or the right, as on a drawing.
     if (angle > Math.PI / 2 + 1e-6) angle -= Math.PI;
     if (angle <= -Math.PI / 2 - 1e-6) angle += Math.PI;
-    const ratio = s.ratio === null ? '' : ` ${s.util.printed}`;
-    let chip = s.state === 'designing' ? '…' : `${s.size}${ratio}`;
-    if (s.shortReason && lengthPx > 220) chip += ` · ${s.state === 'fails' ? 'over: ' : s.state === 'problem' ? 'problem: ' : ''}${s.shortReason}`;
-    else if (s.state === 'not-designed') chip = `not designed`;
-    else if (s.state === 'fails') chip += ' over';
-    else if (s.state === 'problem') chip += ' problem';
     const mark = s.mark;
-    const chipW = ctx.measureText(chip).width + 8;
     const markW = mark ? ctx.measureText(mark).width + 5 : 0;
-    if (chipW + markW > lengthPx - 12) continue;
+    const chip = memberChipTexts(s).find((text) => ctx.measureText(text).width + 8 + markW <= lengthPx - 12);
+    if (chip === undefined) continue;
+    const chipW = ctx.measureText(chip).width + 8;
     ctx.save();
     ctx.translate(sx, sy);
     ctx.rotate(angle);

@@ -1,11 +1,11 @@
 import { toDisplay, type QuantityKind, type UnitSystem } from '../../../lib/units';
 
 /**
- * The text an editable field starts with: the plan's US value as stored, or its SI
- * conversion to four decimals (trailing zeros dropped). A field whose text is left as this
- * is not written back, so showing SI never nudges a stored US value.
+ * The text an editable field starts with: the value in the reader's system to four decimals
+ * (trailing zeros dropped), so 20 kN typed and read back in US shows 4.4962, not
+ * 4.49617886199421. A field whose text is left as this is not written back, so showing it
+ * never nudges the stored value.
  */
 export function fieldText(kind: QuantityKind, valueUS: number, system: UnitSystem): string {
-  if (system === 'US') return String(valueUS);
   return String(Number(toDisplay(kind, valueUS, system).toFixed(4)));
 }

@@ -3,7 +3,7 @@ import { useStore } from 'zustand';
 import { Button } from '../../../components/ui/button.ui';
 import { dispatch } from '../actions/action-registry';
 import type { EditorStore } from '../store/editor.store';
-import { formatQuantity, parseQuantity, unitLabel } from '../../../lib/units';
+import { formatElevation, parseQuantity, unitLabel } from '../../../lib/units';
 import { useUnits } from '../../../lib/units-context';
 import { fieldText } from './field-text';
 
@@ -24,7 +24,7 @@ export function LevelBar({ store, canEdit }: { store: EditorStore; canEdit: bool
       <select id={selectId} className={`${INPUT} min-w-36 font-medium`} value={levelId} onChange={(e) => dispatch(store, 'level.show', { levelId: e.target.value })}>
         {[...levels].reverse().map((l) => (
           <option key={l.id} value={l.id}>
-            {l.name} · EL {system === 'SI' ? formatQuantity('length_ft', l.elevation_ft, 'SI') : `${l.elevation_ft} ft`}
+            {l.name} · EL {formatElevation(l.elevation_ft, system)}
           </option>
         ))}
       </select>

@@ -1,4 +1,4 @@
-import { useEffect, useRef, useState, useSyncExternalStore, type ReactNode } from 'react';
+import { useEffect, useLayoutEffect, useRef, useState, useSyncExternalStore, type ReactNode } from 'react';
 import { useStore } from 'zustand';
 import type { SchemeMember, SchemeResult } from '../../../../shared/engine/index';
 import type { Plan, PlanMember } from '../../../../shared/schemas/plan.schema';
@@ -9,6 +9,7 @@ import { ACTIONS, actionForKey, dispatch, keyOf, type ActionId } from '../action
 import { savePlan } from '../api/save-plan.api';
 import { PlanCanvas, type PlanViewArgs } from '../canvas/plan-canvas.component';
 import { LiveDesign } from '../design/live-design';
+import { keepIssuedMarks } from '../design/issued-marks';
 import { MemberList } from '../members/member-list.component';
 import { createEditorStore, type EditorStore } from '../store/editor.store';
 import { PlanAutosave, type AutosaveSnapshot } from '../sync/plan-autosave';
@@ -37,6 +38,17 @@ export interface DesignBasisSlotArgs {
   submit: (next: Plan['designBasis']) => void;
 }
 
+export interface BuildingViewSlotArgs {
+  plan: Plan;
+  /** The live design of the plan (null until the first one arrives). */
+  result: SchemeResult | null;
+  selection: readonly string[];
+  /** Selects a plan element (a member or column) on its level, as a click on the Plan would; null clears. */
+  select: (piece: { elementId: string; level: string } | null) => void;
+}
+
+export type PlanEditorView = 'plan' | 'building';
+
 export interface PlanEditorProps {
   schemeId: string;
   schemeName: string;
@@ -54,6 +66,10 @@ export interface PlanEditorProps {
   renderUnderlayPanel?: (levelId: string) => ReactNode;
   /** Underlay images (Konva nodes) for the level shown, under the plan. */
   renderUnderlayImages?: (levelId: string, view: PlanViewArgs) => ReactNode;
+  /** The 3D Building view (composed by the page); offers the Plan / Building switch. */
+  renderBuildingView?: (args: BuildingViewSlotArgs) => ReactNode;
+  initialView?: PlanEditorView;
+  onViewChange?: (view: PlanEditorView) => void;
   /** Save function (tests pass their own); defaults to PUT /api/schemes/:id/plan. */
   save?: typeof savePlan;
 }
@@ -92,6 +108,12 @@ export function PlanEditor(props: PlanEditorProps) {
   const [recovered, setRecovered] = useState(() => autosave.readLocalDraft());
   const [showBasis, setShowBasis] = useState(false);
   const [showUnderlay, setShowUnderlay] = useState(false);
+  const [view, setView] = useState<PlanEditorView>(props.renderBuildingView ? (props.initialView ?? 'plan') : 'plan');
+  const building = view === 'building' && !!props.renderBuildingView;
+  const changeView = (next: PlanEditorView) => {
+    setView(next);
+    propsRef.current.onViewChange?.(next);
+  };
 
   // Design after every change of the plan; publish the edit → sizes time for tests and the status line.
   useEffect(() => {
@@ -108,9 +130,11 @@ export function PlanEditor(props: PlanEditorProps) {
       previous = s.plan;
       design.request(s.plan);
     });
+    const unsubMarks = design.subscribe(() => keepIssuedMarks(store, design.getSnapshot(), (from, to) => autosave.absorb(from, to)));
     autosave.start();
     return () => {
       unsub();
+      unsubMarks();
       autosave.stop();
       design.dispose();
     };
@@ -148,6 +172,9 @@ export function PlanEditor(props: PlanEditorProps) {
   const selectedMember = selection.length === 1 ? plan.members.find((m) => m.id === selection[0] && m.level === levelId) : undefined;
   const schemeMember = selectedMember ? designState.byId.get(selectedMember.id) : undefined;
   const levelName = plan.levels.find((l) => l.id === levelId)?.name ?? 'no level';
+  const side: 'basis' | 'member' | 'list' =
+    showBasis && props.renderDesignBasis ? 'basis' : selectedMember && schemeMember && designState.result && props.renderMemberSheet ? 'member' : 'list';
+  const fillHeight = useFillWindowHeight(rootRef);
 
   return (
     <div
@@ -155,11 +182,24 @@ export function PlanEditor(props: PlanEditorProps) {
       data-testid="plan-editor"
       data-read-only={!canEdit || undefined}
       className="flex flex-col border-2 border-ink bg-paper-raised"
+      style={{ height: fillHeight }}
       onKeyDown={onKeyDown}
       onKeyUp={(e) => e.key === ' ' && controller.setSpace(false)}
     >
       <div className="flex flex-wrap items-center justify-between gap-3 border-b border-ink bg-paper px-3 py-2">
-        <LevelBar store={store} canEdit={canEdit} />
+        <div className="flex flex-wrap items-center gap-3">
+          {props.renderBuildingView ? (
+            <div role="group" aria-label="View" className="inline-flex border border-ink/70">
+              <Button variant={building ? 'quiet' : 'primary'} className="h-8 rounded-none px-3 text-xs" aria-pressed={!building} onClick={() => changeView('plan')}>
+                Plan
+              </Button>
+              <Button variant={building ? 'primary' : 'quiet'} className="h-8 rounded-none px-3 text-xs" aria-pressed={building} onClick={() => changeView('building')}>
+                Building (3D)
+              </Button>
+            </div>
+          ) : null}
+          <LevelBar store={store} canEdit={canEdit} />
+        </div>
         <div className="flex flex-wrap items-center gap-1">
           {canEdit ? (
             <>
@@ -197,28 +237,61 @@ export function PlanEditor(props: PlanEditorProps) {
           </Button>
         </div>
       ) : null}
-      {showBasis && props.renderDesignBasis ? (
-        <div className="border-b border-ink bg-paper px-4 py-3">
-          {props.renderDesignBasis({ designBasis: plan.designBasis, canEdit, submit: (designBasis) => dispatch(store, 'plan.setDesignBasis', { designBasis }) })}
-        </div>
-      ) : null}
       {canEdit ? <ToolOptionsBar store={store} /> : null}
       {showUnderlay && props.renderUnderlayPanel ? <div className="border-b border-ink bg-paper px-4 py-3">{props.renderUnderlayPanel(levelId)}</div> : null}
-      <div className="flex min-h-0" style={{ height: 'min(72vh, 760px)' }}>
-        {canEdit ? <PlanToolbar store={store} /> : null}
+      <div className="flex min-h-0 flex-1">
+        {canEdit && !building ? <PlanToolbar store={store} /> : null}
         <div className="relative min-w-0 flex-1">
-          <PlanCanvas
-            store={store}
-            design={design}
-            controller={controller}
-            label={`Plan of ${levelName}, ${props.schemeName}`}
-            renderUnderlay={props.renderUnderlayImages ? (view) => props.renderUnderlayImages!(levelId, view) : undefined}
-          />
+          {building ? (
+            props.renderBuildingView!({
+              plan,
+              result: designState.result,
+              selection,
+              select: (piece) => {
+                if (!piece) return dispatch(store, 'selection.set', { ids: [] });
+                if (piece.level !== store.getState().levelId) dispatch(store, 'level.show', { levelId: piece.level });
+                dispatch(store, 'selection.set', { ids: [piece.elementId] });
+              },
+            })
+          ) : (
+            <PlanCanvas
+              store={store}
+              design={design}
+              controller={controller}
+              label={`Plan of ${levelName}, ${props.schemeName}`}
+              renderUnderlay={props.renderUnderlayImages ? (v) => props.renderUnderlayImages!(levelId, v) : undefined}
+            />
+          )}
         </div>
-        <aside className="flex w-[26rem] shrink-0 flex-col border-l border-ink bg-paper-raised" aria-label="Members and selection">
-          <MemberList store={store} design={design} />
-          <SelectionInspector store={store} canEdit={canEdit} />
-        </aside>
+        {/* The side panel beside the canvas: the Design basis when open, else the selected
+            member's sheet, else the member list; the plan stays in view beside each. */}
+        {side === 'basis' ? (
+          <aside className="flex w-[36rem] shrink-0 flex-col border-l border-ink bg-paper" aria-label="Design basis panel">
+            <div className="min-h-0 flex-1 overflow-auto px-4 py-3">
+              {props.renderDesignBasis!({ designBasis: plan.designBasis, canEdit, submit: (designBasis) => dispatch(store, 'plan.setDesignBasis', { designBasis }) })}
+            </div>
+          </aside>
+        ) : side === 'member' && selectedMember && schemeMember && designState.result ? (
+          <aside className="flex w-[38rem] shrink-0 flex-col border-l border-ink bg-paper" aria-label="Member sheet panel">
+            <div className="min-h-0 flex-1 overflow-auto px-4 py-3" data-testid="member-sheet-slot">
+              {props.renderMemberSheet!({
+                member: schemeMember,
+                planMember: selectedMember,
+                plan,
+                result: designState.result,
+                canEdit,
+                lockShape: (shape) => dispatch(store, 'member.setShape', { id: selectedMember.id, shape }),
+                setConstraints: (c) => dispatch(store, 'member.setConstraints', { id: selectedMember.id, ...c }),
+                close: () => dispatch(store, 'selection.set', { ids: [] }),
+              })}
+            </div>
+          </aside>
+        ) : (
+          <aside className="flex w-[26rem] shrink-0 flex-col border-l border-ink bg-paper-raised" aria-label="Members and selection">
+            <MemberList store={store} design={design} />
+            <SelectionInspector store={store} canEdit={canEdit} />
+          </aside>
+        )}
       </div>
       <div className="flex flex-wrap items-center justify-between gap-3 border-t border-ink bg-paper px-3 py-1.5 text-xs">
         <p role="status" aria-live="polite" className={notice?.tone === 'error' ? 'text-danger' : 'text-ink-soft'} data-testid="plan-notice">
@@ -232,22 +305,6 @@ export function PlanEditor(props: PlanEditorProps) {
           <SaveStatus state={saveState} />
         </div>
       </div>
-      {selectedMember && schemeMember && designState.result && props.renderMemberSheet ? (
-        <div className="border-t-2 border-ink bg-paper px-4 py-4" data-testid="member-sheet-slot">
-          <div className="mx-auto max-w-5xl">
-          {props.renderMemberSheet({
-            member: schemeMember,
-            planMember: selectedMember,
-            plan,
-            result: designState.result,
-            canEdit,
-            lockShape: (shape) => dispatch(store, 'member.setShape', { id: selectedMember.id, shape }),
-            setConstraints: (c) => dispatch(store, 'member.setConstraints', { id: selectedMember.id, ...c }),
-            close: () => dispatch(store, 'selection.set', { ids: [] }),
-          })}
-          </div>
-        </div>
-      ) : null}
       {saveState.status === 'invalid' ? (
         <div role="alert" className="border-t border-danger bg-danger-wash px-3 py-2 text-xs text-danger">
           {saveState.message} {saveState.problems.slice(0, 5).join(' ')}
@@ -256,6 +313,27 @@ export function PlanEditor(props: PlanEditorProps) {
       <EngineerCaution className="border-t border-line px-3 py-2" />
     </div>
   );
+}
+
+/**
+ * The editor fills the window below where it starts (so the canvas, its status line and the
+ * side panel are all in view), never shorter than MIN_EDITOR_PX.
+ */
+const MIN_EDITOR_PX = 520;
+function useFillWindowHeight(ref: React.RefObject<HTMLDivElement | null>): number {
+  const [height, setHeight] = useState(MIN_EDITOR_PX);
+  useLayoutEffect(() => {
+    const measure = () => {
+      const el = ref.current;
+      if (!el || typeof window === 'undefined') return;
+      const top = el.getBoundingClientRect().top + window.scrollY;
+      setHeight(Math.max(MIN_EDITOR_PX, Math.floor(window.innerHeight - top - 4)));
+    };
+    measure();
+    window.addEventListener('resize', measure);
+    return () => window.removeEventListener('resize', measure);
+  }, [ref]);
+  return height;
 }
 
 function ActionButton({ store, id, disabled, text }: { store: EditorStore; id: ActionId; disabled?: boolean; text?: string }) {

@@ -1,4 +1,4 @@
-import { useId, useState, type ReactNode } from 'react';
+import { Fragment, useId, useState, type ReactNode } from 'react';
 import { useStore } from 'zustand';
 import { Button } from '../../../components/ui/button.ui';
 import { dispatch } from '../actions/action-registry';
@@ -125,7 +125,9 @@ type QuantityFieldProps = {
  */
 function QuantityField(props: QuantityFieldProps) {
   const { system } = useUnits();
-  return <QuantityInput key={system} {...props} system={system} />;
+  // Keyed by kind too: a field of another quantity in the same place is a new field, never
+  // the old one's text (a point load's 7 kip is not a line load's 7 kip/ft).
+  return <QuantityInput key={`${system}-${props.kind}`} {...props} system={system} />;
 }
 
 function QuantityInput({ label, name, kind, valueUS, onValue, bound, onValidity, system }: QuantityFieldProps & { system: UnitSystem }) {
@@ -235,7 +237,8 @@ export function ToolOptionsBar({ store }: { store: EditorStore }) {
   }
   return (
     <div className="flex min-h-11 flex-wrap items-center gap-x-4 gap-y-2 border-b border-ink bg-paper px-3 py-1.5" aria-label="Tool options" role="group">
-      {body}
+      {/* Keyed by tool: each tool's fields start from that tool's own stored values. */}
+      <Fragment key={tool}>{body}</Fragment>
     </div>
   );
 }

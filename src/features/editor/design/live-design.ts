@@ -11,6 +11,8 @@ import type { DesignReply } from './live-design.types';
 
 export interface LiveDesignSnapshot {
   result: SchemeResult | null;
+  /** The plan `result` was designed from (the same object the editor held). */
+  plan?: Plan | null;
   byId: Map<string, SchemeMember>;
   /** Designing a newer plan than the one shown. */
   pending: boolean;
@@ -30,7 +32,8 @@ export class LiveDesign {
   private timer: ReturnType<typeof setTimeout> | null = null;
   private busy = false;
   private queued: { seq: number; plan: Plan } | null = null;
-  snapshot: LiveDesignSnapshot = { result: null, byId: new Map(), pending: false, error: null, lastEditToSizesMs: null, lastEngineMs: null };
+  private inFlight: Plan | null = null;
+  snapshot: LiveDesignSnapshot = { result: null, plan: null, byId: new Map(), pending: false, error: null, lastEditToSizesMs: null, lastEngineMs: null };
   /** Called after a new result has been drawn, with the measured time. */
   onMeasured: ((ms: number) => void) | null = null;
 
@@ -77,6 +80,7 @@ export class LiveDesign {
     const { seq, plan } = this.queued;
     this.queued = null;
     this.busy = true;
+    this.inFlight = plan;
     if (this.worker) {
       this.worker.postMessage({ seq, plan });
       return;
@@ -100,7 +104,7 @@ export class LiveDesign {
     } else {
       this.previous = reply.result;
       const byId = new Map(reply.result.members.map((m) => [m.id, m]));
-      this.publish({ ...this.snapshot, result: reply.result, byId, pending: stale, error: null, lastEngineMs: reply.engineMs });
+      this.publish({ ...this.snapshot, result: reply.result, plan: this.inFlight, byId, pending: stale, error: null, lastEngineMs: reply.engineMs });
       // Measured when the frame showing the sizes has been drawn.
       const raf = typeof requestAnimationFrame === 'function' ? requestAnimationFrame : (f: () => void) => setTimeout(f, 0);
       raf(() => {

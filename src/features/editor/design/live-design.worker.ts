@@ -1,5 +1,6 @@
 // Designs the scheme off the main thread so drawing stays smooth. Keeps the last result so
 // designScheme can reuse unchanged member designs (its `previous` option).
+import '../../../lib/zod-jitless';
 import { designScheme, type SchemeResult } from '../../../../shared/engine/index';
 import type { Plan } from '../../../../shared/schemas/plan.schema';
 import type { DesignReply, DesignRequest } from './live-design.types';

@@ -49,6 +49,20 @@ export function memberStatus(id: string, member: SchemeMember | undefined, resul
   return { mark: member.mark, size: member.shape ?? '—', ratio, util, words: `Over — ${reason}`, shortReason: shorten(reason), state: 'fails' };
 }
 
+/**
+ * What the plan writes on a member, most to least informative; the canvas uses the first that
+ * fits. A failing member reads like any other ("W16X26 1.82": the ratio over 1.00 and the
+ * utilisation colour say it is over); why it fails lives in the tooltip and the Member sheet.
+ */
+export function memberChipTexts(s: MemberStatus): string[] {
+  if (s.state === 'designing') return ['…'];
+  if (s.state === 'not-designed') return ['not designed'];
+  const sized = s.ratio === null ? s.size : `${s.size} ${s.util.printed}`;
+  // A size that passes on a member with an error against it must not read as a pass.
+  if (s.state === 'problem') return [`${sized} problem`, `${s.size} problem`];
+  return sized === s.size ? [sized] : [sized, s.size];
+}
+
 /** Drop the "Member m7: " prefix the engine puts on plan problems. */
 function cleanReason(message: string, id: string): string {
   return message.replace(new RegExp(`^Member ${id.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}:?\\s*`), '').replace(/^could not be designed — /, '');

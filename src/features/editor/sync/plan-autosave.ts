@@ -120,6 +120,15 @@ export class PlanAutosave {
     this.timer = setTimeout(() => void this.flush(), ms);
   }
 
+  /**
+   * The plan changes from `from` to `to` by something derived from it (marks issued by the
+   * design), not by an edit: when `from` is what was saved, `to` counts as saved too, so
+   * opening a plan writes no revision; the derived part goes with the next real save.
+   */
+  absorb(from: Plan, to: Plan) {
+    if (this.lastSaved === from) this.lastSaved = to;
+  }
+
   /** Save now (also used by "keep mine"). */
   async flush(): Promise<void> {
     this.timer = null;

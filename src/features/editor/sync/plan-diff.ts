@@ -3,6 +3,7 @@
  * ("3 members added, 1 deck changed"). Elements are matched by id.
  */
 import type { Plan } from '../../../../shared/schemas/plan.schema';
+import { sameElement } from '../../../../shared/schemas/plan-element-compare';
 
 export const DIFF_KINDS = [
   ['levels', 'level', 'levels'],
@@ -45,7 +46,7 @@ export function diffPlans(from: Plan, to: Plan): PlanDiff {
     for (const [id, e] of b) {
       const before = a.get(id);
       if (!before) added++;
-      else if (before !== e && JSON.stringify(before) !== JSON.stringify(e)) changed++;
+      else if (!sameElement(kind, before, e)) changed++;
     }
     for (const id of a.keys()) if (!b.has(id)) removed++;
     if (added + removed + changed > 0) kinds.push({ kind, added, removed, changed });

@@ -2,7 +2,14 @@
 // deck strip and tributary width, framing members, zone, live load reduction), plus the
 // tributary figures used for ASCE 7-16 §4.7 and the unfactored end reactions.
 import type { MemberDesignResult, MemberLoad, SchemeMember } from '../../../../shared/engine/index';
+import { describeLoadSource, type SourceNames } from '../../../../shared/drafting/load-source.drafting';
 import { formatQuantity, type UnitSystem } from '../../../lib/units';
+
+/** A load's source in the reader's units (SI: figures converted; US: as the engine wrote them). */
+export function loadSourceText(source: string, units: UnitSystem, names?: SourceNames): string {
+  const q = units === 'SI' ? (kind: Parameters<typeof formatQuantity>[0], v: number) => formatQuantity(kind, v, 'SI', kind === 'length_ft' ? { digits: 2 } : {}) : null;
+  return describeLoadSource(source, q, names);
+}
 
 const CASE_NAME: Record<MemberLoad['case'], string> = { D: 'Dead', L: 'Live', Lr: 'Roof live', S: 'Snow' };
 
@@ -80,7 +87,7 @@ export function MemberLoadsTable({ member, units }: { member: SchemeMember; unit
               <td className="py-1.5 pr-3">{KIND_NAME[l.kind]}</td>
               <td className="figures whitespace-nowrap py-1.5 pr-3 text-right font-mono">{magnitude(l, units)}</td>
               <td className="figures whitespace-nowrap py-1.5 pr-3 font-mono">{position(l, member.span_ft, units)}</td>
-              <td className="py-1.5 text-ink-soft">{l.source ?? '—'}</td>
+              <td className="py-1.5 text-ink-soft">{l.source ? loadSourceText(l.source, units) : '—'}</td>
             </tr>
           ))}
         </tbody>

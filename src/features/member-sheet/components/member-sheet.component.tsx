@@ -141,7 +141,7 @@ export function MemberSheet({ member, designBasis, planMember, units, canEdit, o
           </p>
           <h2 className="flex flex-wrap items-baseline gap-x-3 text-xl font-semibold tracking-tight">
             <span className="font-mono">{member.mark || member.id}</span>
-            <span className="font-mono">{design?.shape ?? member.shape ?? 'not sized'}</span>
+            <span className="font-mono" data-testid="member-sheet-shape">{design?.shape ?? member.shape ?? 'not sized'}</span>
             {lockedShape ? <span className="label-caps text-accent-strong">locked</span> : null}
           </h2>
           <p className="figures mt-1 text-sm text-ink-soft">
@@ -226,6 +226,7 @@ export function MemberSheet({ member, designBasis, planMember, units, canEdit, o
                 <tbody>
                   <AlternativeRow label="Next lighter" alt={alternatives.value.nextLighter} units={units} empty="No lighter shape within the constraints." />
                   <AlternativeRow label="Next shallower" alt={alternatives.value.nextShallower} units={units} empty="No shallower shape passes within the constraints." />
+                  {alternatives.value.sameWeight ? <AlternativeRow label="Same weight" alt={alternatives.value.sameWeight} units={units} empty="" /> : null}
                 </tbody>
               </table>
             ) : (

@@ -85,6 +85,8 @@ export function sheetDiagrams(input: MemberDesignInput, shape: string): SheetDia
 export interface Alternatives {
   nextLighter: AlternativeShape | null;
   nextShallower: AlternativeShape | null;
+  /** Another shape of the same weight (not lighter), when the catalog has one. */
+  sameWeight: AlternativeShape | null;
 }
 
 export function sheetAlternatives(input: MemberDesignInput, shape: string): Alternatives {

@@ -33,4 +33,6 @@ export const exportLinks = (schemeId: string) => ({
   csv: `/api/schemes/${encodeURIComponent(schemeId)}/schedule.csv`,
   pdf: `/api/schemes/${encodeURIComponent(schemeId)}/plan-sheet.pdf`,
   calcBook: `/api/schemes/${encodeURIComponent(schemeId)}/calc-book.pdf`,
+  /** The framing as an IFC4 model (ISO 16739) for building-model software. */
+  ifc: `/api/schemes/${encodeURIComponent(schemeId)}/model.ifc`,
 });

@@ -9,6 +9,7 @@ import { UnitsSwitch, useUnits } from '../../../lib/units-context';
 import { useEditMarks, useRenumberMarks } from '../api/edit-marks.api';
 import { exportLinks, useSchedule } from '../api/get-schedule.api';
 import { ScheduleTable } from './schedule-table.component';
+import { ScheduleMarkTable } from './schedule-mark-table.component';
 
 export interface SchemeChoice {
   id: string;
@@ -41,19 +42,24 @@ export function ScheduleScreen({ schemes, mayEditMarks, renderSheet }: ScheduleS
   const revision = schedule.data?.scheme.revision;
 
   // The table's columns hold this callback: keep it stable so they are not rebuilt on every render.
-  const latest = useRef({ editMarks, revision });
-  latest.current = { editMarks, revision };
-  const saveMark = useCallback(async (memberId: string, mark: string | null) => {
-    const { editMarks: edit, revision: rev } = latest.current;
-    if (rev === undefined) return;
+  const latest = useRef({ editMarks, revision, rows: schedule.data?.rows });
+  latest.current = { editMarks, revision, rows: schedule.data?.rows };
+  const saveMarks = useCallback(async (memberIds: string[], mark: string | null) => {
+    const { editMarks: edit, revision: rev, rows } = latest.current;
+    if (rev === undefined || memberIds.length === 0) return;
     setNotice(null);
+    // Said in the words of the drawing: the member's kind and grid location, never its id.
+    const one = memberIds.length === 1 ? rows?.find((r) => r.memberId === memberIds[0]) : undefined;
+    const what = one ? `the ${one.kind} at ${one.gridLocation ?? one.levelName}${one.mark ? ` (was ${one.mark})` : ''}` : `${memberIds.length} members`;
     try {
-      await edit.mutateAsync({ revision: rev, marks: [{ memberId, mark }] });
-      setNotice(mark ? `Mark ${mark} saved for member ${memberId}.` : `Member ${memberId} is marked by the rule again.`);
+      await edit.mutateAsync({ revision: rev, marks: memberIds.map((memberId) => ({ memberId, mark })) });
+      setNotice(mark ? `Mark ${mark} saved for ${what}.` : `${what[0].toUpperCase()}${what.slice(1)} marked by the rule again.`);
     } catch (err) {
       setNotice(isApiError(err) ? err.message : 'The mark could not be saved.');
     }
   }, []);
+  const saveMark = useCallback((memberId: string, mark: string | null) => saveMarks([memberId], mark), [saveMarks]);
+  const [rowsBy, setRowsBy] = useState<'mark' | 'member'>('mark');
 
   if (schemes.length === 0) {
     return (
@@ -89,7 +95,14 @@ export function ScheduleScreen({ schemes, mayEditMarks, renderSheet }: ScheduleS
         </label>
         <div className="flex flex-wrap items-center gap-2">
           <UnitsSwitch />
-          <a className={buttonClasses('secondary')} href={links.csv} download>
+          <label className="flex items-center gap-2 text-sm">
+            <span className="label-caps">Rows</span>
+            <select className="h-9 rounded-[3px] border border-ink/60 bg-paper px-2" value={rowsBy} onChange={(e) => setRowsBy(e.target.value as 'mark' | 'member')}>
+              <option value="mark">One per mark</option>
+              <option value="member">One per member</option>
+            </select>
+          </label>
+          <a className={buttonClasses('secondary')} href={rowsBy === 'mark' ? `${links.csv}?by=mark` : links.csv} download>
             Download CSV
           </a>
           <a className={buttonClasses('secondary')} href={links.pdf} download>
@@ -97,6 +110,9 @@ export function ScheduleScreen({ schemes, mayEditMarks, renderSheet }: ScheduleS
           </a>
           <a className={buttonClasses('secondary')} href={links.calcBook} download>
             Calc book (PDF)
+          </a>
+          <a className={buttonClasses('secondary')} href={links.ifc} download title="Members and columns with their I-shape profiles, marks, sizes and end reactions, for building-model software (IFC4, ISO 16739)">
+            Download model (IFC)
           </a>
           {renderSheet ? (
             <Button variant={showSheet ? 'primary' : 'secondary'} aria-pressed={showSheet} onClick={() => setShowSheet((v) => !v)}>
@@ -157,15 +173,27 @@ export function ScheduleScreen({ schemes, mayEditMarks, renderSheet }: ScheduleS
             </p>
           ) : null}
           {showSheet && renderSheet ? renderSheet(schemeId, view.levels) : null}
-          <ScheduleTable
-            rows={view.rows}
-            levels={view.levels}
-            basis={view.basis}
-            units={system}
-            mayEditMarks={mayEditMarks}
-            onSaveMark={saveMark}
-            savingMark={editMarks.isPending}
-          />
+          {rowsBy === 'mark' ? (
+            <ScheduleMarkTable
+              rows={view.rows}
+              levels={view.levels}
+              basis={view.basis}
+              units={system}
+              mayEditMarks={mayEditMarks}
+              onSaveMarks={saveMarks}
+              savingMark={editMarks.isPending}
+            />
+          ) : (
+            <ScheduleTable
+              rows={view.rows}
+              levels={view.levels}
+              basis={view.basis}
+              units={system}
+              mayEditMarks={mayEditMarks}
+              onSaveMark={saveMark}
+              savingMark={editMarks.isPending}
+            />
+          )}
           <EngineerCaution />
         </>
       ) : null}

@@ -10,11 +10,27 @@ import {
   type ColumnFiltersState,
   type GroupingState,
   type SortingState,
+  type VisibilityState,
 } from '@tanstack/react-table';
 import { useMemo, useState } from 'react';
 import { UtilisationChip } from '../../../components/ui/utilisation-chip.ui';
 import { formatValue, unitLabel, type UnitSystem } from '../../../lib/units';
 import { compareMarks, type ScheduleBasis, type ScheduleRow } from '../../../../shared/drafting/schedule.drafting';
+import { ColumnChooser, type ChoosableColumn } from './column-chooser.component';
+
+/** Optional columns of the member view and the table columns each one covers. */
+const OPTIONAL_COLUMNS: (ChoosableColumn & { leaves: string[] })[] = [
+  { id: 'span', label: 'Span', leaves: ['span_ft'] },
+  { id: 'grid', label: 'Grid location', leaves: ['gridLocation'] },
+  { id: 'startCases', label: 'Start reaction D, L', leaves: ['start-D', 'start-L', 'start-roof'] },
+  { id: 'endCases', label: 'End reaction D, L', leaves: ['end-D', 'end-L', 'end-roof'] },
+  { id: 'governs', label: 'Governs', leaves: ['governing'] },
+  { id: 'ratio', label: 'Ratio', leaves: ['ratio'] },
+  { id: 'camber', label: 'Camber', leaves: ['camber_in'] },
+  { id: 'studs', label: 'Studs', leaves: ['studs'] },
+  { id: 'level', label: 'Level', leaves: ['level'] },
+  { id: 'kind', label: 'Kind', leaves: ['kind'] },
+];
 
 export type GroupBy = 'none' | 'level' | 'kind';
 
@@ -33,7 +49,7 @@ const col = createColumnHelper<ScheduleRow>();
 const dash = '—';
 
 /** The governing check in words, as on the Member sheet (the engine reports a check id). */
-const GOVERNING_WORDS: Record<string, string> = {
+export const GOVERNING_WORDS: Record<string, string> = {
   flexure: 'flexure',
   shear: 'shear',
   deflectionLive: 'live-load deflection',
@@ -97,6 +113,13 @@ export function ScheduleTable({ rows, levels, basis, units, mayEditMarks, onSave
   const [levelFilter, setLevelFilter] = useState('');
   const [kindFilter, setKindFilter] = useState('');
   const [groupBy, setGroupBy] = useState<GroupBy>('none');
+  // The cases at each end start hidden so the table fits the window (Factored stays; the
+  // chooser brings D and L back).
+  const [hidden, setHidden] = useState<Set<string>>(() => new Set(['startCases', 'endCases']));
+  const columnVisibility = useMemo<VisibilityState>(
+    () => Object.fromEntries(OPTIONAL_COLUMNS.filter((c) => hidden.has(c.id)).flatMap((c) => c.leaves.map((leaf) => [leaf, false]))),
+    [hidden],
+  );
 
   const ft = (v: number) => formatValue('length_ft', v, units);
   const kip = (v: number) => formatValue('force_kip', v, units);
@@ -136,7 +159,6 @@ export function ScheduleTable({ rows, levels, basis, units, mayEditMarks, onSave
         cell: (c) => <MarkCell row={c.row.original} editable={mayEditMarks} onSave={onSaveMark} saving={savingMark} />,
       }),
       col.accessor((r) => r.size ?? '', { id: 'size', header: 'Size', cell: (c) => <span className="font-mono">{c.getValue() || 'not sized'}</span> }),
-      col.accessor('count', { header: 'Count', cell: (c) => `×${c.getValue()}`, enableGrouping: false }),
       col.accessor('span_ft', { header: `Span (${unitLabel('length_ft', units)})`, cell: (c) => ft(c.getValue()), aggregationFn: 'max' }),
       col.accessor((r) => r.gridLocation ?? '', { id: 'gridLocation', header: 'Grid location', cell: (c) => c.getValue() || dash }),
       reaction('start', 'Start reaction'),
@@ -166,7 +188,7 @@ export function ScheduleTable({ rows, levels, basis, units, mayEditMarks, onSave
   const table = useReactTable({
     data: rows,
     columns,
-    state: { sorting, globalFilter, columnFilters, grouping, expanded: true },
+    state: { sorting, globalFilter, columnFilters, grouping, expanded: true, columnVisibility },
     onSortingChange: setSorting,
     onGlobalFilterChange: setGlobalFilter,
     globalFilterFn: (row, _id, value: string) => {
@@ -231,6 +253,7 @@ export function ScheduleTable({ rows, levels, basis, units, mayEditMarks, onSave
             <option value="kind">Kind</option>
           </select>
         </label>
+        <ColumnChooser columns={OPTIONAL_COLUMNS} hidden={hidden} onChange={setHidden} />
         <p className="ml-auto text-sm text-ink-soft" aria-live="polite">
           <span className="figures font-mono">{leafCount}</span> of <span className="figures font-mono">{rows.length}</span> members
         </p>
@@ -250,7 +273,7 @@ export function ScheduleTable({ rows, levels, basis, units, mayEditMarks, onSave
                       colSpan={h.colSpan}
                       scope="col"
                       aria-sort={dir === 'asc' ? 'ascending' : dir === 'desc' ? 'descending' : undefined}
-                      className="border-b border-ink px-2 py-1.5 text-left align-bottom text-xs font-semibold whitespace-nowrap text-ink"
+                      className="border-b border-ink px-2 py-1.5 text-left align-bottom text-xs font-semibold text-ink"
                     >
                       {h.isPlaceholder ? null : sortable ? (
                         <button type="button" className="inline-flex items-center gap-1 hover:underline" onClick={h.column.getToggleSortingHandler()}>
@@ -282,7 +305,7 @@ export function ScheduleTable({ rows, levels, basis, units, mayEditMarks, onSave
               ) : (
                 <tr key={row.id} className="border-b border-line/70 hover:bg-accent-wash/40" data-member={row.original.memberId}>
                   {row.getVisibleCells().map((cell) => (
-                    <td key={cell.id} className="px-2 py-1 whitespace-nowrap">
+                    <td key={cell.id} className={`px-2 py-1 ${cell.column.id === 'gridLocation' ? 'max-w-40 text-xs' : 'whitespace-nowrap'}`}>
                       {cell.getIsPlaceholder() || cell.getIsAggregated() ? null : flexRender(cell.column.columnDef.cell, cell.getContext())}
                     </td>
                   ))}

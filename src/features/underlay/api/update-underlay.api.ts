@@ -16,6 +16,8 @@ function applyPatch(u: Underlay, patch: UnderlayPatch): Underlay {
     ...u,
     ...(patch.opacity !== undefined ? { opacity: patch.opacity } : {}),
     ...(patch.visible !== undefined ? { visible: patch.visible } : {}),
+    ...(patch.locked !== undefined ? { locked: patch.locked } : {}),
+    // A new page keeps showing the old one until the server answers with its size.
     placement: { ...u.placement, ...(patch.placement ?? {}) },
   };
 }

@@ -8,6 +8,7 @@ import { FormAlert } from '../../../components/ui/form-alert.ui';
 import { formatQuantity, parseQuantity, unitLabel, type UnitSystem } from '../../../lib/units';
 import type { Underlay, UnderlayPlacement } from '../api/underlay.schema';
 import { calibrateUnderlay } from '../lib/underlay-placement';
+import { useUnderlayPicture } from './underlay-image.component';
 
 type Props = {
   underlay: Underlay;
@@ -29,6 +30,7 @@ function toPx(p: Pick): [number, number] | null {
 export function UnderlayCalibration({ underlay, units, onSave, onCancel }: Props) {
   const id = useId();
   const imgRef = useRef<HTMLImageElement>(null);
+  const picture = useUnderlayPicture(underlay);
   const [a, setA] = useState<Pick>(EMPTY);
   const [b, setB] = useState<Pick>(EMPTY);
   const [next, setNext] = useState<'A' | 'B'>('A');
@@ -110,9 +112,11 @@ export function UnderlayCalibration({ underlay, units, onSave, onCancel }: Props
       </p>
       <div className="relative max-h-[360px] overflow-auto border border-line">
         <div className="relative inline-block">
+          {picture.error ? <FormAlert>{picture.error}</FormAlert> : null}
+          {!picture.url && !picture.error ? <p className="p-3 text-sm text-ink-soft">Drawing page {underlay.page} of the PDF…</p> : null}
           <img
             ref={imgRef}
-            src={underlay.imageUrl}
+            src={picture.url ?? undefined}
             alt={`Underlay ${underlay.filename}`}
             onClick={pickOnImage}
             className="block max-w-full cursor-crosshair select-none"

@@ -11,8 +11,9 @@
  *     units="US" | "SI"                       // optional; default the reader's stored choice
  *   />
  *
- * Upload (PNG or JPEG up to 10 MB; PDF is refused by the server with a message), show/hide,
- * opacity, calibrate in a dialog (two points on the image and the real distance), delete.
+ * Upload (PNG, JPEG or PDF up to 10 MB; a PDF shows one page, chosen with the page picker and
+ * rendered in the browser), show/hide, opacity, lock, calibrate in a dialog (two points on the
+ * image and the real distance), delete. A locked underlay cannot be calibrated or change page.
  * Needs a QueryClientProvider above it. Draw the images with <UnderlayImage> (react-konva)
  * or drawUnderlay() (2D canvas) from the same useUnderlays(schemeId, levelId) data.
  */
@@ -29,6 +30,7 @@ import { useUpdateUnderlay } from '../api/update-underlay.api';
 import { useUploadUnderlay } from '../api/upload-underlay.api';
 import { UNDERLAY_MAX_BYTES, type Underlay } from '../api/underlay.schema';
 import { UnderlayCalibration } from './underlay-calibration.component';
+import { useUnderlayPicture } from './underlay-image.component';
 
 export interface UnderlayPanelProps {
   schemeId: string;
@@ -38,7 +40,7 @@ export interface UnderlayPanelProps {
   units?: UnitSystem;
 }
 
-const ACCEPT = 'image/png,image/jpeg,.png,.jpg,.jpeg';
+const ACCEPT = 'image/png,image/jpeg,application/pdf,.png,.jpg,.jpeg,.pdf';
 
 function sizeText(bytes: number): string {
   return bytes >= 1024 * 1024 ? `${(bytes / (1024 * 1024)).toFixed(1)} MB` : `${Math.max(1, Math.round(bytes / 1024))} kB`;
@@ -79,6 +81,8 @@ function UnderlayRow({
   };
 
   const p = underlay.placement;
+  const isPdf = underlay.mime === 'application/pdf';
+  const pageCount = underlay.pageCount ?? 1;
   return (
     <li className="flex flex-col gap-2 border-b border-line py-2" data-underlay={underlay.id}>
       <div className="flex items-baseline justify-between gap-2">
@@ -86,11 +90,12 @@ function UnderlayRow({
           {underlay.filename}
         </span>
         <span className="figures shrink-0 font-mono text-xs text-ink-faint">
-          {underlay.width_px} × {underlay.height_px} px · {sizeText(underlay.bytes)}
+          {isPdf ? `PDF page ${underlay.page ?? 1} of ${pageCount} · ${underlay.width_px} × ${underlay.height_px} pt` : `${underlay.width_px} × ${underlay.height_px} px`} ·{' '}
+          {sizeText(underlay.bytes)}
         </span>
       </div>
       <p className="figures m-0 font-mono text-xs text-ink-soft">
-        1 px = {formatQuantity('length_ft', p.scale_ft_per_px, units, { digits: 4 })} · top-left ({formatQuantity('length_ft', p.origin_ft[0], units)},{' '}
+        1 {isPdf ? 'pt' : 'px'} = {formatQuantity('length_ft', p.scale_ft_per_px, units, { digits: 4 })} · top-left ({formatQuantity('length_ft', p.origin_ft[0], units)},{' '}
         {formatQuantity('length_ft', p.origin_ft[1], units)})
       </p>
       {canEdit ? (
@@ -109,11 +114,38 @@ function UnderlayRow({
             <input id={`${id}-opacity`} type="range" min={0.05} max={1} step={0.05} value={opacity} onChange={onOpacity} className="w-24" />
             <span className="figures w-10 font-mono text-xs">{Math.round(opacity * 100)} %</span>
           </label>
-          <Button variant="secondary" onClick={onCalibrate}>
+          {isPdf ? (
+            <label htmlFor={`${id}-page`} className="inline-flex items-center gap-1.5">
+              Page
+              <select
+                id={`${id}-page`}
+                value={underlay.page ?? 1}
+                disabled={underlay.locked || update.isPending}
+                onChange={(e) => update.mutate({ underlayId: underlay.id, patch: { page: Number(e.target.value) } })}
+                className="h-8 rounded-[3px] border border-ink/60 bg-paper px-1 text-sm"
+              >
+                {Array.from({ length: pageCount }, (_, i) => (
+                  <option key={i + 1} value={i + 1}>
+                    {i + 1} of {pageCount}
+                  </option>
+                ))}
+              </select>
+            </label>
+          ) : null}
+          <label className="inline-flex items-center gap-1.5" title="A locked underlay keeps its place, scale and page">
+            <input
+              type="checkbox"
+              checked={underlay.locked}
+              onChange={(e) => update.mutate({ underlayId: underlay.id, patch: { locked: e.target.checked } })}
+              className="size-4 accent-[var(--color-accent)]"
+            />
+            Lock
+          </label>
+          <Button variant="secondary" onClick={onCalibrate} disabled={underlay.locked}>
             Calibrate
           </Button>
           {onPickCalibration ? (
-            <Button variant="quiet" onClick={() => onPickCalibration(underlay)}>
+            <Button variant="quiet" onClick={() => onPickCalibration(underlay)} disabled={underlay.locked}>
               Pick on the plan
             </Button>
           ) : null}
@@ -133,8 +165,12 @@ function UnderlayRow({
           )}
         </div>
       ) : (
-        <p className="m-0 text-xs text-ink-faint">{underlay.visible ? `Shown at ${Math.round(underlay.opacity * 100)} % opacity.` : 'Hidden.'}</p>
+        <p className="m-0 text-xs text-ink-faint">
+          {underlay.visible ? `Shown at ${Math.round(underlay.opacity * 100)} % opacity.` : 'Hidden.'}
+          {underlay.locked ? ' Locked.' : ''}
+        </p>
       )}
+      {underlay.visible ? <PictureStatus underlay={underlay} /> : null}
       {update.isError ? <FormAlert>{errorText(update.error)}</FormAlert> : null}
       {remove.isError ? <FormAlert>{errorText(remove.error)}</FormAlert> : null}
     </li>
@@ -156,7 +192,7 @@ export function UnderlayPanel({ schemeId, levelId, canEdit, onPickCalibration, u
     e.target.value = '';
     if (!file) return;
     if (file.size > UNDERLAY_MAX_BYTES) {
-      setLocalError(`${file.name} is ${sizeText(file.size)}; the largest image accepted is 10 MB.`);
+      setLocalError(`${file.name} is ${sizeText(file.size)}; the largest file accepted is 10 MB.`);
       return;
     }
     setLocalError(null);
@@ -174,7 +210,7 @@ export function UnderlayPanel({ schemeId, levelId, canEdit, onPickCalibration, u
       {list.isError ? <FormAlert>{errorText(list.error)}</FormAlert> : null}
       {list.data && list.data.length === 0 ? (
         <p className="text-sm text-ink-soft">
-          No drawing under this level yet.{canEdit ? ' Upload the architect’s plan (PNG or JPEG) to trace the framing over it.' : ''}
+          No drawing under this level yet.{canEdit ? ' Upload the architect’s plan (PNG, JPEG or PDF) to trace the framing over it.' : ''}
         </p>
       ) : null}
       {list.data && list.data.length > 0 ? (
@@ -195,7 +231,7 @@ export function UnderlayPanel({ schemeId, levelId, canEdit, onPickCalibration, u
       {canEdit ? (
         <div className="flex flex-col gap-1.5">
           <label htmlFor={`${id}-file`} className="text-sm font-medium text-ink">
-            Upload a plan image
+            Upload a plan (image or PDF)
           </label>
           <input
             id={`${id}-file`}
@@ -207,13 +243,13 @@ export function UnderlayPanel({ schemeId, levelId, canEdit, onPickCalibration, u
             className="text-sm file:mr-3 file:rounded-[3px] file:border file:border-ink/70 file:bg-paper-raised file:px-3 file:py-1.5 file:text-sm"
           />
           <p id={`${id}-file-hint`} className="text-xs text-ink-faint">
-            PNG or JPEG, up to 10 MB. For a PDF, export the page as an image first.
+            PNG, JPEG or PDF, up to 10 MB. A PDF shows one page: pick it after uploading. Password-protected PDFs are refused.
           </p>
           {upload.isPending ? <Loading label="Uploading…" /> : null}
           <FormAlert>{localError ?? (upload.isError ? errorText(upload.error) : null)}</FormAlert>
         </div>
       ) : null}
-      {active && canEdit ? (
+      {active && canEdit && !active.locked ? (
         <UnderlayCalibration
           underlay={active}
           units={system}
@@ -225,5 +261,19 @@ export function UnderlayPanel({ schemeId, levelId, canEdit, onPickCalibration, u
         />
       ) : null}
     </section>
+  );
+}
+
+/** A PDF page that could not be drawn says so (an image that fails simply does not show). */
+function PictureStatus({ underlay }: { underlay: Underlay }) {
+  const picture = useUnderlayPicture(underlay.mime === 'application/pdf' ? underlay : null);
+  if (underlay.mime !== 'application/pdf') return null;
+  if (picture.error) return <FormAlert>{picture.error}</FormAlert>;
+  return picture.url ? (
+    <p className="m-0 text-xs text-ink-faint" data-testid="pdf-page-ready">
+      Page {underlay.page ?? 1} drawn.
+    </p>
+  ) : (
+    <p className="m-0 text-xs text-ink-faint">Drawing page {underlay.page ?? 1}…</p>
   );
 }

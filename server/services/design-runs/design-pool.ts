@@ -1,0 +1,171 @@
+/**
+ * Design runs off the request thread: a small pool of worker threads, each with a time and a
+ * memory budget, and a bounded queue. One heavy plan occupies one worker; every other request
+ * is still served, and a run over budget is stopped (the worker is replaced) and answered 422.
+ */
+import { availableParallelism } from 'node:os';
+import { Worker } from 'node:worker_threads';
+import type { SchemeResult } from '../../../shared/engine/index';
+import type { Plan } from '../../../shared/schemas/plan.schema';
+import { AppError } from '../../errors/app-error';
+import type { DesignReply } from './design.worker';
+
+export interface DesignBudget {
+  /** Longest a design run may take, ms. */
+  timeoutMs: number;
+  /** Heap of a worker, MB; a run that needs more is stopped. */
+  memoryMb: number;
+  /** Worker threads (designs in parallel). */
+  workers: number;
+  /** Runs waiting for a worker beyond which new ones are refused (503, try again). */
+  maxQueue: number;
+}
+
+export const DEFAULT_DESIGN_BUDGET: DesignBudget = {
+  timeoutMs: 60_000,
+  memoryMb: 1024,
+  workers: Math.max(1, Math.min(2, availableParallelism() - 1)),
+  maxQueue: 32,
+};
+
+interface Task {
+  id: number;
+  plan: Plan;
+  resolve: (r: SchemeResult) => void;
+  reject: (e: unknown) => void;
+}
+
+interface Slot {
+  worker: Worker;
+  task: Task | null;
+  timer: NodeJS.Timeout | null;
+}
+
+const BOOTSTRAP = new URL('./design-worker.bootstrap.mjs', import.meta.url);
+/** Longest a worker may take to start and pick up a run, ms. */
+const WORKER_START_MS = 60_000;
+
+const overBudget = (message: string) => new AppError(422, 'design_budget_exceeded', message);
+
+export class DesignPool {
+  private readonly slots: Slot[] = [];
+  private readonly queue: Task[] = [];
+  private nextId = 1;
+
+  constructor(readonly budget: DesignBudget) {}
+
+  /** Designs a plan in a worker; rejects with an AppError (422 over budget or engine failure, 503 queue full). */
+  run(plan: Plan): Promise<SchemeResult> {
+    if (this.queue.length >= this.budget.maxQueue) {
+      return Promise.reject(new AppError(503, 'design_busy', 'The server is designing many plans right now; try again in a moment.', { headers: { 'Retry-After': '5' } }));
+    }
+    return new Promise<SchemeResult>((resolve, reject) => {
+      this.queue.push({ id: this.nextId++, plan, resolve, reject });
+      this.dispatch();
+    });
+  }
+
+  /** Runs being designed now and waiting. */
+  get load(): { running: number; waiting: number } {
+    return { running: this.slots.filter((s) => s.task).length, waiting: this.queue.length };
+  }
+
+  /** Stops every worker (tests, shutdown); queued runs are refused. */
+  async close(): Promise<void> {
+    for (const t of this.queue.splice(0)) t.reject(new AppError(503, 'design_busy', 'The server is shutting down.'));
+    await Promise.all(this.slots.splice(0).map((s) => { this.finish(s); return s.worker.terminate(); }));
+  }
+
+  private dispatch(): void {
+    while (this.queue.length > 0) {
+      let slot = this.slots.find((s) => s.task === null);
+      if (!slot && this.slots.length < this.budget.workers) slot = this.spawn();
+      if (!slot) return;
+      const task = this.queue.shift()!;
+      slot.task = task;
+      slot.worker.ref();
+      // Until the worker says it has started (a new worker loads the engine first): a start-up budget.
+      this.arm(slot, WORKER_START_MS, () => new AppError(503, 'design_busy', 'The design worker did not start; try again in a moment.'));
+      slot.worker.postMessage({ id: task.id, plan: task.plan });
+    }
+  }
+
+  private arm(slot: Slot, ms: number, error: () => AppError): void {
+    if (slot.timer) clearTimeout(slot.timer);
+    slot.timer = setTimeout(() => this.fail(slot, error()), ms);
+  }
+
+  private spawn(): Slot {
+    const worker = new Worker(BOOTSTRAP, {
+      resourceLimits: { maxOldGenerationSizeMb: this.budget.memoryMb },
+      stdout: false,
+      stderr: false,
+    });
+    const slot: Slot = { worker, task: null, timer: null };
+    worker.unref();
+    worker.on('message', (reply: DesignReply) => {
+      const task = slot.task;
+      if (!task || reply.id !== task.id) return;
+      if ('started' in reply) {
+        this.arm(slot, this.budget.timeoutMs, () =>
+          overBudget(`The design took longer than ${this.budget.timeoutMs / 1000} s and was stopped. Design a smaller part of the scheme, or split it into schemes.`),
+        );
+        return;
+      }
+      this.finish(slot);
+      if (reply.ok) task.resolve(reply.result as SchemeResult);
+      else task.reject(new AppError(422, 'design_failed', `The plan could not be designed: ${reply.message}`));
+      this.dispatch();
+    });
+    worker.on('error', (err: Error & { code?: string }) => {
+      this.fail(
+        slot,
+        err.code === 'ERR_WORKER_OUT_OF_MEMORY'
+          ? overBudget(`The design needed more than its ${this.budget.memoryMb} MB memory budget and was stopped. Design a smaller part of the scheme, or split it into schemes.`)
+          : new AppError(422, 'design_failed', `The plan could not be designed: ${err.message}`),
+      );
+    });
+    worker.on('exit', () => {
+      if (this.slots.includes(slot)) this.fail(slot, new AppError(422, 'design_failed', 'The plan could not be designed: the design stopped unexpectedly.'));
+    });
+    this.slots.push(slot);
+    return slot;
+  }
+
+  private finish(slot: Slot): void {
+    if (slot.timer) clearTimeout(slot.timer);
+    slot.timer = null;
+    slot.task = null;
+    slot.worker.unref();
+  }
+
+  /** The slot's run fails with err; its worker is stopped and dropped (a new one is made on demand). */
+  private fail(slot: Slot, err: unknown): void {
+    const task = slot.task;
+    const i = this.slots.indexOf(slot);
+    if (i >= 0) this.slots.splice(i, 1);
+    this.finish(slot);
+    void slot.worker.terminate();
+    task?.reject(err);
+    this.dispatch();
+  }
+}
+
+let pool: DesignPool | null = null;
+let budget: DesignBudget = DEFAULT_DESIGN_BUDGET;
+
+/** Sets the budget of design runs (createApp calls it from the config); replaces an idle pool. */
+export function configureDesignRuns(next: Partial<DesignBudget> = {}): void {
+  const wanted = { ...DEFAULT_DESIGN_BUDGET, ...next };
+  if (JSON.stringify(wanted) === JSON.stringify(budget)) return;
+  budget = wanted;
+  const old = pool;
+  pool = null;
+  // Runs in flight on the old pool finish there (its idle workers never keep the process alive).
+  if (old && old.load.running === 0 && old.load.waiting === 0) void old.close();
+}
+
+/** The process's design pool, made on first use. */
+export function designPool(): DesignPool {
+  return (pool ??= new DesignPool(budget));
+}
