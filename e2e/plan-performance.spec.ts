@@ -16,13 +16,14 @@ test.use({ trace: 'off' });
 
 test.describe('plan performance', () => {
   test('when a 5,000-member level is panned and zoomed, then frame times stay smooth', async ({ page }) => {
-    test.setTimeout(240_000);
+    test.setTimeout(480_000);
     await page.setViewportSize({ width: 1600, height: 1000 });
     await signInAs(page, 'engineer@example.com');
     const plan = generatedPlan(25, 25, 6);
     const url = await schemeWithPlan(page, plan, `Pan test ${plan.members.length} members`);
     await page.goto(url);
-    const canvas = await planCanvas(page, 120_000);
+    // Opening a 5,000-member scheme takes long on the shared machine; the figure is the gesture.
+    const canvas = await planCanvas(page, 240_000);
     await expect(canvas).toHaveAttribute('data-members', String(plan.members.length));
     // Let the first design of the whole level finish so the pan is measured on its own.
     await expect(page.getByTestId('design-status')).toContainText(`${plan.members.length} members sized`, { timeout: 180_000 });
@@ -35,6 +36,7 @@ test.describe('plan performance', () => {
       w.__frames = [];
       w.__run = true;
       (window as unknown as { __planDrawProbe: number[] }).__planDrawProbe = [];
+      (window as unknown as { __planBitmapProbe: number[] }).__planBitmapProbe = [];
       let last = performance.now();
       const tick = (t: number) => {
         w.__frames.push(t - last);
@@ -69,10 +71,10 @@ test.describe('plan performance', () => {
     await page.mouse.down({ button: 'middle' });
     await page.mouse.move(cx - 300, cy - 200, { steps: 40 });
     await page.mouse.up({ button: 'middle' });
-    const { frames, draws } = await page.evaluate(() => {
-      const w = window as unknown as { __frames: number[]; __run: boolean; __planDrawProbe: number[] };
+    const { frames, draws, bitmapDraws } = await page.evaluate(() => {
+      const w = window as unknown as { __frames: number[]; __run: boolean; __planDrawProbe: number[]; __planBitmapProbe: number[] };
       w.__run = false;
-      return { frames: w.__frames.slice(1), draws: w.__planDrawProbe };
+      return { frames: w.__frames.slice(1), draws: w.__planDrawProbe, bitmapDraws: w.__planBitmapProbe };
     });
     const drawSorted = [...draws].sort((a, b) => a - b);
     const sorted = [...frames].sort((a, b) => a - b);
@@ -85,19 +87,27 @@ test.describe('plan performance', () => {
       staticDraws: draws.length,
       staticDrawMedian_ms: Number(percentile(drawSorted, 50).toFixed(2)),
       staticDrawP95_ms: Number(percentile(drawSorted, 95).toFixed(2)),
+      bitmapDraws: bitmapDraws.length,
+      bitmapDrawP95_ms: Number(percentile([...bitmapDraws].sort((a, b) => a - b), 95).toFixed(2)),
+      target_p95_ms: 16.7,
       measuredAt: new Date().toISOString(),
       note: 'requestAnimationFrame deltas in headless Chromium (--disable-gpu) during scripted wheel zoom, space-drag and middle-button pan',
     };
     mkdirSync(PERF_DIR, { recursive: true });
     writeFileSync(`${PERF_DIR}/plan-pan.json`, `${JSON.stringify(result, null, 2)}\n`);
-    console.log(`[perf] plan pan/zoom, ${result.members} members: median ${result.median_ms} ms, p95 ${result.p95_ms} ms over ${result.frames} frames; static layer draw median ${result.staticDrawMedian_ms} ms, p95 ${result.staticDrawP95_ms} ms`);
+    console.log(
+      `[perf] plan pan/zoom, ${result.members} members: median ${result.median_ms} ms, p95 ${result.p95_ms} ms (target ≤ 16.7 ms: ${result.p95_ms <= 16.7 ? 'PASS' : 'FAIL'}), max ${result.max_ms} ms over ${result.frames} frames; ` +
+        `full static draws ${result.staticDraws} (median ${result.staticDrawMedian_ms} ms, p95 ${result.staticDrawP95_ms} ms), gesture bitmap draws ${result.bitmapDraws} (p95 ${result.bitmapDrawP95_ms} ms)`,
+    );
+    // During the gesture the static layer is drawn from its bitmap, not member by member.
+    expect(result.bitmapDraws).toBeGreaterThan(result.staticDraws);
     // Generous bounds: shared 2-core machine. The true figures are in the JSON.
     expect(result.frames).toBeGreaterThan(30);
     expect(result.median_ms).toBeLessThan(50);
   });
 
-  test('when a point load is added on a 500-member level, then the new sizes are on screen quickly', async ({ page }) => {
-    test.setTimeout(180_000);
+  test('when 24 point loads are added one by one on a 520-member level, then each edit has its new sizes on screen quickly', async ({ page }) => {
+    test.setTimeout(300_000);
     await page.setViewportSize({ width: 1600, height: 1000 });
     await signInAs(page, 'engineer@example.com');
     const plan = generatedPlan(10, 10, 3);
@@ -111,18 +121,39 @@ test.describe('plan performance', () => {
     await page.keyboard.press('p');
     const times: number[] = [];
     const engine: number[] = [];
-    for (let i = 0; i < 6; i++) {
+    const EDITS = 24;
+    for (let i = 0; i < EDITS; i++) {
       const before = Number(await editor.getAttribute('data-design-count'));
-      await clickPlan(page, canvas, 7.5 + 30 * i, 15 + 30 * (i % 3));
+      // On a beam line at 7.5 ft into a bay, a different bay and height each time.
+      await clickPlan(page, canvas, 7.5 + 30 * (i % 10), 15 + 30 * (Math.floor(i / 10) * 3 + (i % 3)));
       await expect(editor).toHaveAttribute('data-design-count', String(before + 1), { timeout: 30_000 });
       times.push(Number(await editor.getAttribute('data-edit-to-sizes-ms')));
       engine.push(Number(await editor.getAttribute('data-engine-ms')));
     }
     const sorted = [...times].sort((a, b) => a - b);
-    const result = { members: plan.members.length, edits: times.length, editToSizes_ms: times, median_ms: percentile(sorted, 50), engine_ms: engine, engineMedian_ms: percentile([...engine].sort((a, b) => a - b), 50), max_ms: sorted[sorted.length - 1], target_ms: 300, measuredAt: new Date().toISOString() };
+    const engineSorted = [...engine].sort((a, b) => a - b);
+    const result = {
+      members: plan.members.length,
+      edits: times.length,
+      editToSizes_ms: times,
+      median_ms: percentile(sorted, 50),
+      p95_ms: percentile(sorted, 95),
+      max_ms: sorted[sorted.length - 1],
+      engine_ms: engine,
+      engineMedian_ms: percentile(engineSorted, 50),
+      engineP95_ms: percentile(engineSorted, 95),
+      target_p95_ms: 200,
+      target_max_ms: 300,
+      measuredAt: new Date().toISOString(),
+    };
     mkdirSync(PERF_DIR, { recursive: true });
     writeFileSync(`${PERF_DIR}/plan-edit-to-sizes.json`, `${JSON.stringify(result, null, 2)}\n`);
-    console.log(`[perf] edit → sizes on screen, ${result.members} members: median ${result.median_ms.toFixed(0)} ms (each: ${times.map((t) => t.toFixed(0)).join(', ')}; engine alone median ${result.engineMedian_ms.toFixed(0)} ms)`);
+    console.log(
+      `[perf] edit → sizes on screen, ${result.members} members, ${result.edits} edits: p50 ${result.median_ms.toFixed(0)} ms, p95 ${result.p95_ms.toFixed(0)} ms (target ≤ 200: ${result.p95_ms <= 200 ? 'PASS' : 'FAIL'}), ` +
+        `max ${result.max_ms.toFixed(0)} ms (target ≤ 300: ${result.max_ms <= 300 ? 'PASS' : 'FAIL'}); engine alone p50 ${result.engineMedian_ms.toFixed(0)} ms, p95 ${result.engineP95_ms.toFixed(0)} ms (each: ${times.map((t) => t.toFixed(0)).join(', ')})`,
+    );
+    expect(result.edits).toBeGreaterThanOrEqual(20);
+    // Generous bound on the shared 2-core machine; the verdicts against the targets are printed above.
     expect(result.median_ms).toBeLessThan(3000);
   });
 });

@@ -8,6 +8,7 @@ import type { LiveDesign } from '../design/live-design';
 import type { ToolController } from '../tools/tool-controller';
 import { buildStaticGeometry, type StaticGeometry } from './static-geometry';
 import { drawStatic } from './draw-static';
+import { drawGestureBitmap, snapshotLayer, WHEEL_GESTURE_IDLE_MS, type GestureBitmap } from './gesture-bitmap';
 import { drawOverlay } from './draw-overlay';
 import { readPlanTheme, type PlanTheme } from './plan-theme';
 import { scaleBar } from './view-transform';
@@ -44,6 +45,20 @@ export function PlanCanvas({ store, design, controller, label, renderUnderlay }:
   const tool = useStore(store, (s) => s.tool);
   const readOnly = useStore(store, (s) => s.readOnly);
   const [panning, setPanning] = useState(false);
+  // The static layer's bitmap while a pan or zoom gesture runs (gesture-bitmap.ts).
+  const gesture = useRef<GestureBitmap | null>(null);
+  const wheelIdle = useRef<ReturnType<typeof setTimeout> | null>(null);
+  const startGesture = () => {
+    if (gesture.current) return;
+    gesture.current = snapshotLayer(staticLayer.current?.getNativeCanvasElement(), store.getState().view);
+  };
+  const endGesture = () => {
+    if (wheelIdle.current) clearTimeout(wheelIdle.current);
+    wheelIdle.current = null;
+    if (!gesture.current) return;
+    gesture.current = null;
+    staticLayer.current?.batchDraw();
+  };
   const tooltip = useTooltip(store, design, containerRef);
   // Labels on the canvas are written in the reader's units; the layers read this ref when drawn.
   const { system } = useUnits();
@@ -77,6 +92,7 @@ export function PlanCanvas({ store, design, controller, label, renderUnderlay }:
     theme.current = readPlanTheme();
     const rebuild = () => {
       const s = store.getState();
+      gesture.current = null; // the drawing changed: the bitmap no longer shows it
       geometry.current = buildStaticGeometry(s.plan, s.levelId, design.getSnapshot());
     };
     rebuild();
@@ -110,11 +126,19 @@ export function PlanCanvas({ store, design, controller, label, renderUnderlay }:
     if (!el) return;
     const onWheel = (e: WheelEvent) => {
       e.preventDefault();
+      startGesture();
+      if (wheelIdle.current) clearTimeout(wheelIdle.current);
+      wheelIdle.current = setTimeout(endGesture, WHEEL_GESTURE_IDLE_MS);
       const r = el.getBoundingClientRect();
       controller.wheel({ sx: e.clientX - r.left, sy: e.clientY - r.top, deltaY: e.deltaY, deltaX: e.deltaX, ctrl: e.ctrlKey });
     };
     el.addEventListener('wheel', onWheel, { passive: false });
-    return () => el.removeEventListener('wheel', onWheel);
+    return () => {
+      el.removeEventListener('wheel', onWheel);
+      if (wheelIdle.current) clearTimeout(wheelIdle.current);
+    };
+    // startGesture/endGesture read refs only.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [controller]);
 
   const local = (e: React.PointerEvent | React.MouseEvent) => {
@@ -139,6 +163,7 @@ export function PlanCanvas({ store, design, controller, label, renderUnderlay }:
         containerRef.current?.focus();
         (e.target as Element).setPointerCapture?.(e.pointerId);
         controller.down(local(e));
+        if (controller.panning) startGesture();
         setPanning(controller.panning);
       }}
       onPointerMove={(e) => {
@@ -147,6 +172,7 @@ export function PlanCanvas({ store, design, controller, label, renderUnderlay }:
       }}
       onPointerUp={(e) => {
         controller.up(local(e));
+        if (!controller.panning && !wheelIdle.current) endGesture();
         setPanning(controller.panning);
       }}
       onPointerLeave={() => {
@@ -171,6 +197,18 @@ export function PlanCanvas({ store, design, controller, label, renderUnderlay }:
               if (!g || !theme.current) return;
               const view = store.getState().view;
               const t0 = performance.now();
+              const bitmap = gesture.current;
+              if (bitmap && bitmap.view.width === view.width && bitmap.view.height === view.height) {
+                drawGestureBitmap(ctx._context, bitmap, view);
+                (globalThis as { __planBitmapProbe?: number[] }).__planBitmapProbe?.push(performance.now() - t0);
+                const el = containerRef.current;
+                if (el) {
+                  el.dataset.viewScale = String(view.scale);
+                  el.dataset.viewX = String(view.x);
+                  el.dataset.viewY = String(view.y);
+                }
+                return;
+              }
               const labelled = drawStatic(ctx._context, store.getState().plan, g, view, theme.current, systemRef.current);
               // Performance probe: a test may set window.__planDrawProbe = [] to collect draw times.
               (globalThis as { __planDrawProbe?: number[] }).__planDrawProbe?.push(performance.now() - t0);
