@@ -122,3 +122,15 @@ describe('grid from spacings on an existing grid', () => {
     expect(xs.map((g) => [g.id, g.label, g.offset_ft])).toEqual([['g1', '1', 0], ['g2', '2', 25]]);
   });
 });
+
+describe('Grid from spacings', () => {
+  it('when the grid is laid out from spacings, then the Select tool is active again', async () => {
+    const { emptyGridPlan } = await import('./plan-fixture');
+    const store = createEditorStore({ plan: emptyGridPlan() });
+    dispatch(store, 'tool.grid');
+    expect(store.getState().tool).toBe('grid');
+    dispatch(store, 'grid.fromSpacings', { x: [30, 30], y: [36] });
+    expect(store.getState().tool).toBe('select');
+    expect((store.getState().plan.grids ?? []).filter((g) => g.axis === 'x')).toHaveLength(3);
+  });
+});

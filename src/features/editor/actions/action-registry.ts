@@ -119,7 +119,8 @@ export const ACTIONS = {
       let plan = s.plan;
       if (a.x) plan = setGridFromSpacings(plan, 'x', a.x);
       if (a.y) plan = setGridFromSpacings(plan, 'y', a.y);
-      return { plan };
+      // The grid is laid out: back to Select, so the next click does not add a grid line.
+      return { plan, tool: 'select', draft: { kind: 'none' } };
     },
   }),
   'column.add': action<{ at: PlanPoint }>({
