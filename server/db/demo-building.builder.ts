@@ -2,7 +2,7 @@ import { PLAN_FORMAT, type Plan, type PlanMember, type PlanPolygon, type PlanSla
 
 /**
  * The demo floors' slab (numbers of our own): lightweight concrete, 114 pcf, f'c = 3.5 ksi,
- * 3¼ in. over a 3 in. deck with 6 in. average ribs at 12 in.; 46.1 psf concrete + 2.5 psf deck.
+ * 3¼ in. over a 3 in. deck with 6 in. average ribs at 12 in.: 114 × (3.25 + 3 × 6/12) / 12 = 45.1 psf concrete + 2.5 psf deck = 47.6 psf.
  */
 export const DEMO_SLAB: PlanSlab = {
   ribHeight_in: 3, toppingThickness_in: 3.25, ribAvgWidth_in: 6, ribSpacing_in: 12,
