@@ -119,7 +119,7 @@ test.describe('plan', () => {
     const drafter = await drafterContext.newPage();
     await signInAs(drafter, 'drafter@example.com');
     await drafter.goto(url);
-    await expect(drafter.getByTestId('plan-editor')).toHaveAttribute('data-read-only', 'true');
+    await expect(drafter.getByTestId('plan-editor')).toHaveAttribute('data-read-only', 'true', { timeout: 60_000 });
     await expect(drafter.getByRole('table').locator('tbody tr')).toHaveCount(29);
     await expect(drafter.getByRole('toolbar', { name: 'Plan tools' })).toHaveCount(0);
     await expect(drafter.getByRole('button', { name: 'Undo' })).toHaveCount(0);

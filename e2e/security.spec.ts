@@ -55,8 +55,9 @@ test('when every screen of the production build is opened, then no Content-Secur
   }
 
   await signInAs(page, 'owner@example.com');
-  const projects = (await (await page.request.get('/api/projects')).json()) as { projects: { id: string }[] };
-  const id = projects.projects[0].id;
+  // The demo project (other specs may have added projects of their own, some without schemes).
+  const projects = (await (await page.request.get('/api/projects')).json()) as { projects: { id: string; name: string }[] };
+  const id = (projects.projects.find((p) => p.name === 'Harrow Quay Clinic') ?? projects.projects[0]).id;
   const schemes = (await (await page.request.get(`/api/projects/${id}/schemes`)).json()) as { schemes: { id: string }[] };
 
   await page.goto(`/projects/${id}/plan?scheme=${schemes.schemes[0].id}`);
