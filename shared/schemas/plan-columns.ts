@@ -4,27 +4,22 @@ import type { Plan } from './plan.schema';
 
 /**
  * Column input that cannot be designed (design-basis §8): a column with no levels, a splice at
- * a level the column does not reach (or at its top, where no length starts), a locked size that
+ * a level the column does not reach, a locked size that
  * is not a W-shape of AISC Shapes Database v15.0, project splice levels naming no level.
  * Checked when a plan is saved or imported and by `calc plan` (exit 2).
  */
 export function columnInputProblems(plan: Plan): PlanProblem[] {
   const problems: PlanProblem[] = [];
   const levelIds = new Set(plan.levels.map((l) => l.id));
-  const elevation = new Map(plan.levels.map((l) => [l.id, l.elevation_ft]));
   plan.columns.forEach((c, i) => {
     const where = `columns[${i}] (id ${c.id.slice(0, 40)})`;
     if (c.levels.length === 0) {
       problems.push(planProblem('error', 'column-no-levels', `${where}.levels: column ${c.id} has no levels; give it at least one level it supports`, { elementId: c.id, path: `${where}.levels` }));
     }
-    const known = c.levels.filter((l) => levelIds.has(l));
-    const top = known.length ? known.reduce((a, b) => (elevation.get(b)! > elevation.get(a)! ? b : a)) : null;
     (c.spliceLevels ?? []).forEach((s, k) => {
       const path = `${where}.spliceLevels[${k}]`;
       if (!c.levels.includes(s)) {
         problems.push(planProblem('error', 'column-splice-unreached', `${path}: column ${c.id} does not reach level "${s}", so it cannot be spliced there`, { elementId: c.id, path }));
-      } else if (s === top) {
-        problems.push(planProblem('error', 'column-splice-at-top', `${path}: level "${s}" is the top of column ${c.id}; no column length starts there`, { elementId: c.id, path }));
       }
     });
     if (c.shape != null && c.shape.trim() !== '' && !(/^W\d/i.test(c.shape.trim()) && findWShape(c.shape))) {

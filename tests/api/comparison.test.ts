@@ -45,9 +45,13 @@ describe('project comparison', () => {
     for (const s of schemes) {
       const design = await t.agents.manager.get(`/api/schemes/${s.id}/design`);
       const members = design.body.members as { shape: string; span_ft: number }[];
-      const lb = members.reduce((sum, m) => sum + getWShape(m.shape).W_plf * m.span_ft, 0);
+      // Beams and girders, plus the gravity columns: shape weight × length of every sized length, one piece per tier
+      const columns = design.body.columns as { tiers: unknown[]; levels: { shape: string | null; Lc_ft: number }[] }[];
+      const columnLb = columns.reduce((sum, c) => sum + c.levels.reduce((a, l) => a + (l.shape ? getWShape(l.shape).W_plf * l.Lc_ft : 0), 0), 0);
+      expect(columnLb).toBeGreaterThan(0);
+      const lb = members.reduce((sum, m) => sum + getWShape(m.shape).W_plf * m.span_ft, 0) + columnLb;
       expect(s.totals.steelWeight_lb).toBeCloseTo(lb, 6);
-      expect(s.totals.pieces).toBe(members.length);
+      expect(s.totals.pieces).toBe(members.length + columns.reduce((a, c) => a + c.tiers.length, 0));
       expect(s.totals.connections).toBe(2 * members.length);
       expect(s.totals.steel_psf).toBeCloseTo(lb / s.totals.floorArea_ft2, 9);
       // cost = tons × $/ton + connections × $ each (hand formula)
@@ -55,7 +59,7 @@ describe('project comparison', () => {
       const levelSum = s.byLevel.reduce((sum, l) => sum + l.steelWeight_lb, 0);
       expect(levelSum).toBeCloseTo(s.totals.steelWeight_lb, 6);
       expect(s.byLevel.reduce((sum, l) => sum + (l.cost_usd ?? 0), 0)).toBeCloseTo(s.totals.cost_usd, 6);
-      expect(s.byKind.map((k) => k.kind)).toEqual(['girder', 'beam']);
+      expect(s.byKind.map((k) => k.kind)).toEqual(['girder', 'beam', 'column']);
       expect(s.revision).toBe(1);
     }
     // The two schemes differ (beam spacing), which is what a manager weighs.
@@ -75,11 +79,12 @@ describe('project comparison', () => {
     expect(s.revision).toBe(2);
     expect(await t.ctx.db.models.DesignRun.count({ where: { schemeId, revision: 2 } })).toBe(1);
     const spans = plan.members.length;
-    expect(s.totals.pieces).toBe(spans);
-    // Every member locked at W24X55: weight = 55 lb/ft × Σ span.
     const design = await t.agents.manager.get(`/api/schemes/${schemeId}/design`);
+    const columns = design.body.columns as { tiers: unknown[]; weight_lb: number }[];
+    expect(s.totals.pieces).toBe(spans + columns.reduce((a, c) => a + c.tiers.length, 0));
+    // Every member locked at W24X55: weight = 55 lb/ft × Σ span, plus the columns' weight.
     const spanSum = (design.body.members as { span_ft: number }[]).reduce((a, m) => a + m.span_ft, 0);
-    expect(s.totals.steelWeight_lb).toBeCloseTo(55 * spanSum, 6);
+    expect(s.totals.steelWeight_lb).toBeCloseTo(55 * spanSum + columns.reduce((a, c) => a + c.weight_lb, 0), 6);
   });
 
   it('when schemes are limited by id and one is archived, then only those come back; archived ones are left out unless asked', async () => {
