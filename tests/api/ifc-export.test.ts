@@ -185,7 +185,7 @@ describe('GET /api/schemes/:id/model.ifc', () => {
     expect(m.span_ft).toBeCloseTo(30, 9);
   });
 
-  it('when read back, then each column length is an IfcColumn from the level below (or 0 ft) to its level, marked not sized until columns are designed', () => {
+  it('when read back, then each column length is an IfcColumn from the level below (or 0 ft) to its level, with the size the design gave that length', () => {
     expect(model.columns).toHaveLength(12);
     const lower = model.columns.find((c) => c.tag === 'C-B2@L2')!;
     const upper = model.columns.find((c) => c.tag === 'C-B2@L3')!;
@@ -193,10 +193,13 @@ describe('GET /api/schemes/:id/model.ifc', () => {
     expect(upper.storey?.name).toBe('L3');
     expect(Math.abs(lower.length_ft - 14)).toBeLessThan(0.01); // L2 at 14 ft down to elevation 0
     expect(Math.abs(upper.length_ft - 13)).toBeLessThan(0.01); // 27 − 14
-    expect(lower.props).toMatchObject({ pset: 'Baywright_Column', Column: 'C-B2', Size: 'not sized', Sized: false, ProfileDrawn: 'W10X49', SupportsLevel: 'L2' });
+    const designed = (design as unknown as { columns: { id: string; levels: { level: string; shape: string | null }[] }[] }).columns
+      .find((c) => c.id === 'C-B2')!.levels.find((l) => l.level === 'L2')!.shape!;
+    expect(designed).toMatch(/^W1[024]X\d+$/); // sized from the allowed series (issue 12)
+    expect(lower.props).toMatchObject({ pset: 'Baywright_Column', Column: 'C-B2', Size: designed, Sized: true, ProfileDrawn: designed, SupportsLevel: 'L2' });
     expect(lower.props.BaseElevation_ft).toBe(0);
     expect(upper.props.BaseElevation_ft).toBe(14);
-    expect(lower.profile.d_in).toBeCloseTo(findWShape('W10X49')!.d_in, 6);
+    expect(lower.profile.d_in).toBeCloseTo(findWShape(designed)!.d_in, 6);
   });
 
   it('when the same scheme is exported twice, then element ids are the same (stable GlobalIds)', async () => {

@@ -13,7 +13,7 @@ import type { Plan } from '../../schemas/plan.schema';
 import type { StudySpec, StudyUnitPrices } from '../../schemas/study.schema';
 import { MAX_STUDY_OPTIONS } from '../../schemas/study.schema';
 import { findWShape } from '../../catalog/w-shapes.catalog';
-import { computeTonnage, type TonnageFigures } from '../../tonnage/tonnage';
+import { columnTonnageRows, computeTonnage, type TonnageFigures } from '../../tonnage/tonnage';
 import { estimateCost } from '../../tonnage/cost';
 import { designScheme, SCHEME_CAUTION, type SchemeResult } from '../scheme/design-scheme.scheme';
 import type { Bay } from '../layout/bay-infill.layout';
@@ -130,7 +130,9 @@ function figuresOf(t: TonnageFigures, prices: StudyUnitPrices | null): StudyFigu
 
 /** Tonnage of a designed scheme exactly as the Tonnage screen computes it. */
 export function schemeStudyFigures(plan: Plan, design: SchemeResult, prices: StudyUnitPrices | null): StudyFigures {
-  return figuresOf(computeTonnage(design, plan.levels).totals, prices);
+  // Beams and girders plus the gravity columns by tier, as the Tonnage screen counts them.
+  const withColumns = { ...design, members: [...design.members, ...columnTonnageRows(design as unknown as Record<string, unknown>)] };
+  return figuresOf(computeTonnage(withColumns, plan.levels).totals, prices);
 }
 
 const failing = (d: SchemeResult) => d.members.filter((m) => !m.passes).length;

@@ -43,7 +43,8 @@ describe('npm run -s calc -- plan: views and layout', () => {
     const r = calc(['plan', '--summary', fixture]);
     expect(r.status).toBe(0);
     const out = JSON.parse(r.stdout);
-    expect(Object.keys(out.members[0])).toEqual(['id', 'mark', 'shape', 'passes', 'ratio', 'governing', 'reactions']);
+    // studs, camber_in and percentComposite are on every calc plan member (null where not composite: calc-interface.md Additions).
+    expect(Object.keys(out.members[0])).toEqual(['id', 'mark', 'shape', 'passes', 'ratio', 'governing', 'studs', 'camber_in', 'percentComposite', 'reactions']);
     expect(out.members[0]).toMatchObject({ id: 'gA12', mark: '2G1' });
     expect(Object.keys(out)).toEqual(['name', 'members', 'columns', 'totals', 'problems', 'caution']);
   }, 90_000);
