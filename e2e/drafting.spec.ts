@@ -1,6 +1,6 @@
 import { readFileSync } from 'node:fs';
 import { expect, test } from '@playwright/test';
-import { SCREENSHOT_DIR, signInAs } from './support/auth.helpers';
+import { SCREENSHOT_DIR, signInAs, openDemoProject } from './support/auth.helpers';
 
 // The drafter's afternoon: open the demo project's Schedule, filter it, download the CSV and
 // the plan sheet, review the sheet on screen. Marks are the only thing a drafter may change.
@@ -9,7 +9,7 @@ test.setTimeout(150_000);
 
 test('a drafter filters the schedule, downloads the CSV and the plan sheet, and edits nothing but marks', async ({ page }) => {
   await signInAs(page, 'drafter@example.com');
-  await page.getByRole('table').getByRole('link').first().click();
+  await openDemoProject(page);
   await page.setViewportSize({ width: 1440, height: 900 });
   await page.getByRole('link', { name: 'Schedule' }).click();
 

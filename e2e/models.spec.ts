@@ -1,7 +1,7 @@
 import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { expect, test, type Page } from '@playwright/test';
 import PDFDocument from 'pdfkit';
-import { SCREENSHOT_DIR, signInAs } from './support/auth.helpers';
+import { SCREENSHOT_DIR, signInAs, openDemoProject } from './support/auth.helpers';
 import { generatedPlan, schemeWithPlan } from './support/plan-canvas.helpers';
 
 // Plans in and models out: a PDF page as an underlay, the IFC model from the Schedule, and
@@ -82,7 +82,7 @@ test('an engineer uploads an architect’s PDF: its page is drawn under the plan
 
 test('a drafter downloads the IFC model from the Schedule', async ({ page }) => {
   await signInAs(page, 'drafter@example.com');
-  await page.getByRole('table').getByRole('link').first().click();
+  await openDemoProject(page);
   await page.getByRole('link', { name: 'Schedule' }).click();
   await expect(page.getByRole('table', { name: 'Schedule by mark' })).toBeVisible({ timeout: 30_000 });
   const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('link', { name: 'Download model (IFC)' }).click()]);

@@ -1,9 +1,9 @@
 import { expect, test, type Page } from '@playwright/test';
-import { SCREENSHOT_DIR, signInAs } from './support/auth.helpers';
+import { SCREENSHOT_DIR, signInAs, openDemoProject } from './support/auth.helpers';
 import { clickPlan, generatedPlan, planCanvas, schemeWithPlan } from './support/plan-canvas.helpers';
 
 async function openDemoProjectPlan(page: Page) {
-  await page.getByRole('table').getByRole('link').first().click();
+  await openDemoProject(page);
   await page.getByRole('navigation', { name: 'Project sections' }).getByRole('link', { name: 'Plan' }).click();
 }
 

@@ -1,5 +1,5 @@
 import { expect, test, type Page } from '@playwright/test';
-import { SCREENSHOT_DIR, signInAs } from './support/auth.helpers';
+import { SCREENSHOT_DIR, signInAs, openDemoProject } from './support/auth.helpers';
 
 // Walks the screens a person sees, checks each carries the caution, and keeps a picture of
 // each in artifacts/screenshots for review.
@@ -32,7 +32,7 @@ test('when an owner walks through every screen, then each carries the caution', 
   await page.screenshot({ path: `${SCREENSHOT_DIR}/project-new.png`, fullPage: true });
 
   await page.goto('/projects');
-  await page.getByRole('table').getByRole('link').first().click();
+  await openDemoProject(page);
   await page.getByRole('link', { name: 'Project details' }).click();
   await expect(page.getByRole('heading', { name: 'Project details', level: 2 })).toBeVisible();
   await expectCaution(page);

@@ -14,3 +14,11 @@ export async function signInAs(page: Page, email: string, password = DEMO_PASSWO
 export function mainNav(page: Page) {
   return page.getByRole('navigation', { name: 'Main' });
 }
+
+/** The seeded demo project's name (server/db/seed-demo.ts); other specs add projects of their own. */
+export const DEMO_PROJECT = 'Harrow Quay Clinic';
+
+/** From the Projects list, open the demo project by its name, not by its place in the list. */
+export async function openDemoProject(page: Page): Promise<void> {
+  await page.getByRole('table').getByRole('link', { name: DEMO_PROJECT }).first().click();
+}
