@@ -12,6 +12,9 @@ export default defineConfig({
   },
   build: { outDir: 'dist', sourcemap: true },
   test: {
+    // Vitest's default on a 2-core machine is one worker (CPUs − 1); the tests spend much of
+    // their time waiting on child processes, sockets and the database, so two keep both busy.
+    maxWorkers: 2,
     projects: [
       {
         extends: true,
@@ -19,6 +22,8 @@ export default defineConfig({
           name: 'unit',
           environment: 'node',
           include: ['tests/unit/**/*.test.ts'],
+          // PDF and whole-building tests take a few seconds alone, more beside a second worker.
+          testTimeout: 15000,
         },
       },
       {
@@ -38,6 +43,7 @@ export default defineConfig({
           environment: 'jsdom',
           include: ['tests/ui/**/*.test.tsx'],
           setupFiles: ['tests/ui/setup.ts'],
+          testTimeout: 15000,
         },
       },
     ],
