@@ -5,8 +5,7 @@
  */
 import type { Plan } from '../schemas/plan.schema';
 import { gridIntersectionLabel } from './grid-location.drafting';
-import { DEFAULT_COLUMN_SERIES } from '../engine/sizing/column-design';
-import { DEFAULT_STOREYS_PER_TIER } from '../engine/sizing/column-tiers';
+import { DEFAULT_COLUMN_SERIES, DEFAULT_STOREYS_PER_TIER } from '../engine/index';
 
 export interface ColumnScheduleCell {
   shape: string | null;

@@ -39,3 +39,5 @@ export { levelBays, regionBays, memberInBays, baysAreaFt2 } from './study/study-
 export { columnWorking, columnCombinations } from './sizing/column-working';
 export type { ColumnWorking, ColumnWorkingTier, ColumnWorkingLength, ColumnLighterTry, ColumnWorkingInput } from './sizing/column-working';
 export type { SchemeColumn, SchemeColumnLevel, SchemeColumnTier } from './scheme/column-design.scheme';
+export { DEFAULT_COLUMN_SERIES } from './sizing/column-design';
+export { DEFAULT_STOREYS_PER_TIER } from './sizing/column-tiers';
