@@ -93,7 +93,7 @@ export function ColumnSheet({ schedule, column, units, onClose, editor }: Column
                 {t.lighter.map((x) => (
                   <li key={x.shape}>
                     {x.shape}: {x.ratio !== null ? `ratio ${f3(x.ratio)} — ` : ''}
-                    <span className="font-sans">{x.reason}</span>
+                    <span className="font-sans">{x.failsAt ? x.reason.replace(`below ${x.failsAt}`, `below ${lvl(x.failsAt)}`) : x.reason}</span>
                   </li>
                 ))}
               </ul>
@@ -162,7 +162,7 @@ function LengthWorking({
               <td className="pr-3 text-right">{f1(a.slenderness)}</td>
               <td className="pr-3 text-right">{stress(a.feKsi)}</td>
               <td className="pr-3 text-right">{stress(a.fcrKsi)}</td>
-              <td className="pr-3 font-sans">
+              <td className="whitespace-nowrap pr-3 font-sans">
                 {a.equation}: {f1(a.slenderness)} {a.equation === 'Eq. E3-2' ? '≤' : '>'} {f1(a.limit)}
               </td>
               <td className="pr-3 text-right">{force(a.pnKip)}</td>
