@@ -1,5 +1,6 @@
 import { expect, test, type Page } from '@playwright/test';
 import { SCREENSHOT_DIR, openDemoProject, signInAs } from './support/auth.helpers';
+import { clickPlan, planCanvas } from './support/plan-canvas.helpers';
 
 // The Column stack: every demo column sized by tier, one column's sheet with its working, a
 // splice moved by the engineer (the tiers follow), and the same screen read-only for a drafter.
@@ -86,5 +87,19 @@ test('an engineer sees every column sized by tier, opens a column sheet and move
     const res = await drafter.request.put(`/api/schemes/${schemeId}/plan`, { data: { revision: 1, plan: {} }, headers: { Origin: origin } });
     expect(res.status()).toBe(403);
   }
+
+  // On the Plan, a click on the column opens the same sheet beside the canvas.
+  const projectId = new URL(drafter.url()).pathname.split('/')[2];
+  const scheme = (await (await drafter.request.get(`/api/schemes/${schemeId}`)).json()) as { scheme: { plan: { columns: { id: string; x_ft: number; y_ft: number }[] } } };
+  const at = scheme.scheme.plan.columns.find((c) => c.id === columnId)!;
+  await drafter.goto(`/projects/${projectId}/plan?scheme=${schemeId}&level=L2`);
+  const canvas = await planCanvas(drafter, 90_000);
+  await expect(drafter.getByTestId('design-status')).toContainText('members sized', { timeout: 90_000 });
+  await clickPlan(drafter, canvas, at.x_ft, at.y_ft);
+  const slot = drafter.getByTestId('column-sheet-slot');
+  await expect(slot).toBeVisible({ timeout: 30_000 });
+  await expect(slot.getByRole('heading', { name: new RegExp(`^Column ${markOf}`) })).toBeVisible();
+  await expect(slot.getByTestId('column-sheet-tier-1')).toBeVisible();
+  await drafter.screenshot({ path: `${SCREENSHOT_DIR}/column-sheet-on-plan.png` });
   await context.close();
 });
