@@ -22,7 +22,7 @@ test.describe('projects', () => {
     await expect(page.getByRole('heading', { name, level: 1 })).toBeVisible();
     await expect(page.getByText('BW-2417')).toBeVisible();
     const sections = page.getByRole('navigation', { name: 'Project sections' });
-    await expect(sections.getByRole('link')).toHaveText(['Schemes', 'Plan', 'Schedule', 'Tonnage', 'Project details']);
+    await expect(sections.getByRole('link')).toHaveText(['Schemes', 'Plan', 'Schedule', 'Column stack', 'Tonnage', 'Project details']);
     await expect(page.getByRole('heading', { name: 'No schemes yet' })).toBeVisible();
     await page.screenshot({ path: `${SCREENSHOT_DIR}/project.png`, fullPage: true });
 

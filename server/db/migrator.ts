@@ -9,6 +9,7 @@ import * as m0006 from './migrations/0006-scheme-status-prices';
 import * as m0007 from './migrations/0007-plan-v2-composite-columns';
 import * as m0008 from './migrations/0008-underlay-pdf-pages';
 import * as m0009 from './migrations/0009-bay-studies';
+import * as m0011 from './migrations/0011-column-tier-shapes';
 
 export type Migration = MigrationFn<QueryInterface>;
 
@@ -24,6 +25,8 @@ const MIGRATIONS: { name: string; up: Migration; down: Migration }[] = [
   { name: '0007-plan-v2-composite-columns', ...m0007 },
   { name: '0008-underlay-pdf-pages', ...m0008 },
   { name: '0009-bay-studies', ...m0009 },
+  // 0010 is another branch's (the lead numbers migrations across branches).
+  { name: '0011-column-tier-shapes', ...m0011 },
 ];
 
 /** The migration names in the order they run. */

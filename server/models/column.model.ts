@@ -10,6 +10,8 @@ export interface ColumnAttributes extends PlanElementBase {
   shape: string | null;
   /** Plan version 2: level ids where a new tier starts. */
   spliceLevels: string[] | null;
+  /** Locked tier sizes (columns[].tierShapes), null when absent. */
+  tierShapes: { level: string; shape: string }[] | null;
   /** Comma list of optional fields the file gave as an explicit null. */
   nullFields: string | null;
 }
@@ -21,6 +23,7 @@ export function defineColumnModel(sequelize: Sequelize) {
     levels: { type: DataTypes.JSON, allowNull: false },
     shape: { type: DataTypes.STRING(40), allowNull: true },
     spliceLevels: { type: DataTypes.JSON, allowNull: true },
+    tierShapes: { type: DataTypes.JSON, allowNull: true },
     nullFields: { type: DataTypes.STRING(200), allowNull: true },
   });
 }

@@ -165,6 +165,7 @@ export async function replacePlanRows(db: Db, schemeId: string, plan: Plan, tran
       levels: c.levels,
       shape: c.shape ?? null,
       spliceLevels: c.spliceLevels ?? null,
+      tierShapes: c.tierShapes ?? null,
       nullFields: 'shape' in c && c.shape === null ? 'shape' : null,
     })),
     opts,
@@ -276,6 +277,7 @@ export async function readPlan(db: Db, scheme: SchemeAttributes, transaction?: T
       const column: Plan['columns'][number] = { id: c.elementId, x_ft: c.xFt, y_ft: c.yFt, levels: json<string[]>(c.levels) };
       setOptional(column, 'shape', c.shape, (c.nullFields ?? '').split(',').includes('shape'));
       setOptional(column, 'spliceLevels', c.spliceLevels === null ? null : json(c.spliceLevels));
+      setOptional(column, 'tierShapes', c.tierShapes == null ? null : json(c.tierShapes));
       return column;
     }),
     members: a<MemberAttributes>(members).map((r) => {

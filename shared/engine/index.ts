@@ -36,3 +36,8 @@ export type { StudyResult, StudyOptionResult, StudyFigures, StudyHooks } from '.
 export { applyStudyOption } from './study/apply-option.study';
 export type { StudyOptionSpec, AppliedOption } from './study/apply-option.study';
 export { levelBays, regionBays, memberInBays, baysAreaFt2 } from './study/study-region.study';
+export { columnWorking, columnCombinations } from './sizing/column-working';
+export type { ColumnWorking, ColumnWorkingTier, ColumnWorkingLength, ColumnLighterTry, ColumnWorkingInput } from './sizing/column-working';
+export type { SchemeColumn, SchemeColumnLevel, SchemeColumnTier } from './scheme/column-design.scheme';
+export { DEFAULT_COLUMN_SERIES } from './sizing/column-design';
+export { DEFAULT_STOREYS_PER_TIER } from './sizing/column-tiers';

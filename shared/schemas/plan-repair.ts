@@ -128,6 +128,13 @@ export function repairPlan(input: PlanFile): RepairOutcome {
 
   // Locked column sizes: the same normalisation as member shapes.
   plan.columns.forEach((c, i) => {
+    (c.tierShapes ?? []).forEach((t, k) => {
+      const normal = t.shape.trim().toUpperCase();
+      if (normal !== t.shape && normal !== '') {
+        repairs.push(`columns[${i}] (id ${c.id}): tierShapes[${k}] shape "${t.shape}" written as "${normal}"`);
+        t.shape = normal;
+      }
+    });
     if (c.shape == null) return;
     const normal = c.shape.trim().toUpperCase();
     if (normal === '') {

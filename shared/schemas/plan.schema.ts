@@ -110,6 +110,12 @@ export const gridSchema = z.object({
 });
 export type PlanGrid = z.infer<typeof gridSchema>;
 
+export const columnTierShapeSchema = z.object({
+  level: z.string().min(1, 'the level of a length in the tier'),
+  shape: z.string().min(1, 'a W-shape such as W14X90'),
+});
+export type PlanColumnTierShape = z.infer<typeof columnTierShapeSchema>;
+
 export const columnSchema = z.object({
   id: z.string().min(1),
   x_ft: coordinateFt,
@@ -120,6 +126,12 @@ export const columnSchema = z.object({
   shape: z.string().nullable().optional(),
   /** Version 2 (optional): level ids where a new column tier starts. */
   spliceLevels: boundedList(z.string().min(1), LIMIT.columnLevels, 'splice levels').optional(),
+  /**
+   * Optional: locked tier sizes. Each entry locks the tier holding the column length below
+   * `level` (one of the column's levels) to `shape`, checked and never replaced; it takes
+   * precedence over `shape` for that tier. The lock follows the length when splices move.
+   */
+  tierShapes: boundedList(columnTierShapeSchema, LIMIT.columnLevels, 'tier sizes').optional(),
 });
 export type PlanColumn = z.infer<typeof columnSchema>;
 

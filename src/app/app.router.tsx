@@ -40,6 +40,7 @@ export const appRoutes: RouteObject[] = [
               { index: true, lazy: page(() => import('../routes/project-schemes.route')) },
               { path: 'plan', lazy: page(() => import('../routes/project-plan.route')) },
               { path: 'schedule', lazy: page(() => import('../routes/project-schedule.route')) },
+              { path: 'columns', lazy: page(() => import('../routes/project-columns.route')) },
               { path: 'tonnage', lazy: page(() => import('../routes/project-tonnage.route')) },
               { path: 'details', lazy: page(() => import('../routes/project-details.route')) },
             ],

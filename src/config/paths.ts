@@ -37,6 +37,17 @@ export const paths = {
     path: '/projects/:projectId/schedule',
     href: (projectId: string | number) => `${paths.project.href(projectId)}/schedule`,
   },
+  projectColumns: {
+    path: '/projects/:projectId/columns',
+    /** The Column stack, optionally of one scheme with one column's sheet open: /projects/7/columns?scheme=12&column=C3. */
+    href: (projectId: string | number, at: { scheme?: string | null; column?: string | null } = {}) => {
+      const q = new URLSearchParams();
+      if (at.scheme) q.set('scheme', at.scheme);
+      if (at.column) q.set('column', at.column);
+      const query = q.toString();
+      return `${paths.project.href(projectId)}/columns${query ? `?${query}` : ''}`;
+    },
+  },
   projectTonnage: {
     path: '/projects/:projectId/tonnage',
     href: (projectId: string | number) => `${paths.project.href(projectId)}/tonnage`,

@@ -14,6 +14,8 @@ import { designStoredScheme } from '../features/editor/api/design-scheme.api';
 import { editorSchemeQueryKey, useEditorScheme, type EditorScheme } from '../features/editor/api/get-scheme.api';
 import { PlanEditor } from '../features/editor/components/plan-editor.component';
 import { MemberSheet } from '../features/member-sheet/components/member-sheet.component';
+import { ColumnSheet } from '../features/column-stack/components/column-sheet.component';
+import { buildColumnSchedule } from '../../shared/drafting/column-schedule.drafting';
 import { useCreateScheme } from '../features/schemes/api/create-scheme.api';
 import { useSchemes } from '../features/schemes/api/get-schemes.api';
 import { BuildingView } from '../features/building-view/components/building-view.component';
@@ -158,6 +160,19 @@ function SchemePlan({
             />
           )}
           renderDesignBasis={({ designBasis, canEdit: can, submit }) => <DesignBasisForm value={designBasis} canEdit={can} onSubmit={submit} units={system} />}
+          renderColumnSheet={({ columnId, plan, result, close }) => {
+            const schedule = buildColumnSchedule(result, plan);
+            const column = schedule.columns.find((c) => c.id === columnId);
+            if (!column) return null;
+            return (
+              <div className="flex flex-col gap-2">
+                <Link className="text-xs text-accent underline" to={paths.projectColumns.href(projectId, { scheme: schemeId, column: columnId })}>
+                  {canEdit ? 'Splices and tier sizes on the Column stack' : 'Open on the Column stack'}
+                </Link>
+                <ColumnSheet schedule={schedule} column={column} units={system} onClose={close} />
+              </div>
+            );
+          }}
           renderMemberSheet={({ member, planMember, plan, result, canEdit: can, lockShape, setConstraints, close }) => (
             <MemberSheet
               member={member}

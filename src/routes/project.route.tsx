@@ -9,6 +9,7 @@ const SECTIONS = [
   { label: 'Schemes', href: paths.project.href, end: true },
   { label: 'Plan', href: paths.projectPlan.href, end: true },
   { label: 'Schedule', href: paths.projectSchedule.href, end: true },
+  { label: 'Column stack', href: (id: string | number) => paths.projectColumns.href(id), end: true },
   { label: 'Tonnage', href: paths.projectTonnage.href, end: true },
   { label: 'Project details', href: paths.projectDetails.href, end: true },
 ] as const;

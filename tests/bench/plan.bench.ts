@@ -12,6 +12,7 @@ import { spawnSync } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
 import { designScheme } from '../../shared/engine/scheme/design-scheme.scheme';
 import { runTakedown } from '../../shared/engine/takedown/gravity-takedown.takedown';
+import { schemeColumns } from '../../shared/engine/scheme/column-design.scheme';
 import type { Plan, PlanMember } from '../../shared/schemas/plan.schema';
 
 export interface Timing {
@@ -27,6 +28,13 @@ export interface PlanBenchFigures {
   coldInFreshProcess: boolean;
   /** Takedown + design of the building again, same process (JIT warm). */
   warm: Timing;
+  /** Gravity columns of the building, their tiers (pieces), how many pass, and their steel. */
+  columns: number;
+  columnTiers: number;
+  columnsPassed: number;
+  columnWeight_lb: number;
+  /** Column design alone (AISC 360-16 Chapter E, every tier of every column, from the takedown's stack), warm. */
+  columnDesign: Timing;
   /** Takedown alone (default self weight), warm. */
   takedown: Timing;
   passed: number;
@@ -119,11 +127,15 @@ const median = (xs: number[]) => {
 const buildingPlan = () => regularBuildingPlan(24, 10, 8);
 
 /** Figure 1 in this process: the first design of the building here. */
-function coldBuilding(): { timing: Timing; members: number; passed: number; equilibriumErrorD: number } {
+function coldBuilding(): { timing: Timing; members: number; passed: number; equilibriumErrorD: number; columns: number; columnTiers: number; columnsPassed: number; columnWeight_lb: number } {
   const building = buildingPlan();
   const { value: r, timing } = timed(() => designScheme(building));
   return {
     timing,
+    columns: r.columns.length,
+    columnTiers: r.columns.reduce((a, c) => a + c.tiers.length, 0),
+    columnsPassed: r.columns.filter((c) => c.passes).length,
+    columnWeight_lb: r.totals.columnWeight_lb,
     members: r.members.length,
     passed: r.members.filter((m) => m.passes).length,
     equilibriumErrorD: Math.abs(r.equilibrium.D.applied_kip - r.equilibrium.D.reactions_kip),
@@ -177,7 +189,10 @@ export function runPlanBench(): PlanBenchFigures {
   const cold = fresh ?? coldBuilding();
   const building = buildingPlan();
   const warm = timed(() => designScheme(building)).timing;
-  const takedown = timed(() => runTakedown(building)).timing;
+  const { value: stack, timing: takedown } = timed(() => runTakedown(building));
+  // Column design alone on the takedown's stack, warm (median of 5).
+  const columnRuns = Array.from({ length: 5 }, () => timed(() => schemeColumns(building, stack.columns)).timing);
+  const columnDesign: Timing = { wallMs: median(columnRuns.map((t) => t.wallMs)), cpuMs: median(columnRuns.map((t) => t.cpuMs)) };
 
   const level = regularBuildingPlan(1, 12, 10);
   level.levels[0].roof = false;
@@ -213,6 +228,11 @@ export function runPlanBench(): PlanBenchFigures {
     coldInFreshProcess: fresh !== null,
     warm,
     takedown,
+    columns: cold.columns,
+    columnTiers: cold.columnTiers,
+    columnsPassed: cold.columnsPassed,
+    columnWeight_lb: cold.columnWeight_lb,
+    columnDesign,
     passed: cold.passed,
     equilibriumErrorD: cold.equilibriumErrorD,
     levelMembers: runs[0].value.members.length,
@@ -224,6 +244,8 @@ export function runPlanBench(): PlanBenchFigures {
       `  takedown + design, first run ${figures.coldInFreshProcess ? 'in a fresh process' : 'in this process'}: ${fmt(figures.cold)}; target ≤ ${TARGET_BUILDING_MS} ms: ${verdict(figures.cold, TARGET_BUILDING_MS)}\n` +
       `  takedown + design, second run: ${fmt(figures.warm)}; target ≤ ${TARGET_BUILDING_MS} ms: ${verdict(figures.warm, TARGET_BUILDING_MS)}\n` +
       `  takedown alone (locked-shape self weight), second run: ${fmt(figures.takedown)} (no target of its own; part of the ${TARGET_BUILDING_MS} ms above)\n` +
+      `  columns included: ${figures.columns} columns, ${figures.columnTiers} tiers sized (AISC 360-16 Chapter E), ${figures.columnsPassed} pass, ${Math.round(figures.columnWeight_lb).toLocaleString('en-US')} lb of column steel\n` +
+      `  column design alone (every tier, from the stack), warm, median of ${columnRuns.length}: ${fmt(figures.columnDesign)} (part of the ${TARGET_BUILDING_MS} ms above)\n` +
       `plan (one level): ${figures.levelMembers} members; full design ${fmt(figures.fullLevel)} (no target)\n` +
       `  re-design after a one-member change, first edits (median of ${runs.length} after one warm-up): ${fmt(early)} (JIT still warming; no target)\n` +
       `  re-design after a one-member change, steady (median of ${steady.length} after 20 edits): ${fmt(figures.redesign)}; target ≤ ${TARGET_REDESIGN_MS} ms: ${verdict(figures.redesign, TARGET_REDESIGN_MS)}; p95 ${fmt(redesignP95)}\n`,

@@ -67,6 +67,12 @@ export function designSchemeColumns(plan: Plan, stack: readonly ColumnTakedown[]
     const lockedShape = column.shape && column.shape.trim() !== '' ? normalizeShapeLabel(column.shape) : null;
     const locked = new Map<number, string | null>();
     if (lockedShape) for (const t of tiers) locked.set(t, lockedShape);
+    // A locked tier size (columns[].tierShapes) locks the tier holding the length below its level;
+    // it takes precedence over the column's size. Two locks in one tier: the later entry is kept.
+    for (const t of column.tierShapes ?? []) {
+      const i = c.levels.findIndex((l) => l.level === t.level);
+      if (i >= 0 && t.shape.trim() !== '') locked.set(tiers[i], normalizeShapeLabel(t.shape));
+    }
     const design = designColumn({
       method: plan.designBasis.method,
       Fy_ksi: plan.designBasis.Fy_ksi,

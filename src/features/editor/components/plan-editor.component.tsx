@@ -33,6 +33,14 @@ export interface MemberSheetSlotArgs {
   close: () => void;
 }
 
+export interface ColumnSheetSlotArgs {
+  /** The selected column's id (its design is in `result.columns`). */
+  columnId: string;
+  plan: Plan;
+  result: SchemeResult;
+  close: () => void;
+}
+
 export interface DesignBasisSlotArgs {
   designBasis: Plan['designBasis'];
   canEdit: boolean;
@@ -75,6 +83,8 @@ export interface PlanEditorProps {
   onSaved?: (revision: number, plan: Plan) => void;
   /** The Member sheet for one selected member (composed by the page). */
   renderMemberSheet?: (args: MemberSheetSlotArgs) => ReactNode;
+  /** A column's sheet for one selected column (composed by the page). */
+  renderColumnSheet?: (args: ColumnSheetSlotArgs) => ReactNode;
   /** The Design basis form (composed by the page). */
   renderDesignBasis?: (args: DesignBasisSlotArgs) => ReactNode;
   /** Underlay controls for the level shown (composed by the page). */
@@ -191,8 +201,16 @@ export function PlanEditor(props: PlanEditorProps) {
   const selectedMember = selection.length === 1 ? plan.members.find((m) => m.id === selection[0] && m.level === levelId) : undefined;
   const schemeMember = selectedMember ? designState.byId.get(selectedMember.id) : undefined;
   const levelName = plan.levels.find((l) => l.id === levelId)?.name ?? 'no level';
-  const side: 'basis' | 'member' | 'list' =
-    showBasis && props.renderDesignBasis ? 'basis' : selectedMember && schemeMember && designState.result && props.renderMemberSheet ? 'member' : 'list';
+  const selectedColumn = selection.length === 1 && !selectedMember ? plan.columns.find((c) => c.id === selection[0] && c.levels.includes(levelId)) : undefined;
+  const columnDesigned = !!selectedColumn && !!designState.result?.columns?.some((c) => c.id === selectedColumn.id);
+  const side: 'basis' | 'member' | 'column' | 'list' =
+    showBasis && props.renderDesignBasis
+      ? 'basis'
+      : selectedMember && schemeMember && designState.result && props.renderMemberSheet
+        ? 'member'
+        : selectedColumn && columnDesigned && props.renderColumnSheet
+          ? 'column'
+          : 'list';
   const fillHeight = useFillWindowHeight(rootRef);
 
   return (
@@ -320,6 +338,17 @@ export function PlanEditor(props: PlanEditorProps) {
                 canEdit,
                 lockShape: (shape) => dispatch(store, 'member.setShape', { id: selectedMember.id, shape }),
                 setConstraints: (c) => dispatch(store, 'member.setConstraints', { id: selectedMember.id, ...c }),
+                close: () => dispatch(store, 'selection.set', { ids: [] }),
+              })}
+            </div>
+          </aside>
+        ) : side === 'column' && selectedColumn && designState.result ? (
+          <aside className="flex w-[38rem] shrink-0 flex-col border-l border-ink bg-paper" aria-label="Column sheet panel">
+            <div className="min-h-0 flex-1 overflow-auto px-4 py-3" data-testid="column-sheet-slot">
+              {props.renderColumnSheet!({
+                columnId: selectedColumn.id,
+                plan,
+                result: designState.result,
                 close: () => dispatch(store, 'selection.set', { ids: [] }),
               })}
             </div>
