@@ -96,4 +96,35 @@ describe('project schemes page', () => {
     expect(calls.find((c) => c.method === 'POST')).toEqual({ url: `/api/projects/${PROJECT}/schemes`, method: 'POST', body: { name: 'Scheme C' } });
     await waitFor(() => expect(calls.filter((c) => c.method === 'GET')).toHaveLength(2));
   });
+
+  it('when an engineer clones a scheme, then the new name is asked (default "… copy") and posted; a blank one is refused with a message', async () => {
+    const calls = mockFetch([scheme()]);
+    renderAs('engineer');
+    const row = (await screen.findByRole('link', { name: 'Scheme A — beams at about 10 ft' })).closest('tr')!;
+    await userEvent.click(within(row).getByRole('button', { name: 'Clone' }));
+    const field = within(row).getByLabelText('Name of the copy');
+    expect(field).toHaveValue('Scheme A — beams at about 10 ft copy');
+    await userEvent.clear(field);
+    await userEvent.click(within(row).getByRole('button', { name: 'Make the copy' }));
+    expect(within(row).getByRole('alert')).toHaveTextContent('A scheme needs a name');
+    expect(calls.filter((c) => c.method === 'POST')).toEqual([]);
+    await userEvent.type(field, 'Scheme C');
+    await userEvent.click(within(row).getByRole('button', { name: 'Make the copy' }));
+    await waitFor(() => expect(calls.filter((c) => c.method === 'POST')).toEqual([{ url: '/api/schemes/s-1/clone', method: 'POST', body: { name: 'Scheme C' } }]));
+  });
+
+  it('when a scheme is renamed to a blank name, then the name is said to be required and nothing is sent', async () => {
+    const calls = mockFetch([scheme()]);
+    renderAs('engineer');
+    const row = (await screen.findByRole('link', { name: 'Scheme A — beams at about 10 ft' })).closest('tr')!;
+    await userEvent.click(within(row).getByRole('button', { name: 'Rename' }));
+    const field = screen.getByLabelText('Scheme name');
+    await userEvent.clear(field);
+    await userEvent.type(field, '   ');
+    await userEvent.click(screen.getByRole('button', { name: 'Save name' }));
+    expect(screen.getByRole('alert')).toHaveTextContent('A scheme needs a name');
+    expect(field).toHaveAttribute('aria-invalid', 'true');
+    expect(screen.getByLabelText('Scheme name')).toBeInTheDocument();
+    expect(calls.filter((c) => c.method !== 'GET')).toEqual([]);
+  });
 });
