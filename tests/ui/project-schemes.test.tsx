@@ -127,4 +127,26 @@ describe('project schemes page', () => {
     expect(screen.getByLabelText('Scheme name')).toBeInTheDocument();
     expect(calls.filter((c) => c.method !== 'GET')).toEqual([]);
   });
+
+  it('when the revisions are opened, then each shows the summary of what it changed', async () => {
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async (url: string) => {
+        if (url.endsWith('/revisions')) {
+          return jsonResponse(200, {
+            revisions: [
+              { revision: 2, userId: 'u-1', userName: 'Tobias Renfrew', createdAt: '2026-11-03T10:00:00.000Z', note: null, summary: '2 beams added, 1 size locked (2B1)', current: true },
+              { revision: 1, userId: 'u-1', userName: 'Tobias Renfrew', createdAt: '2026-11-02T10:00:00.000Z', note: 'Imported from a plan file', summary: 'First revision: 11 members, 6 columns, 1 level', current: false },
+            ],
+          });
+        }
+        return jsonResponse(200, { schemes: [scheme()] });
+      }),
+    );
+    renderAs('drafter');
+    const row = (await screen.findByRole('link', { name: 'Scheme A — beams at about 10 ft' })).closest('tr')!;
+    await userEvent.click(within(row).getByRole('button', { name: 'Revisions' }));
+    const list = await screen.findByRole('list', { name: 'Revisions of Scheme A — beams at about 10 ft' });
+    expect(within(list).getAllByTestId('revision-summary').map((e) => e.textContent)).toEqual(['2 beams added, 1 size locked (2B1)', 'First revision: 11 members, 6 columns, 1 level']);
+  });
 });
