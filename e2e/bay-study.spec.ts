@@ -56,7 +56,8 @@ test('when an engineer studies a bay and makes the lightest option a scheme, the
   expect(ms).toBeGreaterThanOrEqual(engineMs);
   await expect(timing).toHaveText(new RegExp(`^20 options in ${(ms / 1000).toFixed(2)} s`));
   await expect(results.getByTestId('study-chart').locator('.recharts-bar-rectangle').first()).toBeVisible();
-  await expect(results).toContainText('licensed engineer, who must check them');
+  // The caution once per screen: the page footer carries it (not repeated in the results).
+  await expect(page.getByRole('contentinfo')).toContainText('licensed engineer, who must check them');
 
   const lightest = rows.filter({ has: page.getByText('Lightest', { exact: true }) }).first();
   await expect(lightest).toBeVisible();

@@ -24,7 +24,10 @@ test('when the manager compares the demo schemes and chooses one, then it stays 
   const cheapest = page.getByRole('article').filter({ hasText: 'cheapest' });
   await expect(lightest).toHaveCount(1);
   await expect(cheapest).toHaveCount(1);
-  await expect(page.getByRole('note')).toContainText('licensed engineer, who must check them');
+  // The caution once per screen, in the page footer; the note keeps the cost estimate's own words.
+  await expect(page.getByRole('contentinfo')).toContainText('licensed engineer, who must check them');
+  await expect(page.getByRole('note')).toContainText('Costs are estimates from unit prices');
+  await expect(page.getByText('licensed engineer, who must check them')).toHaveCount(1);
   await expect(page.locator('.recharts-bar-rectangle').first()).toBeVisible();
 
   await expect(cardB.getByTestId('scheme-status')).toHaveText('In review');

@@ -6,7 +6,8 @@ import { EXIT_DESIGN_FAILS, EXIT_OK, errorOutcome, readJsonArgument, type Comman
 
 /**
  * `calc study <file.json | ->`: framing options for a region (calc-interface.md, "calc study").
- * Input `{ plan, region, spacing_ft | beamCount, directions?, depthLimits_in?, Fy_ksi?, unitPrices? }`.
+ * Input `{ plan, region, spacing_ft | beamCount, directions?, depthLimits_in?, Fy_ksi?, composite?, unitPrices? }`
+ * (`composite`: [true, false] tries composite and bare steel framing, like both directions).
  * Exit 0 when at least one option passes; 1 when none does; 2 on bad input (a bad range, too
  * many options, a region the plan does not have), naming the field.
  */

@@ -21,7 +21,7 @@ export function calcBookRoutes(ctx: AppContext): Router {
     const { filename, pdf, caution } = await getCalcBookPdf(
       { db: ctx.db, actor: { firmId: auth.firmId, userId: auth.userId } },
       params.id,
-      { members: query.members, levelId: query.level, preparedBy: auth.name },
+      { members: query.members, levelId: query.level, downloadedBy: auth.name },
     );
     res.setHeader('Content-Disposition', `attachment; filename="${filename}"`);
     res.setHeader('X-Baywright-Caution', cautionHeader(caution));

@@ -147,8 +147,9 @@ export async function makeSchemeFromOption(
   return { scheme, option };
 }
 
-/** "beams y @ 10 ft, d ≤ 18 in, Fy 50" — the option in a scheme name. */
+/** "beams y @ 10 ft, d ≤ 18 in, Fy 50, composite" — the option in a scheme name. */
 export function describeOption(o: StudyOptionResult): string {
   const layout = o.beamCount !== null ? `${o.beamCount} beams ${o.direction}` : `beams ${o.direction} @ ${o.spacing_ft} ft`;
-  return [layout, o.depthLimit_in !== null ? `d ≤ ${o.depthLimit_in} in` : null, `Fy ${o.Fy_ksi}`].filter(Boolean).join(', ');
+  const composite = o.composite === true ? 'composite' : o.composite === false ? 'bare steel' : null;
+  return [layout, o.depthLimit_in !== null ? `d ≤ ${o.depthLimit_in} in` : null, `Fy ${o.Fy_ksi}`, composite].filter(Boolean).join(', ');
 }

@@ -11,23 +11,40 @@ import { fileSlug } from './schemes.service';
 export interface CalcBookOptions {
   members: CalcBookMembers;
   levelId?: string;
-  /** The signed-in person, for "prepared by". */
-  preparedBy: string;
+  /** The signed-in person downloading the book (printed as "Downloaded by", apart from "Prepared by"). */
+  downloadedBy: string;
   /** Issue date; today when absent. */
   date?: Date;
+}
+
+/**
+ * The scheme's engineer for "Prepared by": the person who started the scheme, else the last
+ * to save it. Projects keep no engineer-of-record field yet, so the book names this person
+ * as the scheme's engineer, never as the engineer of record.
+ */
+async function schemeEngineer(ctx: SchemeServiceContext, schemeId: string): Promise<string> {
+  const row = await ctx.db.models.Scheme.findByPk(schemeId);
+  const ids = [row?.getDataValue('createdBy'), row?.getDataValue('updatedBy')].filter((v): v is string => typeof v === 'string');
+  for (const id of ids) {
+    const user = await ctx.db.models.User.findByPk(id);
+    if (user) return `${user.getDataValue('name')} (the scheme’s engineer)`;
+  }
+  return 'not recorded (the scheme has no engineer on record)';
 }
 
 export async function getCalcBook(
   ctx: SchemeServiceContext,
   schemeId: string,
   options: CalcBookOptions,
-): Promise<{ scheme: { id: string; name: string; revision: number }; book: CalcBook }> {
+): Promise<{ scheme: { id: string; name: string; revision: number }; book: CalcBook; preparedBy: string }> {
   const { scheme, plan, design } = await loadSchemeDrafting(ctx, schemeId);
   if (options.levelId !== undefined && !plan.levels.some((l) => l.id === options.levelId)) {
     throw new AppError(404, 'not_found', `Level "${options.levelId}" is not a level of this scheme.`);
   }
   const project = await ctx.db.models.Project.findByPk(scheme.projectId);
   const p = project?.get({ plain: true });
+  const date = options.date ?? new Date();
+  const preparedBy = await schemeEngineer(ctx, schemeId);
   const book = buildCalcBook({
     plan,
     design,
@@ -35,11 +52,12 @@ export async function getCalcBook(
     scheme: { name: scheme.name, revision: scheme.revision },
     designedRevision: design.revision,
     designedAt: design.designedAt,
-    date: (options.date ?? new Date()).toISOString().slice(0, 10),
-    preparedBy: options.preparedBy,
+    date: date.toISOString().slice(0, 10),
+    preparedBy,
+    downloadedBy: { name: options.downloadedBy, at: date.toISOString() },
     options: { members: options.members, levelId: options.levelId },
   });
-  return { scheme: { id: scheme.id, name: scheme.name, revision: scheme.revision }, book };
+  return { scheme: { id: scheme.id, name: scheme.name, revision: scheme.revision }, book, preparedBy };
 }
 
 export async function getCalcBookPdf(
@@ -47,9 +65,9 @@ export async function getCalcBookPdf(
   schemeId: string,
   options: CalcBookOptions,
 ): Promise<{ filename: string; pdf: Buffer; caution: string }> {
-  const { scheme, book } = await getCalcBook(ctx, schemeId, options);
+  const { scheme, book, preparedBy } = await getCalcBook(ctx, schemeId, options);
   const levelPart = options.levelId ? `-${fileSlug(options.levelId)}` : '';
   const membersPart = options.members === 'all' ? '-all' : '';
-  const pdf = await renderCalcBookPdf(book, { author: options.preparedBy });
+  const pdf = await renderCalcBookPdf(book, { author: preparedBy });
   return { filename: `${fileSlug(scheme.name)}-calc-book${levelPart}${membersPart}-r${scheme.revision}.pdf`, pdf, caution: book.caution };
 }

@@ -1,4 +1,5 @@
 import type { WhereOptions } from 'sequelize';
+import { summarizeRevision } from '../../shared/drafting/revision-summary.drafting';
 import { buildFramingTopology, deckOverlapProblems } from '../../shared/engine/index';
 import {
   DEFAULT_COMPOSITE_SETTINGS,
@@ -430,6 +431,8 @@ export interface RevisionEntry {
   userName: string | null;
   createdAt: string;
   note: string | null;
+  /** What this revision changed against the one before it, in marks and grid words (null when the one before is gone). */
+  summary: string | null;
   current: boolean;
 }
 
@@ -438,13 +441,22 @@ export async function listRevisions(ctx: SchemeServiceContext, schemeId: string)
   const current = scheme.getDataValue('revision');
   const rows = await ctx.db.models.PlanRevision.findAll({
     where: { schemeId },
-    attributes: ['revision', 'userId', 'createdAt', 'note'],
+    attributes: ['revision', 'userId', 'createdAt', 'note', 'plan'],
     order: [['revision', 'DESC']],
   });
   const people = await peopleByIds(ctx, rows.map((r) => r.getDataValue('userId')));
-  return rows.map((r) => {
+  const planOf = (i: number): Record<string, unknown> | null => {
+    if (i >= rows.length) return null;
+    const p = rows[i].getDataValue('plan') as unknown;
+    return (typeof p === 'string' ? JSON.parse(p) : p) as Record<string, unknown>;
+  };
+  return rows.map((r, i) => {
     const userId = r.getDataValue('userId');
+    // What this revision changed against the one before it (the next row, revisions run newest first).
+    const before = i + 1 < rows.length && rows[i + 1].getDataValue('revision') === r.getDataValue('revision') - 1 ? planOf(i + 1) : null;
+    const summary = before === null && r.getDataValue('revision') !== 1 ? null : summarizeRevision(before, planOf(i)!);
     return {
+      summary,
       revision: r.getDataValue('revision'),
       userId,
       userName: userId ? (people.get(userId)?.name ?? null) : null,

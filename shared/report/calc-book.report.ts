@@ -55,7 +55,10 @@ export interface CalcBookInput {
   designedAt?: string;
   /** Issue date, YYYY-MM-DD. */
   date: string;
+  /** The scheme's engineer (who prepared the design), not whoever downloads the book. */
   preparedBy: string;
+  /** Who downloaded this copy and when (ISO time), printed apart from "Prepared by". */
+  downloadedBy?: { name: string; at: string };
   options?: CalcBookOptions;
 }
 
@@ -406,14 +409,15 @@ export function buildCalcBook(input: CalcBookInput): CalcBook {
           ...(input.designedAt ? ([['Designed', input.designedAt.slice(0, 16).replace('T', ' ') + ' UTC']] as [string, CalcCell][]) : []),
           ['Date', input.date],
           ['Prepared by', input.preparedBy],
+          ...(input.downloadedBy ? ([['Downloaded by', `${input.downloadedBy.name}, ${input.downloadedBy.at.slice(0, 16).replace('T', ' ')} UTC`]] as [string, CalcCell][]) : []),
           ['Design method', basis.method === 'LRFD' ? 'LRFD (load and resistance factor design)' : 'ASD (allowable strength design)'],
           ['Levels', levels.map((l) => l.name).join(', ') || '—'],
           ['Members', `${members.length} (${new Set(members.map((m) => m.mark)).size} marks), ${failing} failing`],
           ['Members printed', membersOption === 'all' ? 'every member' : 'one per mark (the one that works hardest), plus every member that needs attention'],
         ],
       },
+      // Once on the cover (and in every page footer); the engine's own notice says the same, so it is not repeated.
       { type: 'caution', text: CALC_BOOK_CAUTION },
-      { type: 'paragraph', tone: 'soft', text: `Engine notice: ${design.caution}` },
     ],
   });
 

@@ -45,6 +45,11 @@ export interface StudySpec {
   depthLimits_in: (number | null)[];
   /** Steel yield stress tried, ksi (the design basis Fy; null = the plan's own). */
   Fy_ksi: (number | null)[];
+  /**
+   * Composite design of the region's framing tried (true = composite, false = bare steel,
+   * null = as the plan has it). Absent in studies stored before the option existed: [null].
+   */
+  composite?: (boolean | null)[];
   unitPrices: StudyUnitPrices | null;
 }
 
@@ -62,6 +67,7 @@ const requestSchema = z.object({
   directions: z.array(z.enum(['x', 'y'])).optional(),
   depthLimits_in: z.array(z.number().nullable()).optional(),
   Fy_ksi: z.array(z.number().nullable()).optional(),
+  composite: z.array(z.boolean({ error: 'true (composite), false (bare steel) or null (as the plan has it)' }).nullable()).optional(),
   unitPrices: z.object({ steel_usd_per_ton: z.number(), connection_usd_each: z.number() }).nullable().optional(),
 });
 
@@ -147,6 +153,9 @@ export function parseStudySpec(json: unknown): { spec: StudySpec | null; problem
     if (f !== null && !(Number.isFinite(f) && f >= 36 && f <= 70)) problems.push(`Fy_ksi.${i}: must be from 36 to 70 ksi (got ${f})`);
   });
 
+  const composite = [...new Set(v.composite ?? [null])];
+  if (composite.length === 0) problems.push('composite: give true (composite), false (bare steel) or both, or null for the plan\'s own');
+
   const prices = v.unitPrices ?? null;
   if (prices) {
     if (!(prices.steel_usd_per_ton >= 0)) problems.push('unitPrices.steel_usd_per_ton: must be 0 or more');
@@ -154,11 +163,11 @@ export function parseStudySpec(json: unknown): { spec: StudySpec | null; problem
   }
 
   const layouts = (spacings ?? counts ?? []).length;
-  const total = layouts * directions.length * depthLimits.length * grades.length;
+  const total = layouts * directions.length * depthLimits.length * grades.length * composite.length;
   if (problems.length === 0 && total > MAX_STUDY_OPTIONS) {
     const field = v.spacing_ft ? 'spacing_ft' : 'beamCount';
     problems.push(
-      `${field}: ${layouts} ${v.spacing_ft ? 'spacings' : 'counts'} × ${directions.length} directions × ${depthLimits.length} depth limits × ${grades.length} grades = ${total} options; at most ${MAX_STUDY_OPTIONS} per study (use a larger step or fewer choices)`,
+      `${field}: ${layouts} ${v.spacing_ft ? 'spacings' : 'counts'} × ${directions.length} directions × ${depthLimits.length} depth limits × ${grades.length} grades${composite.length > 1 ? ` × ${composite.length} composite choices` : ''} = ${total} options; at most ${MAX_STUDY_OPTIONS} per study (use a larger step or fewer choices)`,
     );
   }
   if (problems.length > 0) return { spec: null, problems };
@@ -170,6 +179,7 @@ export function parseStudySpec(json: unknown): { spec: StudySpec | null; problem
       directions,
       depthLimits_in: depthLimits,
       Fy_ksi: grades,
+      composite,
       unitPrices: prices,
     },
     problems: [],

@@ -1,5 +1,6 @@
 import { Navigate, Outlet, useLocation } from 'react-router-dom';
 import { Button } from '../components/ui/button.ui';
+import { CautionInFooter } from '../components/ui/engineer-caution.ui';
 import { Loading } from '../components/ui/loading.ui';
 import { paths } from '../config/paths';
 import { useSession } from '../features/auth/api/get-session.api';
@@ -28,7 +29,9 @@ export function AppShellLayout() {
     return <Navigate to={paths.signIn.href(location.pathname + location.search)} replace />;
   }
 
+  // The footer carries the caution: a screen's own would repeat it (once per screen is enough).
   return (
+    <CautionInFooter>
     <div className="flex min-h-dvh flex-col">
       <AppHeader session={session.data} />
       {/* A scheme open on the Plan keeps the page's top margin small: the editor fills the window. */}
@@ -37,6 +40,7 @@ export function AppShellLayout() {
       </main>
       <AppFooter />
     </div>
+    </CautionInFooter>
   );
 }
 

@@ -96,4 +96,36 @@ describe('bay studies', () => {
     expect(unknown.status).toBe(409);
     expect(unknown.body.error.fields).toEqual({ revision: 'the scheme is at revision 2' });
   });
+
+  it('when a study tries composite and bare steel on a slab plan, then the composite option is lighter, a bad value names composite.0, and a scheme made from it is composite in the bay', async () => {
+    const { schemeId, projectId } = await makeScheme(t);
+    const plan = (await t.agents.engineer.get(`/api/schemes/${schemeId}`)).body.scheme.plan;
+    // An invented slab build-up of our own over every deck (calc-interface.md "Additions" field names).
+    const slab = { ribHeight_in: 3, toppingThickness_in: 3.25, ribAvgWidth_in: 6, ribSpacing_in: 12, concreteWeight_pcf: 115, fc_ksi: 3, deckWeight_psf: 2 };
+    const withSlab = { ...plan, decks: plan.decks.map((d: Record<string, unknown>) => ({ ...d, slab })) };
+    expect((await t.agents.engineer.put(`/api/schemes/${schemeId}/plan`).send({ revision: 1, plan: withSlab })).status).toBe(200);
+
+    const bad = await t.agents.engineer.post(`/api/schemes/${schemeId}/studies`).send({ ...WEST_BAY_STUDY, composite: ['yes'] });
+    expect(bad.status).toBe(422);
+    expect(Object.keys(bad.body.error.fields)).toEqual(['composite.0']);
+
+    const res = await t.agents.engineer.post(`/api/schemes/${schemeId}/studies`).send({ ...WEST_BAY_STUDY, spacing_ft: { from: 10, to: 10, step: 1 }, composite: [true, false] });
+    expect(res.status).toBe(201);
+    const [c, b] = res.body.study.result.options;
+    expect([c.id, c.composite, b.id, b.composite]).toEqual(['y-s10-dany-f50-c', true, 'y-s10-dany-f50-b', false]);
+    // AISC 360-16 I3.2a: composite flexural strength exceeds the bare steel's (common practice: lighter framing).
+    expect(c.scheme.steelWeight_lb).toBeLessThan(b.scheme.steelWeight_lb);
+    expect(c.lightest).toBe(true);
+
+    const made = await t.agents.engineer.post(`/api/schemes/${schemeId}/studies/${res.body.study.id}/schemes`).send({ optionId: c.id });
+    expect(made.status).toBe(201);
+    expect(made.body.scheme.name).toBe('Fixture scheme – beams y @ 10 ft, Fy 50, composite');
+    const madePlan = (await t.agents.engineer.get(`/api/schemes/${made.body.scheme.id}`)).body.scheme.plan;
+    const west = madePlan.members.filter((m: { start: number[]; end: number[] }) => Math.max(m.start[0], m.end[0]) <= 30);
+    expect(west.length).toBeGreaterThan(0);
+    expect(west.every((m: { composite?: boolean }) => m.composite === true)).toBe(true);
+    const cmp = await t.agents.manager.get(`/api/projects/${projectId}/comparison`);
+    const row = cmp.body.schemes.find((s: { id: string }) => s.id === made.body.scheme.id);
+    expect(row.totals.steelWeight_lb).toBeCloseTo(c.scheme.steelWeight_lb, 9);
+  });
 });

@@ -48,9 +48,9 @@ describe('GET /api/schemes/:id/calc-book.pdf', () => {
     const marks = new Set((design.body.members as { mark: string }[]).map((m) => m.mark));
     expect(marks.size).toBeGreaterThan(3);
     for (const mark of marks) expect(text).toContain(mark);
-    // Prepared by: the signed-in drafter.
-    expect(text).toContain('Priya Calloway');
-  });
+    // Downloaded by: the signed-in drafter (Prepared by names the scheme's engineer).
+    expect(text).toContain('Downloaded by Priya Calloway');
+  }, 90_000);
 
   it('when a manager downloads a fixture scheme with members=all, then it has more pages than the distinct book and every member id', async () => {
     const { schemeId } = await makeScheme(t, { designed: true });
@@ -89,5 +89,24 @@ describe('GET /api/schemes/:id/calc-book.pdf', () => {
     const level = await t.agents.drafter.get(`/api/schemes/${schemeId}/calc-book.pdf?level=L9`);
     expect(level.status).toBe(404);
     expect(level.body.error.message).toBe('Level "L9" is not a level of this scheme.');
+  });
+
+  it('when a drafter downloads the calc book of a scheme an engineer started, then "Prepared by" names the scheme’s engineer and "Downloaded by" the drafter and the time, apart', async () => {
+    const { schemeId } = await makeScheme(t, { designed: true });
+    const engineer = await t.ctx.db.models.User.findByPk(t.seed.userIds.engineer!);
+    const engineerName = engineer!.getDataValue('name');
+    const before = new Date();
+    const res = await t.agents.drafter.get(`/api/schemes/${schemeId}/calc-book.pdf`).buffer(true).parse(binary);
+    expect(res.status).toBe(200);
+    const cover = flat((await pdfPages(res.body as Buffer))[0]);
+    expect(cover).toContain(`Prepared by ${engineerName} (the scheme’s engineer)`);
+    expect(cover).not.toMatch(/Prepared by Priya Calloway/);
+    const m = /Downloaded by Priya Calloway, (\d{4}-\d\d-\d\d \d\d:\d\d) UTC/.exec(cover);
+    expect(m).not.toBeNull();
+    const at = new Date(`${m![1].replace(' ', 'T')}:00Z`).getTime();
+    expect(at).toBeGreaterThanOrEqual(Math.floor(before.getTime() / 60000) * 60000);
+    expect(at).toBeLessThanOrEqual(Date.now());
+    // The caution once on the cover (plus the page footer), not a second engine notice beside it.
+    expect(cover).not.toContain('Engine notice');
   });
 });

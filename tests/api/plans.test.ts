@@ -287,6 +287,20 @@ describe('revisions', () => {
     expect(Number.isNaN(Date.parse(res.body.revisions[0].createdAt))).toBe(false);
   });
 
+  it('when a size is locked and a beam removed, then the revisions list says what each revision changed, in words without ids', async () => {
+    const { schemeId } = await makeScheme(t);
+    const saved = (await t.agents.engineer.get(`/api/schemes/${schemeId}`)).body.scheme.plan;
+    const edited = structuredClone(saved) as { members: { id: string; shape: string | null }[] };
+    edited.members.find((m) => m.id === 'b2')!.shape = 'W16X26';
+    edited.members = edited.members.filter((m) => m.id !== 'b6');
+    await t.agents.engineer.put(`/api/schemes/${schemeId}/plan`).send({ revision: 1, plan: edited }).expect(200);
+    const res = await t.agents.manager.get(`/api/schemes/${schemeId}/revisions`);
+    const [r2, r1] = res.body.revisions as { revision: number; summary: string }[];
+    expect(r1.summary).toBe('First revision: 11 members, 6 columns, 1 level');
+    expect(r2.summary).toMatch(/^1 beam removed( \(\w+\))?, 1 size locked( \(\w+\))?$/);
+    expect(r2.summary).not.toMatch(/\bb2\b|\bb6\b/);
+  });
+
   it('when an old revision is restored, then a new revision holds its plan and the one in between is kept', async () => {
     const { schemeId } = await makeScheme(t);
     const original = (await t.agents.engineer.get(`/api/schemes/${schemeId}`)).body.scheme.plan;

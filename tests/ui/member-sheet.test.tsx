@@ -114,10 +114,12 @@ describe('MemberSheet, from a real scheme design (two-bay fixture, girder gA12)'
 
   it('when the flexure working is opened, then Lp, Lr, Lb, Cb, Mp and Mn are shown with their equations', async () => {
     renderSheet();
-    const button = screen.getByRole('button', { name: 'Working for Flexure' });
+    const button = screen.getByRole('button', { name: 'Show steps for Flexure' });
     expect(button).toHaveAttribute('aria-expanded', 'false');
+    // "Working" is the name of a ratio band; no control of the checks table uses it.
+    expect(screen.queryAllByRole('button', { name: /working/i })).toEqual([]);
     await userEvent.click(button);
-    expect(screen.getByRole('button', { name: 'Hide working for Flexure' })).toHaveAttribute('aria-expanded', 'true');
+    expect(screen.getByRole('button', { name: 'Hide steps for Flexure' })).toHaveAttribute('aria-expanded', 'true');
     const flex = girder.design!.checks.find((c) => c.name === 'flexure')!;
     const working = document.getElementById('working-flexure')!;
     const w = within(working);

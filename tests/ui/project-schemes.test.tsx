@@ -96,4 +96,57 @@ describe('project schemes page', () => {
     expect(calls.find((c) => c.method === 'POST')).toEqual({ url: `/api/projects/${PROJECT}/schemes`, method: 'POST', body: { name: 'Scheme C' } });
     await waitFor(() => expect(calls.filter((c) => c.method === 'GET')).toHaveLength(2));
   });
+
+  it('when an engineer clones a scheme, then the new name is asked (default "… copy") and posted; a blank one is refused with a message', async () => {
+    const calls = mockFetch([scheme()]);
+    renderAs('engineer');
+    const row = (await screen.findByRole('link', { name: 'Scheme A — beams at about 10 ft' })).closest('tr')!;
+    await userEvent.click(within(row).getByRole('button', { name: 'Clone' }));
+    const field = within(row).getByLabelText('Name of the copy');
+    expect(field).toHaveValue('Scheme A — beams at about 10 ft copy');
+    await userEvent.clear(field);
+    await userEvent.click(within(row).getByRole('button', { name: 'Make the copy' }));
+    expect(within(row).getByRole('alert')).toHaveTextContent('A scheme needs a name');
+    expect(calls.filter((c) => c.method === 'POST')).toEqual([]);
+    await userEvent.type(field, 'Scheme C');
+    await userEvent.click(within(row).getByRole('button', { name: 'Make the copy' }));
+    await waitFor(() => expect(calls.filter((c) => c.method === 'POST')).toEqual([{ url: '/api/schemes/s-1/clone', method: 'POST', body: { name: 'Scheme C' } }]));
+  });
+
+  it('when a scheme is renamed to a blank name, then the name is said to be required and nothing is sent', async () => {
+    const calls = mockFetch([scheme()]);
+    renderAs('engineer');
+    const row = (await screen.findByRole('link', { name: 'Scheme A — beams at about 10 ft' })).closest('tr')!;
+    await userEvent.click(within(row).getByRole('button', { name: 'Rename' }));
+    const field = screen.getByLabelText('Scheme name');
+    await userEvent.clear(field);
+    await userEvent.type(field, '   ');
+    await userEvent.click(screen.getByRole('button', { name: 'Save name' }));
+    expect(screen.getByRole('alert')).toHaveTextContent('A scheme needs a name');
+    expect(field).toHaveAttribute('aria-invalid', 'true');
+    expect(screen.getByLabelText('Scheme name')).toBeInTheDocument();
+    expect(calls.filter((c) => c.method !== 'GET')).toEqual([]);
+  });
+
+  it('when the revisions are opened, then each shows the summary of what it changed', async () => {
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async (url: string) => {
+        if (url.endsWith('/revisions')) {
+          return jsonResponse(200, {
+            revisions: [
+              { revision: 2, userId: 'u-1', userName: 'Tobias Renfrew', createdAt: '2026-11-03T10:00:00.000Z', note: null, summary: '2 beams added, 1 size locked (2B1)', current: true },
+              { revision: 1, userId: 'u-1', userName: 'Tobias Renfrew', createdAt: '2026-11-02T10:00:00.000Z', note: 'Imported from a plan file', summary: 'First revision: 11 members, 6 columns, 1 level', current: false },
+            ],
+          });
+        }
+        return jsonResponse(200, { schemes: [scheme()] });
+      }),
+    );
+    renderAs('drafter');
+    const row = (await screen.findByRole('link', { name: 'Scheme A — beams at about 10 ft' })).closest('tr')!;
+    await userEvent.click(within(row).getByRole('button', { name: 'Revisions' }));
+    const list = await screen.findByRole('list', { name: 'Revisions of Scheme A — beams at about 10 ft' });
+    expect(within(list).getAllByTestId('revision-summary').map((e) => e.textContent)).toEqual(['2 beams added, 1 size locked (2B1)', 'First revision: 11 members, 6 columns, 1 level']);
+  });
 });

@@ -1,9 +1,12 @@
-import { screen, within } from '@testing-library/react';
+import { render, screen, within } from '@testing-library/react';
+import { QueryClientProvider } from '@tanstack/react-query';
+import { RouterProvider, createMemoryRouter } from 'react-router-dom';
 import { describe, expect, it, vi } from 'vitest';
 import { AppHeader, navItemsFor } from '../../src/app/app-header.component';
 import { AppShellLayout } from '../../src/app/app-shell.layout';
+import { EngineerCaution } from '../../src/components/ui/engineer-caution.ui';
 import type { Role } from '../../src/lib/permissions';
-import { jsonResponse, renderWithProviders, testSession } from '../../src/testing/test-utils';
+import { jsonResponse, renderWithProviders, testQueryClient, testSession } from '../../src/testing/test-utils';
 
 function mainNavLinks(role: Role): string[] {
   renderWithProviders(<AppHeader session={testSession(role)} />, { path: '/projects' });
@@ -52,6 +55,29 @@ describe('role-aware navigation', () => {
     renderWithProviders(<AppShellLayout />, { path: '/projects', session: testSession('engineer') });
     expect(screen.getByRole('contentinfo')).toHaveTextContent(/licensed engineer, who must check them/);
     expect(screen.getByRole('contentinfo')).toHaveTextContent(/local building code and the engineer of record govern/);
+  });
+
+  it('when a screen inside the shell has its own caution (results, sheets, panels), then the caution shows once, in the footer', () => {
+    const screenWithItsOwn = (
+      <section aria-label="Results">
+        <EngineerCaution />
+        <EngineerCaution />
+      </section>
+    );
+    const router = createMemoryRouter([{ path: '/', element: <AppShellLayout />, children: [{ path: 'projects', element: screenWithItsOwn }] }], { initialEntries: ['/projects'] });
+    render(
+      <QueryClientProvider client={testQueryClient(testSession('engineer'))}>
+        <RouterProvider router={router} />
+      </QueryClientProvider>,
+    );
+    expect(screen.getByRole('region', { name: 'Results' })).toBeInTheDocument();
+    expect(screen.getAllByText(/licensed engineer, who must check them/)).toHaveLength(1);
+    expect(within(screen.getByRole('contentinfo')).getByText(/licensed engineer, who must check them/)).toBeInTheDocument();
+  });
+
+  it('when a screen is shown on its own (no frame footer), then it keeps its own caution', () => {
+    renderWithProviders(<EngineerCaution />);
+    expect(screen.getAllByText(/licensed engineer, who must check them/)).toHaveLength(1);
   });
 });
 

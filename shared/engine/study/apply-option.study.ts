@@ -7,6 +7,9 @@
  *
  * Conservative readings (also in the report text):
  * - the engine designs with one Fy per scheme, so a grade option applies to the whole scheme;
+ * - a composite option sets members[].composite on the region's framing only (infill beams and
+ *   the bay edges); where no deck with a slab build-up lies over a member, the engine designs it
+ *   bare steel and says so, so "composite" is never assumed without a slab;
  * - beams already inside a bay (either way) are replaced by the option's beams; members that
  *   framed into them lose that support and are reported by the design as problems.
  */
@@ -24,6 +27,8 @@ export interface StudyOptionSpec {
   beamCount: number | null;
   depthLimit_in: number | null;
   Fy_ksi: number | null;
+  /** Composite (true) or bare steel (false) for the region's framing; null = as the plan has it. */
+  composite: boolean | null;
 }
 
 export type AppliedOption =
@@ -135,6 +140,9 @@ export function applyStudyOption(plan: Plan, levelId: string, bays: readonly Bay
   }
   // 4. The depth limit on the region's unlocked framing (infill beams and the bay edges).
   if (option.depthLimit_in !== null) p = { ...p, members: p.members.map((m) => (regionIds.has(m.id) ? withDepthLimit(m, option.depthLimit_in) : m)) };
+  // 5. Composite on or off for the region's framing (locked sizes too: composite is a design choice, not a size).
+  const composite = option.composite ?? null;
+  if (composite !== null) p = { ...p, members: p.members.map((m) => (regionIds.has(m.id) ? { ...m, composite } : m)) };
   return { ok: true, plan: p, beams, beamSpacing_ft };
 }
 

@@ -45,6 +45,8 @@ export interface StudyOptionResult extends StudyFigures {
   beamCount: number | null;
   depthLimit_in: number | null;
   Fy_ksi: number;
+  /** Composite (true) or bare steel (false) asked for the region's framing; null = as the plan has it. */
+  composite: boolean | null;
   /** Infill beams laid out in the region, and their widest actual spacing, ft. */
   beams: number | null;
   beamSpacing_ft: number | null;
@@ -85,7 +87,7 @@ export const STUDY_BASIS =
   'ASCE 7-16 live load reduction, AISC 360-16 sizing). Region figures cover the framing inside the bays and on their ' +
   'edges, per ft² of gross bay area; scheme figures are the Tonnage of the whole scheme. Lightest and cheapest compare ' +
   'the whole scheme, among options that pass. A steel grade option applies to the whole scheme (the design basis has ' +
-  'one Fy). Cost is steel tons × price per ton + connections × price each, two connections per member.';
+  'one Fy); a composite option applies to the region’s framing, and a member with no slab build-up over it stays bare steel. Cost is steel tons × price per ton + connections × price each, two connections per member.';
 
 export interface StudyHooks {
   /** Called after each option with how many are done. */
@@ -97,15 +99,19 @@ export interface StudyHooks {
   base?: SchemeResult;
 }
 
-/** The options of the request in their fixed order: direction, then spacing/count, depth, grade. */
+/** The options of the request in their fixed order: direction, then spacing/count, depth, grade, composite. */
 export function studyOptionSpecs(spec: StudySpec): StudyOptionSpec[] {
   const out: StudyOptionSpec[] = [];
   const layouts = spec.spacings_ft ?? spec.beamCounts ?? [];
+  // Studies stored before the composite option have none: the plan's own.
+  const composites = spec.composite ?? [null];
   for (const direction of spec.directions) {
     for (const v of layouts) {
       for (const depthLimit_in of spec.depthLimits_in) {
         for (const Fy_ksi of spec.Fy_ksi) {
-          out.push({ direction, spacing_ft: spec.spacings_ft ? v : null, beamCount: spec.beamCounts ? v : null, depthLimit_in, Fy_ksi });
+          for (const composite of composites) {
+            out.push({ direction, spacing_ft: spec.spacings_ft ? v : null, beamCount: spec.beamCounts ? v : null, depthLimit_in, Fy_ksi, composite });
+          }
         }
       }
     }
@@ -113,9 +119,11 @@ export function studyOptionSpecs(spec: StudySpec): StudyOptionSpec[] {
   return out;
 }
 
+/** "y-s10-dany-f50", with "-c" (composite) or "-b" (bare steel) when the option sets it. */
 function optionId(o: StudyOptionSpec, Fy: number): string {
   const layout = o.beamCount !== null ? `n${o.beamCount}` : `s${o.spacing_ft}`;
-  return `${o.direction}-${layout}-d${o.depthLimit_in ?? 'any'}-f${Fy}`;
+  const composite = o.composite === true ? '-c' : o.composite === false ? '-b' : '';
+  return `${o.direction}-${layout}-d${o.depthLimit_in ?? 'any'}-f${Fy}${composite}`;
 }
 
 function figuresOf(t: TonnageFigures, prices: StudyUnitPrices | null): StudyFigures {
@@ -156,7 +164,7 @@ export function runStudy(plan: Plan, spec: StudySpec, hooks: StudyHooks = {}): S
     const Fy = o.Fy_ksi ?? plan.designBasis.Fy_ksi;
     const common = {
       index, id: optionId(o, Fy), direction: o.direction, spacing_ft: o.spacing_ft, beamCount: o.beamCount,
-      depthLimit_in: o.depthLimit_in, Fy_ksi: Fy, lightest: false, cheapest: false, shallowest: false,
+      depthLimit_in: o.depthLimit_in, Fy_ksi: Fy, composite: o.composite, lightest: false, cheapest: false, shallowest: false,
     };
     const applied = applyStudyOption(plan, level, bays, o);
     if (!applied.ok) {

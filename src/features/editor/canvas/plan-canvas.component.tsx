@@ -275,6 +275,17 @@ function ScaleIndicator({ store, system }: { store: EditorStore; system: UnitSys
 function useTooltip(store: EditorStore, design: LiveDesign, containerRef: React.RefObject<HTMLDivElement | null>) {
   const [content, setContent] = useState<{ x: number; y: number; text: string } | null>(null);
   useSyncExternalStore(design.subscribe, design.getSnapshot);
+  // The text names what was under the pointer when it last moved: an edit (the plan changes
+  // under a still pointer: delete, undo, a typed size) or another level shown makes it stale,
+  // so it goes until the pointer moves again.
+  useEffect(() => {
+    let last = store.getState();
+    return store.subscribe((s) => {
+      const prev = last;
+      last = s;
+      if (s.plan !== prev.plan || s.levelId !== prev.levelId) setContent(null);
+    });
+  }, [store]);
   return {
     content,
     hide: () => setContent(null),

@@ -127,7 +127,7 @@ export function MemberChecksTable({ design, units }: ChecksProps) {
           <th className="label-caps py-1.5 pr-3 text-right font-normal">Capacity</th>
           <th className="label-caps py-1.5 pr-3 text-right font-normal">Ratio</th>
           <th className="py-1.5">
-            <span className="sr-only">Working</span>
+            <span className="sr-only">Steps</span>
           </th>
         </tr>
       </thead>
@@ -170,11 +170,12 @@ export function MemberChecksTable({ design, units }: ChecksProps) {
                     type="button"
                     aria-expanded={isOpen}
                     aria-controls={workingId}
-                    aria-label={`${isOpen ? 'Hide working' : 'Working'} for ${CHECK_TITLE[c.name]}`}
+                    // "Working" is a ratio band's name (src/lib/utilisation.ts): the link says "steps".
+                    aria-label={`${isOpen ? 'Hide steps' : 'Show steps'} for ${CHECK_TITLE[c.name]}`}
                     className="rounded-[3px] px-1.5 py-0.5 text-xs text-ink-soft underline decoration-dotted hover:text-ink"
                     onClick={() => setOpen((o) => ({ ...o, [c.name]: !isOpen }))}
                   >
-                    {isOpen ? 'Hide working' : 'Working'}
+                    {isOpen ? 'Hide steps' : 'Show steps'}
                   </button>
                 </td>
               </tr>

@@ -8,6 +8,8 @@ const revisionSchema = z.object({
   userName: z.string().nullable(),
   createdAt: z.string(),
   note: z.string().nullable(),
+  /** What the revision changed, in marks and grid words. */
+  summary: z.string().nullable().default(null),
   current: z.boolean(),
 });
 export type SchemeRevision = z.output<typeof revisionSchema>;

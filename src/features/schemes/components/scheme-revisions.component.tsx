@@ -20,6 +20,7 @@ export function SchemeRevisions({ scheme, mayWrite }: { scheme: SchemeSummary; m
             <span className="figures w-10 font-mono">r{r.revision}</span>
             <span className="flex-1">
               {r.userName ?? 'Former member'} · {timeFormat.format(new Date(r.createdAt))}
+              {r.summary ? <span className="block text-ink" data-testid="revision-summary">{r.summary}</span> : null}
               {r.note ? <span className="block text-ink-soft">{r.note}</span> : null}
             </span>
             {r.current ? (

@@ -46,16 +46,22 @@ function DesignCell({ scheme }: { scheme: SchemeSummary }) {
   );
 }
 
+const NAME_REQUIRED = 'A scheme needs a name: type one, or Cancel to keep the old one.';
+
 function RenameForm({ scheme, onDone }: { scheme: SchemeSummary; onDone: () => void }) {
   const update = useUpdateScheme(scheme.projectId);
   const [name, setName] = useState(scheme.name);
+  const [blank, setBlank] = useState(false);
   return (
     <form
       className="flex flex-wrap items-center gap-2"
       onSubmit={(e) => {
         e.preventDefault();
         const trimmed = name.trim();
-        if (!trimmed || trimmed === scheme.name) return onDone();
+        // A blank name is refused out loud, never dropped silently.
+        setBlank(!trimmed);
+        if (!trimmed) return;
+        if (trimmed === scheme.name) return onDone();
         update.mutate({ schemeId: scheme.id, patch: { name: trimmed } }, { onSuccess: onDone });
       }}
     >
@@ -67,9 +73,12 @@ function RenameForm({ scheme, onDone }: { scheme: SchemeSummary; onDone: () => v
         value={name}
         maxLength={200}
         onChange={(e) => setName(e.target.value)}
+        aria-invalid={blank || undefined}
+        aria-describedby={blank ? `rename-${scheme.id}-e` : undefined}
         className="h-8 min-w-48 rounded-[3px] border border-ink/60 bg-paper px-2 text-sm"
         autoFocus
       />
+      {blank ? <span id={`rename-${scheme.id}-e`} role="alert" className="text-xs text-danger">{NAME_REQUIRED}</span> : null}
       <Button type="submit" variant="secondary" pending={update.isPending} className="h-8">
         Save name
       </Button>
@@ -81,11 +90,53 @@ function RenameForm({ scheme, onDone }: { scheme: SchemeSummary; onDone: () => v
   );
 }
 
-function SchemeActions({ scheme, mayWrite }: { scheme: SchemeSummary; mayWrite: boolean }) {
+/** Clone asks for the new scheme's name, "<name> copy" unless changed. */
+function CloneForm({ scheme, onDone }: { scheme: SchemeSummary; onDone: () => void }) {
   const clone = useCloneScheme(scheme.projectId);
+  const [name, setName] = useState(`${scheme.name} copy`.slice(0, 200));
+  const [blank, setBlank] = useState(false);
+  const id = `clone-${scheme.id}`;
+  return (
+    <form
+      className="flex flex-wrap items-center justify-end gap-2"
+      aria-label={`Clone ${scheme.name}`}
+      onSubmit={(e) => {
+        e.preventDefault();
+        const trimmed = name.trim();
+        setBlank(!trimmed);
+        if (!trimmed) return;
+        clone.mutate({ schemeId: scheme.id, name: trimmed }, { onSuccess: onDone });
+      }}
+    >
+      <label className="text-xs text-ink-soft" htmlFor={id}>
+        Name of the copy
+      </label>
+      <input
+        id={id}
+        value={name}
+        maxLength={200}
+        onChange={(e) => setName(e.target.value)}
+        aria-invalid={blank || undefined}
+        className="h-8 min-w-48 rounded-[3px] border border-ink/60 bg-paper px-2 text-sm"
+        autoFocus
+      />
+      <Button type="submit" variant="secondary" pending={clone.isPending} className="h-8">
+        Make the copy
+      </Button>
+      <Button variant="quiet" className="h-8" onClick={onDone}>
+        Cancel
+      </Button>
+      {blank ? <span role="alert" className="text-xs text-danger">{NAME_REQUIRED}</span> : null}
+      {clone.isError ? <span className="text-xs text-danger">{clone.error.message}</span> : null}
+    </form>
+  );
+}
+
+function SchemeActions({ scheme, mayWrite }: { scheme: SchemeSummary; mayWrite: boolean }) {
+  const [cloning, setCloning] = useState(false);
   const update = useUpdateScheme(scheme.projectId);
   const remove = useDeleteScheme(scheme.projectId);
-  const error = clone.error ?? update.error ?? remove.error;
+  const error = update.error ?? remove.error;
   return (
     <div className="flex flex-col items-end gap-1">
       <div className="flex flex-wrap justify-end gap-1">
@@ -100,7 +151,7 @@ function SchemeActions({ scheme, mayWrite }: { scheme: SchemeSummary; mayWrite: 
         </a>
         {mayWrite ? (
           <>
-            <Button variant="quiet" className="h-8" pending={clone.isPending} onClick={() => clone.mutate({ schemeId: scheme.id })}>
+            <Button variant="quiet" className="h-8" aria-expanded={cloning} onClick={() => setCloning((c) => !c)}>
               Clone
             </Button>
             <Button
@@ -126,6 +177,7 @@ function SchemeActions({ scheme, mayWrite }: { scheme: SchemeSummary; mayWrite: 
           </>
         ) : null}
       </div>
+      {cloning ? <CloneForm scheme={scheme} onDone={() => setCloning(false)} /> : null}
       {error ? <span className="text-xs text-danger">{error.message}</span> : null}
     </div>
   );

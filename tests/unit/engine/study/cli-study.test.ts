@@ -21,6 +21,8 @@ describe('npm run -s calc -- study (spawned)', () => {
       expect(r.json.options[0], f).toHaveProperty(f);
     }
     expect(r.json.options.filter((o: { lightest: boolean }) => o.lightest).length).toBeGreaterThan(0);
+    // No composite range asked: every option designs the framing as the plan has it.
+    expect(r.json.options.map((o: { composite: unknown }) => o.composite)).toEqual(Array(20).fill(null));
   }, 120000);
 
   it('when the step is 0 and the spacing negative, then exit 2 with the error contract naming both fields', () => {

@@ -6,11 +6,19 @@ import { applyStudyOption, type StudyOptionSpec } from '../../../../shared/engin
 import { runStudy, schemeStudyFigures, studyOptionSpecs } from '../../../../shared/engine/study/run-study.study';
 import { regionBays } from '../../../../shared/engine/study/study-region.study';
 import { parseStudySpec, MAX_STUDY_OPTIONS, type StudySpec } from '../../../../shared/schemas/study.schema';
+import type { Plan } from '../../../../shared/schemas/plan.schema';
 import { columnTonnageRows, computeTonnage } from '../../../../shared/tonnage/tonnage';
 import { polygonAreaFt2 } from '../../../../shared/engine/geometry/polygon.geometry';
 import { splitByRect } from '../../../../shared/engine/geometry/polygon-clip.geometry';
 
 const WEST_BAY: [number, number][] = [[0, 0], [30, 0], [30, 36], [0, 36]];
+
+/** The two-bay fixture (an invented scheme of our own) with a slab build-up on its decks, composite design off. */
+function slabPlan(): Plan {
+  const plan = twoBayPlan();
+  const slab = { ribHeight_in: 3, toppingThickness_in: 3.25, ribAvgWidth_in: 6, ribSpacing_in: 12, concreteWeight_pcf: 115, fc_ksi: 3, deckWeight_psf: 2 };
+  return { ...plan, decks: plan.decks.map((d) => ({ ...d, slab })) };
+}
 const PRICES = { steel_usd_per_ton: 4200, connection_usd_each: 350 }; // invented example prices
 
 function spec(over: Record<string, unknown> = {}): StudySpec {
@@ -45,6 +53,18 @@ describe('bay study request', () => {
     expect(() => runStudy(twoBayPlan(), spec({ region: { level: 'L9', polygon: WEST_BAY } }))).toThrow(/region.level: the plan has no level "L9"/);
   });
 
+  it('when composite is asked both ways, then it doubles the options and a value that is not true/false/null names composite.N', () => {
+    const both = spec({ spacing_ft: { from: 8, to: 10, step: 1 }, composite: [true, false] });
+    expect(both.composite).toEqual([true, false]);
+    expect(studyOptionSpecs(both).map((o) => o.composite)).toEqual([true, false, true, false, true, false, true, false, true, false, true, false]);
+    expect(spec().composite).toEqual([null]);
+    const bad = parseStudySpec({ region: { level: 'L2', polygon: WEST_BAY }, spacing_ft: { from: 6, to: 8, step: 1 }, composite: ['yes'] });
+    expect(bad.spec).toBeNull();
+    expect(bad.problems[0]).toMatch(/^composite\.0: true \(composite\), false \(bare steel\) or null/);
+    const many = parseStudySpec({ region: { level: 'L2', polygon: WEST_BAY }, spacing_ft: { from: 6, to: 15, step: 0.5 }, directions: ['x', 'y'], depthLimits_in: [null, 18], Fy_ksi: [50, 65], composite: [true, false] });
+    expect(many.problems[0]).toMatch(/^spacing_ft: 19 spacings × 2 directions × 2 depth limits × 2 grades × 2 composite choices = 304 options; at most 200/);
+  });
+
   it('when a spacing and a count are both given (or neither), then it asks for one', () => {
     expect(parseStudySpec({ region: { level: 'L2', wholeLevel: true } }).problems[0]).toMatch(/^spacing_ft: give a beam spacing range/);
   });
@@ -55,7 +75,7 @@ describe('bay study layout', () => {
     const plan = twoBayPlan();
     const { bays } = regionBays(plan, { level: 'L2', polygon: WEST_BAY });
     expect(bays).toEqual([{ x0: 0, x1: 30, y0: 0, y1: 36 }]);
-    const r = applyStudyOption(plan, 'L2', bays, { direction: 'x', spacing_ft: 10, beamCount: null, depthLimit_in: 18, Fy_ksi: null });
+    const r = applyStudyOption(plan, 'L2', bays, { direction: 'x', spacing_ft: 10, beamCount: null, depthLimit_in: 18, Fy_ksi: null, composite: null });
     if (!r.ok) throw new Error(r.error);
     // ceil(36 / 10) = 4 divisions of 9 ft: the Infill tool's rule (equal spacing not more than asked).
     expect(r.beams).toBe(3);
@@ -135,22 +155,29 @@ describe('bay study results', () => {
     expect(JSON.parse(JSON.stringify(runStudy(plan, spec(), { base: designScheme(plan) })))).toEqual(JSON.parse(JSON.stringify(result)));
   });
 
-  it('when any option is made a scheme and designed on its own, then its tonnage equals the option’s (property)', () => {
+  it('when any option is made a scheme and designed on its own, then its tonnage equals the option’s (property, composite on, off or as the plan has it)', () => {
+    const slabbed = slabPlan();
     const { bays } = regionBays(plan, { level: 'L2', polygon: WEST_BAY });
     const arb = fc.record({
       direction: fc.constantFrom('x' as const, 'y' as const),
       spacing_ft: fc.integer({ min: 5, max: 16 }),
       depthLimit_in: fc.constantFrom(null, 16, 21, 24),
       Fy_ksi: fc.constantFrom(null, 50, 65),
+      composite: fc.constantFrom(null, true, false),
     });
     fc.assert(
       fc.property(arb, (a) => {
-        const s = spec({ spacing_ft: { from: a.spacing_ft, to: a.spacing_ft, step: 1 }, directions: [a.direction], depthLimits_in: [a.depthLimit_in], Fy_ksi: [a.Fy_ksi] });
-        const [option] = runStudy(plan, s).options;
+        // Composite options on the plan with a slab build-up (without one a member stays bare steel).
+        const p = a.composite === null ? plan : slabbed;
+        const s = spec({ spacing_ft: { from: a.spacing_ft, to: a.spacing_ft, step: 1 }, directions: [a.direction], depthLimits_in: [a.depthLimit_in], Fy_ksi: [a.Fy_ksi], composite: [a.composite] });
+        const [option] = runStudy(p, s).options;
+        expect(option.composite).toBe(a.composite);
         const specOne: StudyOptionSpec = studyOptionSpecs(s)[0];
-        const applied = applyStudyOption(plan, 'L2', bays, specOne);
+        const applied = applyStudyOption(p, 'L2', bays, specOne);
         if (!applied.ok) return;
         const fresh = designScheme(applied.plan);
+        if (a.composite === true) expect(fresh.members.some((m) => (m.studs ?? 0) > 0)).toBe(true);
+        if (a.composite === false) expect(fresh.members.every((m) => (m.studs ?? null) === null)).toBe(true);
         // Beams, girders and the gravity columns by tier, as the Tonnage screen counts them.
         const tonnage = computeTonnage({ ...fresh, members: [...fresh.members, ...columnTonnageRows(fresh as unknown as Record<string, unknown>)] }, applied.plan.levels).totals;
         expect(option.scheme.steelWeight_lb).toBe(tonnage.steelWeight_lb);
@@ -159,7 +186,21 @@ describe('bay study results', () => {
       }),
       { numRuns: 12 },
     );
-  }, 60000);
+  }, 120000);
+
+  it('when the west bay of a slab plan is studied composite and bare, then the composite option is lighter and both pass', () => {
+    const r = runStudy(slabPlan(), spec({ spacing_ft: { from: 10, to: 10, step: 1 }, directions: ['y'], composite: [true, false] }));
+    const [c, b] = r.options;
+    expect([c.id, b.id]).toEqual(['y-s10-dany-f50-c', 'y-s10-dany-f50-b']);
+    expect(c.passes && b.passes).toBe(true);
+    // AISC 360-16 I3.2a: the composite section's plastic moment exceeds the bare steel's, so a lighter
+    // W-shape carries the same bay (common practice: composite floor framing weighs less than bare).
+    expect(c.steelWeight_lb).toBeLessThan(b.steelWeight_lb);
+    expect(c.scheme.steelWeight_lb).toBeLessThan(b.scheme.steelWeight_lb);
+    expect(c.steel_psf).toBeLessThan(b.steel_psf);
+    expect(c.lightest).toBe(true);
+    expect(b.lightest).toBe(false);
+  });
 
   it('when the whole level is studied by beam count, then both bays get the count and the region is the whole deck', () => {
     const r = runStudy(plan, spec({ spacing_ft: undefined, beamCount: { from: 2, to: 3, step: 1 }, region: { level: 'L2', wholeLevel: true }, directions: ['y'] }));
