@@ -204,7 +204,12 @@ export function schemeColumns(plan: Plan, stack: readonly ColumnTakedown[]): { c
       const of = levels.filter((l) => l.tier === t.tier);
       const bottomIndex = levels.indexOf(of[of.length - 1]);
       const length_ft = of.reduce((a, l) => a + l.Lc_ft, 0);
-      return { ...t, toLevel: of[0].level, fromLevel: d!.lengths[bottomIndex].bottomLevel, length_ft, weight_lb: t.weight_plf * length_ft };
+      // Written out in ColumnTierResult's key order (a spread literal was slow on this path).
+      return {
+        tier: t.tier, shape: t.shape, weight_plf: t.weight_plf, locked: t.locked, passes: t.passes, ratio: t.ratio,
+        governingLevel: t.governingLevel, failure: t.failure, lighter: t.lighter,
+        toLevel: of[0].level, fromLevel: d!.lengths[bottomIndex].bottomLevel, length_ft, weight_lb: t.weight_plf * length_ft,
+      };
     });
     for (const l of levels) {
       if (!l.shape) continue;
