@@ -30,7 +30,7 @@ describe('column designs reused by their input', () => {
     // The heavier floor needs at least as much column steel in total, and more somewhere.
     const weight = (p: Plan) => designScheme(p).totals.columnWeight_lb;
     expect(weight(heavy)).toBeGreaterThan(weight(light));
-  });
+  }, 60_000);
 
   it('when a re-design after a load edit is passed the previous result, then its columns equal a full design of the edited plan', () => {
     const base = goldenBuildingPlan();
@@ -41,5 +41,5 @@ describe('column designs reused by their input', () => {
     const incremental = designScheme(edited, { previous: first });
     expect(JSON.stringify(incremental.columns)).toBe(JSON.stringify(designScheme(structuredClone(edited)).columns));
     expect(JSON.stringify(incremental.columns)).not.toBe(JSON.stringify(first.columns));
-  });
+  }, 60_000);
 });
