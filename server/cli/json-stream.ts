@@ -4,7 +4,9 @@
  * to `STREAM_DEPTH` are opened and closed here, anything deeper is stringified whole and
  * re-indented (JSON.stringify escapes newlines inside strings, so every raw newline is layout).
  */
-const STREAM_DEPTH = 3;
+// 2: the document and its top-level lists are walked here; each element of a list (a member, a
+// column) is one JSON.stringify call, which is much faster than walking its fields in script.
+const STREAM_DEPTH = 2;
 /** Pieces are gathered up to this size before one write (fewer, larger writes). */
 const FLUSH_CHARS = 1 << 16;
 

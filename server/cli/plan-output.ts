@@ -15,7 +15,64 @@ function summaryMember(m: SchemeMember): Record<string, unknown> {
   return out;
 }
 
+/**
+ * A member's keys in the order the engine writes them (scheme/design-scheme.scheme.ts), then the
+ * composite fields `calc plan` always adds. The copies below are written out for members with
+ * exactly these keys (a key-by-key copy of 10,000 members was a large part of `calc plan`); any
+ * other member is copied key by key, so a field added to the engine is never dropped here.
+ */
+const ENGINE_KEYS = [
+  'id', 'mark', 'kind', 'level', 'shape', 'span_ft', 'passes', 'governing', 'ratio', 'tributaryWidth_ft', 'tributaryArea_ft2',
+  'reducibleArea_ft2', 'KLL', 'liveReductionFactor', 'Lb_ft', 'Cb', 'Mr_kipft', 'Mc_kipft', 'weight_plf', 'reactions', 'loads',
+  'bracing', 'connections', 'design',
+] as const;
+const WITH_COMPOSITE = [...ENGINE_KEYS, 'studs', 'camber_in', 'percentComposite'] as const;
+const WITH_COMPOSITE_NOTES = [...WITH_COMPOSITE, 'compositeNote', 'designExtras'] as const;
+
+/** Whether the object's own enumerable keys are exactly `keys`, in that order. */
+function hasKeysInOrder(o: object, keys: readonly string[]): boolean {
+  let i = 0;
+  for (const k in o) {
+    if (!Object.prototype.hasOwnProperty.call(o, k)) return false;
+    if (k !== keys[i++]) return false;
+  }
+  return i === keys.length;
+}
+
+/**
+ * The member with studs, camber_in and percentComposite present (null where not composite), the
+ * same value as `{ ...m, studs: m.studs ?? null, camber_in: m.camber_in ?? null, percentComposite: m.percentComposite ?? null }`.
+ */
+export function withCompositeFields(m: SchemeMember): SchemeMember {
+  if (m.studs !== undefined && m.camber_in !== undefined && m.percentComposite !== undefined && 'studs' in m && 'camber_in' in m && 'percentComposite' in m) return m;
+  if (hasKeysInOrder(m, ENGINE_KEYS)) {
+    return {
+      id: m.id, mark: m.mark, kind: m.kind, level: m.level, shape: m.shape, span_ft: m.span_ft, passes: m.passes, governing: m.governing, ratio: m.ratio,
+      tributaryWidth_ft: m.tributaryWidth_ft, tributaryArea_ft2: m.tributaryArea_ft2, reducibleArea_ft2: m.reducibleArea_ft2, KLL: m.KLL,
+      liveReductionFactor: m.liveReductionFactor, Lb_ft: m.Lb_ft, Cb: m.Cb, Mr_kipft: m.Mr_kipft, Mc_kipft: m.Mc_kipft, weight_plf: m.weight_plf,
+      reactions: m.reactions, loads: m.loads, bracing: m.bracing, connections: m.connections, design: m.design,
+      studs: null, camber_in: null, percentComposite: null,
+    };
+  }
+  return { ...m, studs: m.studs ?? null, camber_in: m.camber_in ?? null, percentComposite: m.percentComposite ?? null };
+}
+
 function defaultMember(m: SchemeMember): Record<string, unknown> {
+  const notes = hasKeysInOrder(m, WITH_COMPOSITE_NOTES);
+  if (notes || hasKeysInOrder(m, WITH_COMPOSITE)) {
+    const out: Record<string, unknown> = {
+      id: m.id, mark: m.mark, kind: m.kind, level: m.level, shape: m.shape, span_ft: m.span_ft, passes: m.passes, governing: m.governing, ratio: m.ratio,
+      tributaryWidth_ft: m.tributaryWidth_ft, tributaryArea_ft2: m.tributaryArea_ft2, reducibleArea_ft2: m.reducibleArea_ft2, KLL: m.KLL,
+      liveReductionFactor: m.liveReductionFactor, Lb_ft: m.Lb_ft, Cb: m.Cb, Mr_kipft: m.Mr_kipft, Mc_kipft: m.Mc_kipft, weight_plf: m.weight_plf,
+      reactions: m.reactions, bracing: m.bracing, connections: m.connections,
+      studs: m.studs, camber_in: m.camber_in, percentComposite: m.percentComposite,
+    };
+    if (notes) {
+      out.compositeNote = m.compositeNote;
+      out.designExtras = m.designExtras;
+    }
+    return out;
+  }
   const out: Record<string, unknown> = {};
   for (const k of Object.keys(m)) if (!DETAIL_ONLY.has(k)) out[k] = (m as unknown as Record<string, unknown>)[k];
   return out;

@@ -3,7 +3,7 @@ import { gravityLoadProblems } from '../../shared/schemas/plan-gravity-loads';
 import { columnInputProblems } from '../../shared/schemas/plan-columns';
 import { designScheme } from '../../shared/engine/index';
 import { CliInputError, EXIT_DESIGN_FAILS, EXIT_OK, errorOutcome, readJsonArgument, type CommandOutcome } from './cli-io';
-import { planOutput, type PlanOutputView } from './plan-output';
+import { planOutput, withCompositeFields, type PlanOutputView } from './plan-output';
 
 const PLAN_FLAGS = ['--group', '--summary', '--detail'];
 
@@ -32,6 +32,6 @@ export function runPlanCommand(args: string[]): CommandOutcome {
   const allProblems = [...problems, ...result.problems];
   const ok = result.members.every((m) => m.passes) && !allProblems.some((p) => p.severity === 'error');
   // calc-interface.md "Additions": studs, camber_in and percentComposite on every member (null where not composite).
-  const members = result.members.map((m) => ({ ...m, studs: m.studs ?? null, camber_in: m.camber_in ?? null, percentComposite: m.percentComposite ?? null }));
+  const members = result.members.map(withCompositeFields);
   return { json: planOutput({ ...result, members, problems: allProblems, repairs }, view), exitCode: ok ? EXIT_OK : EXIT_DESIGN_FAILS };
 }

@@ -47,6 +47,31 @@ export interface SchemeColumnDesign {
   locked: string | null;
 }
 
+/**
+ * Column designs by their exact input (designColumn is a pure function of it): columns with
+ * the same lengths, tiers and loads share one design, and a re-design after an edit designs
+ * again only the columns whose loads changed. The key holds every input number in its
+ * shortest round-trip text, so two inputs share a design only when they are equal. The
+ * results are read, never mutated, by schemeColumns. Bounded: cleared when it grows past
+ * COLUMN_MEMO_LIMIT entries.
+ */
+const columnMemo = new Map<string, ColumnDesignResult>();
+const COLUMN_MEMO_LIMIT = 1024;
+
+function memoisedColumnDesign(input: Parameters<typeof designColumn>[0]): ColumnDesignResult {
+  // Every input of designColumn is in the key: the locked size of each tier included.
+  let key = `${input.method}|${input.Fy_ksi}|${input.series.join(',')}|${input.allowHeavierAbove ? 1 : 0}|`;
+  for (const [tier, shape] of input.locked ?? []) key += `${tier}=${shape ?? ''};`;
+  for (const l of input.lengths) key += `|${l.level}\u0000${l.Lc_ft},${l.tier},${l.D_kip},${l.L_kip},${l.Lr_kip},${l.S_kip}`;
+  let design = columnMemo.get(key);
+  if (!design) {
+    design = designColumn(input);
+    if (columnMemo.size >= COLUMN_MEMO_LIMIT) columnMemo.clear();
+    columnMemo.set(key, design);
+  }
+  return design;
+}
+
 /** Design every column of the stack; problems name the column. */
 export function designSchemeColumns(plan: Plan, stack: readonly ColumnTakedown[]): { columns: Map<string, SchemeColumnDesign>; problems: PlanProblem[] } {
   const settings = plan.designBasis.columns ?? {};
@@ -73,14 +98,15 @@ export function designSchemeColumns(plan: Plan, stack: readonly ColumnTakedown[]
       const i = c.levels.findIndex((l) => l.level === t.level);
       if (i >= 0 && t.shape.trim() !== '') locked.set(tiers[i], normalizeShapeLabel(t.shape));
     }
-    const design = designColumn({
+    const input = {
       method: plan.designBasis.method,
       Fy_ksi: plan.designBasis.Fy_ksi,
       series,
       allowHeavierAbove: settings.allowHeavierAbove ?? false,
       locked,
       lengths: c.levels.map((l, i) => ({ level: l.level, Lc_ft: lengths[i].Lc_ft, tier: tiers[i], D_kip: l.D_kip, L_kip: l.L_kip, Lr_kip: l.Lr_kip, S_kip: l.S_kip })),
-    });
+    };
+    const design = memoisedColumnDesign(input);
     for (const t of design.tiers) if (!t.passes) problems.push(planProblem('error', 'column-fails', `Column ${c.id}: tier ${t.tier}${tierSpan(design, t)} — ${t.failure ?? 'does not pass'}`, { elementId: c.id }));
     columns.set(c.id, { design, lengths, spliceLevels: spliceLevelsOf(lengths, tiers), locked: lockedShape });
   }
@@ -210,7 +236,12 @@ export function schemeColumns(plan: Plan, stack: readonly ColumnTakedown[]): { c
       const of = levels.filter((l) => l.tier === t.tier);
       const bottomIndex = levels.indexOf(of[of.length - 1]);
       const length_ft = of.reduce((a, l) => a + l.Lc_ft, 0);
-      return { ...t, toLevel: of[0].level, fromLevel: d!.lengths[bottomIndex].bottomLevel, length_ft, weight_lb: t.weight_plf * length_ft };
+      // Written out in ColumnTierResult's key order (a spread literal was slow on this path).
+      return {
+        tier: t.tier, shape: t.shape, weight_plf: t.weight_plf, locked: t.locked, passes: t.passes, ratio: t.ratio,
+        governingLevel: t.governingLevel, failure: t.failure, lighter: t.lighter,
+        toLevel: of[0].level, fromLevel: d!.lengths[bottomIndex].bottomLevel, length_ft, weight_lb: t.weight_plf * length_ft,
+      };
     });
     for (const l of levels) {
       if (!l.shape) continue;

@@ -161,6 +161,22 @@ function firstKeyIsCase(l: TakedownLoad): boolean {
   return false;
 }
 
+/**
+ * Reduced copies already made, by takedown load and factor: the deck strip loads are reused
+ * across re-designs (plan-geometry-memo), so a member whose factor is unchanged gets the same
+ * copy again instead of a new object and text. Copies are never mutated (like the takedown's
+ * own loads, which results share).
+ */
+const reducedCopies = new WeakMap<TakedownLoad, { f: number; copy: MemberLoad }>();
+
+function reducedCopyOnce(l: TakedownLoad, f: number, note: string): MemberLoad {
+  const hit = reducedCopies.get(l);
+  if (hit !== undefined && hit.f === f) return hit.copy;
+  const copy = reducedCopy(l, f, note);
+  reducedCopies.set(l, { f, copy });
+  return copy;
+}
+
 /** The loads a member is designed for: reducible live × its reduction factor (ASCE 7-16 Eq. 4.7-1). */
 export function designLoads(mt: MemberTakedown): MemberLoad[] {
   const f = mt.liveReductionFactor;
@@ -178,8 +194,8 @@ export function designLoads(mt: MemberTakedown): MemberLoad[] {
     // Same keys in the same order, without `reducible`; reducible live scaled by the factor.
     if (l.reducible && f !== 1) {
       note ??= ` × ${f.toFixed(3)} (ASCE 7-16 Eq. 4.7-1)`;
-      out.push(reducedCopy(l, f, note));
-    } else out.push(reducedCopy(l, 1, ''));
+      out.push(reducedCopyOnce(l, f, note));
+    } else out.push(reducedCopyOnce(l, 1, ''));
   }
   return out;
 }
@@ -301,6 +317,11 @@ class DesignTable {
 
   /** The design for the scratch key, if memoised. */
   get(): DesignEntry | undefined {
+    return this.entry()?.value;
+  }
+
+  /** The memo entry for the scratch key, if any. */
+  private entry(): { nums: Float64Array; shape: string; value: DesignEntry } | undefined {
     const list = this.buckets.get(DesignTable.hash);
     if (!list) return undefined;
     const k = DesignTable.scratch;
@@ -309,9 +330,23 @@ class DesignTable {
       if (e.shape !== DesignTable.shape || e.nums.length !== n) continue;
       // === on doubles: equal values, and 0 equals -0 (as the key's text did).
       for (let i = 0; i < n; i++) if (e.nums[i] !== k[i]) continue outer;
-      return e.value;
+      return e;
     }
     return undefined;
+  }
+
+  /**
+   * The design for the scratch key from `from` (the previous run's memo), entered in this memo
+   * as the same entry object (entries are never mutated), so a re-design copies no key.
+   */
+  adoptFrom(from: DesignTable): DesignEntry | undefined {
+    const e = from.entry();
+    if (!e) return undefined;
+    const list = this.buckets.get(DesignTable.hash);
+    if (list) list.push(e);
+    else this.buckets.set(DesignTable.hash, [e]);
+    this.size++;
+    return e.value;
   }
 
   /** Memoise a design under the scratch key. */
@@ -385,10 +420,7 @@ class DesignPass {
     if (extras) this.extrasOf.set(mt.id, extras);
     DesignTable.keyOf(this.plan, mt, shape, loads, extras ? `|${JSON.stringify(extras)}` : '');
     let result = this.table.get();
-    if (!result && this.previous) {
-      result = this.previous.get();
-      if (result) this.table.set(result);
-    }
+    if (!result && this.previous) result = this.table.adoptFrom(this.previous);
     if (!result) {
       try {
         result = designMember({ ...memberDesignInput(this.plan, mt, this.forced.get(mt.id) ?? null, loads), ...(extras ?? {}) });

@@ -133,11 +133,33 @@ interface TierEvaluation {
 }
 
 /**
+ * φc Pn (or Pn/Ωc) of each candidate at one Lc, filled as asked (NaN: not yet worked out).
+ * Per candidate list (one per series and Fy), method and Lc: a building repeats one storey
+ * height on every column, so each shape's strength at it is worked out once per process.
+ */
+const pcTables = new WeakMap<readonly CompressionConstants[], Map<string, Float64Array>>();
+
+function pcTableFor(candidates: readonly CompressionConstants[], method: DesignMethod, lcIn: number): Float64Array {
+  let byLength = pcTables.get(candidates);
+  if (!byLength) pcTables.set(candidates, (byLength = new Map()));
+  const key = method + lcIn;
+  let table = byLength.get(key);
+  if (!table) {
+    if (byLength.size > 256) byLength.clear();
+    table = new Float64Array(candidates.length).fill(Number.NaN);
+    byLength.set(key, table);
+  }
+  return table;
+}
+
+/**
  * Ratio of one shape over a tier's lengths (indices top down), with weight above it `aboveKip`.
- * Returns the worst ratio; the shape passes when every length has Pr ≤ Pc.
+ * Returns the worst ratio; the shape passes when every length has Pr ≤ Pc. `at` is the shape's
+ * index in `candidates` (its strengths are then read from the tables), or -1 for a locked shape.
  */
 function evaluateTier(
   input: ColumnDesignInput, k: CompressionConstants, indices: readonly number[], aboveKip: number, selfWeight: boolean,
+  candidates: readonly CompressionConstants[] = [], at = -1,
 ): TierEvaluation {
   let swKip = aboveKip;
   let worst = -1;
@@ -146,7 +168,14 @@ function evaluateTier(
     const len = input.lengths[i];
     if (selfWeight) swKip += (k.weightPlf * len.Lc_ft) / 1000;
     const pr = requiredAxialKip(input.method, len.D_kip + swKip, len.L_kip, len.Lr_kip, len.S_kip);
-    const pc = availableCompressionKip(k, len.Lc_ft * IN_PER_FT, input.method);
+    const lcIn = len.Lc_ft * IN_PER_FT;
+    let pc: number;
+    if (at < 0) pc = availableCompressionKip(k, lcIn, input.method);
+    else {
+      const table = pcTableFor(candidates, input.method, lcIn);
+      pc = table[at];
+      if (pc !== pc) pc = table[at] = availableCompressionKip(k, lcIn, input.method);
+    }
     const ratio = pc > 0 ? pr / pc : Number.POSITIVE_INFINITY;
     if (ratio > worst) {
       worst = ratio;
@@ -198,10 +227,14 @@ export function designColumn(input: ColumnDesignInput): ColumnDesignResult {
         const len = input.lengths[i];
         prLowerKip = Math.max(prLowerKip, requiredAxialKip(input.method, len.D_kip + aboveKip, len.L_kip, len.Lr_kip, len.S_kip));
       }
-      for (const k of candidates) {
+      const squash = pcTableFor(candidates, input.method, 0);
+      for (let c = 0; c < candidates.length; c++) {
+        const k = candidates[c];
         if (!input.allowHeavierAbove && k.weightPlf < minWeightPlf) continue;
-        if (availableCompressionKip(k, 0, input.method) < prLowerKip) continue; // cannot pass at any length
-        const e = evaluateTier(input, k, indices, aboveKip, selfWeight);
+        let pcMax = squash[c];
+        if (pcMax !== pcMax) pcMax = squash[c] = availableCompressionKip(k, 0, input.method);
+        if (pcMax < prLowerKip) continue; // cannot pass at any length
+        const e = evaluateTier(input, k, indices, aboveKip, selfWeight, candidates, c);
         if (e.passes) {
           chosen = k;
           ev = e;
@@ -213,9 +246,10 @@ export function designColumn(input: ColumnDesignInput): ColumnDesignResult {
       }
       if (!chosen) {
         // Nothing passed: evaluate every allowed shape to report the best ratio reached.
-        for (const k of candidates) {
+        for (let c = 0; c < candidates.length; c++) {
+          const k = candidates[c];
           if (!input.allowHeavierAbove && k.weightPlf < minWeightPlf) continue;
-          const e = evaluateTier(input, k, indices, aboveKip, selfWeight);
+          const e = evaluateTier(input, k, indices, aboveKip, selfWeight, candidates, c);
           if (!best || e.ratio < best.ev.ratio) best = { k, ev: e };
         }
       }
