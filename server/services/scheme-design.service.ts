@@ -6,6 +6,7 @@ import { designPool } from './design-runs/design-pool';
 import type { StoredDesign } from './design-runs/design.worker';
 import { jsonBody, jsonBodyFromBytes, JsonBodyCache, type JsonBody } from './json-body-cache';
 import type { DesignRunAttributes, DesignRunCreation } from '../models/design-run.model';
+import type { SchemeAttributes } from '../models/scheme.model';
 import type { Db } from '../models/models';
 import { findOwnScheme, readPlan, type SchemeServiceContext } from './plan-store.service';
 import { recordSchemeAudit, SCHEME_AUDIT_ACTIONS } from './scheme-audit.service';
@@ -317,14 +318,41 @@ export async function getSchemeDesign(
   schemeId: string,
   options: { designIfStale: boolean },
 ): Promise<SchemeDesignView> {
-  const scheme = await findOwnScheme(ctx, schemeId);
-  const revision = scheme.getDataValue('revision');
+  return (await currentSchemeDesign(ctx, schemeId, options)).view();
+}
+
+/**
+ * The run getSchemeDesign reads, without reading its result yet: features that keep what they
+ * derive from a run (schedule, tonnage) look their copy up by `runId` first and only ask for
+ * the view when they have none. `scheme` is the scheme as it stands after any design.
+ */
+export interface CurrentDesign {
+  scheme: SchemeAttributes;
+  runId: string;
+  /** The revision the run was computed from. */
+  revision: number;
+  view(): Promise<SchemeDesignView>;
+}
+
+export async function currentSchemeDesign(
+  ctx: SchemeServiceContext,
+  schemeId: string,
+  options: { designIfStale: boolean },
+): Promise<CurrentDesign> {
+  const scheme = (await findOwnScheme(ctx, schemeId)).get({ plain: true });
   const run = await latestRun(ctx.db, schemeId);
-  if (run && (run.revision === revision || !options.designIfStale)) {
-    return toDesignView(run, await resultOf(ctx.db, run.id), revision);
+  if (run && (run.revision === scheme.revision || !options.designIfStale)) {
+    return { scheme, runId: run.id, revision: run.revision, view: async () => toDesignView(run, await resultOf(ctx.db, run.id), scheme.revision) };
   }
   if (!options.designIfStale) {
     throw new AppError(404, 'not_designed', 'This scheme has not been designed yet.');
   }
-  return designSchemeNow(ctx, schemeId, { trigger: 'on_read' });
+  const fresh = await designAndStore(ctx, schemeId, 'on_read');
+  const now = (await findOwnScheme(ctx, schemeId)).get({ plain: true });
+  return {
+    scheme: now,
+    runId: fresh.meta.id,
+    revision: fresh.meta.revision,
+    view: async () => toDesignView(fresh.meta, resultFromPacked(fresh.meta.id, fresh.stored), fresh.schemeRevision),
+  };
 }
