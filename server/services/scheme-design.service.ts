@@ -72,7 +72,7 @@ const resultCache = new Map<string, Record<string, unknown>>();
  * Design views as response bodies (about 1.7 MB of JSON for the demo building), by run and
  * staleness: a run never changes, so its view is serialised once, not per read.
  */
-const viewBodies = new JsonBodyCache<string>(16, 48 * 1024 * 1024);
+const viewBodies = new JsonBodyCache<string>(8, 24 * 1024 * 1024);
 const bodyKey = (runId: string, stale: boolean) => `${runId}:${stale ? 'stale' : 'current'}`;
 
 function deepFreeze<T>(value: T): T {
