@@ -4,7 +4,8 @@ import type { AppContext } from '../app-context';
 import { authOf, requireRole } from '../auth/auth.middleware';
 import { idParams, validate } from '../middleware/validate.middleware';
 import type { SchemeServiceContext } from '../services/plan-store.service';
-import { getSchedule, getScheduleCsv } from '../services/schedule.service';
+import { getScheduleBody, getScheduleCsv } from '../services/schedule.service';
+import { sendJsonBody } from './send-json-body';
 
 function serviceContext(ctx: AppContext, res: Response): SchemeServiceContext {
   const auth = authOf(res);
@@ -26,7 +27,7 @@ export function scheduleRoutes(ctx: AppContext): Router {
 
   router.get('/:id/schedule', requireRole('project:read'), async (req, res) => {
     const { params } = validate(req, { params: idParams });
-    res.json(await getSchedule(serviceContext(ctx, res), params.id));
+    sendJsonBody(req, res, await getScheduleBody(serviceContext(ctx, res), params.id));
   });
 
   router.get('/:id/schedule.csv', requireRole('export:read'), async (req, res) => {

@@ -11,7 +11,8 @@ import {
   schemePatchBody,
   schemesListQuery,
 } from '../schemas/scheme.schema';
-import { designSchemeNow, getLatestDesign } from '../services/scheme-design.service';
+import { designSchemeNowBody, getLatestDesignBody } from '../services/scheme-design.service';
+import { sendJsonBody } from './send-json-body';
 import {
   cloneScheme,
   createScheme,
@@ -83,12 +84,12 @@ export function schemesRoutes(ctx: AppContext): Router {
 
   router.post('/:id/design', requireRole('scheme:write'), async (req, res) => {
     const { params } = validate(req, { params: idParams });
-    res.json(await designSchemeNow(serviceContext(ctx, res), params.id));
+    sendJsonBody(req, res, await designSchemeNowBody(serviceContext(ctx, res), params.id));
   });
 
   router.get('/:id/design', requireRole('project:read'), async (req, res) => {
     const { params } = validate(req, { params: idParams });
-    res.json(await getLatestDesign(serviceContext(ctx, res), params.id));
+    sendJsonBody(req, res, await getLatestDesignBody(serviceContext(ctx, res), params.id));
   });
 
   router.post('/:id/clone', requireRole('scheme:write'), async (req, res) => {

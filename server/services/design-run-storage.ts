@@ -10,7 +10,7 @@ import type { Sequelize } from 'sequelize';
 /** Marks a packed result; older rows have no such key. */
 const PACKED_VERSION = 2;
 
-interface PackedResult {
+export interface PackedResult {
   storageVersion: typeof PACKED_VERSION;
   /** Each distinct member sizing record once. */
   designs: unknown[];
@@ -21,10 +21,10 @@ interface PackedResult {
 const isPacked = (stored: unknown): stored is PackedResult =>
   typeof stored === 'object' && stored !== null && (stored as { storageVersion?: unknown }).storageVersion === PACKED_VERSION;
 
-/** The stored form of a design result (plain JSON values; the engine's non-enumerable caches are dropped). */
-export function packDesignResult(result: unknown): PackedResult {
+/** The stored form of a design result (plain JSON values; the engine's non-enumerable caches are dropped); `json` is JSON.stringify(result) when the caller has it. */
+export function packDesignResult(result: unknown, json?: string): PackedResult {
   if (isPacked(result)) return result;
-  const plain = JSON.parse(JSON.stringify(result)) as PackedResult['result'];
+  const plain = JSON.parse(json ?? JSON.stringify(result)) as PackedResult['result'];
   const designs: unknown[] = [];
   const indexByText = new Map<string, number>();
   const members = (plain.members ?? []).map((m) => {

@@ -1,4 +1,5 @@
-import type { Model, Transaction } from 'sequelize';
+import { createHash } from 'node:crypto';
+import type { Model, ModelStatic, Transaction } from 'sequelize';
 import {
   exportPlanFile,
   PLAN_FORMAT,
@@ -135,28 +136,19 @@ function memberRow(schemeId: string, m: PlanMember, position: number): Omit<Memb
 
 const ELEMENT_MODELS = ['Level', 'GridLine', 'Column', 'Member', 'Zone', 'Deck', 'PointLoad', 'LineLoad', 'Opening'] as const;
 
-/** Replaces the scheme's element rows with the plan's (inside the caller's transaction). */
-export async function replacePlanRows(db: Db, schemeId: string, plan: Plan, transaction: Transaction): Promise<void> {
-  const { models } = db;
-  for (const name of ELEMENT_MODELS) {
-    await (models[name] as typeof models.Level).destroy({ where: { schemeId }, transaction });
-  }
-  const opts = { transaction };
+type ElementModel = (typeof ELEMENT_MODELS)[number];
+
+/** The element rows of a plan, per table, in the order they are written. */
+export function planRows(schemeId: string, plan: Plan): Record<ElementModel, Record<string, unknown>[]> {
   const at = <T>(items: T[]) => items.map((item, position) => ({ item, position }));
-  await models.Level.bulkCreate(
-    at(plan.levels).map(({ item: l, position }) => ({
+  return {
+    Level: at(plan.levels).map(({ item: l, position }) => ({
       schemeId, elementId: l.id, position, name: l.name, elevationFt: l.elevation_ft, roof: l.roof ?? null,
     })),
-    opts,
-  );
-  await models.GridLine.bulkCreate(
-    at(plan.grids ?? []).map(({ item: g, position }) => ({
+    GridLine: at(plan.grids ?? []).map(({ item: g, position }) => ({
       schemeId, elementId: g.id, position, axis: g.axis, label: g.label, offsetFt: g.offset_ft,
     })),
-    opts,
-  );
-  await models.Column.bulkCreate(
-    at(plan.columns).map(({ item: c, position }) => ({
+    Column: at(plan.columns).map(({ item: c, position }) => ({
       schemeId,
       elementId: c.id,
       position,
@@ -168,11 +160,8 @@ export async function replacePlanRows(db: Db, schemeId: string, plan: Plan, tran
       tierShapes: c.tierShapes ?? null,
       nullFields: 'shape' in c && c.shape === null ? 'shape' : null,
     })),
-    opts,
-  );
-  await models.Member.bulkCreate(plan.members.map((m, position) => memberRow(schemeId, m, position)), opts);
-  await models.Zone.bulkCreate(
-    at(plan.zones).map(({ item: z, position }) => ({
+    Member: plan.members.map((m, position) => memberRow(schemeId, m, position) as unknown as Record<string, unknown>),
+    Zone: at(plan.zones).map(({ item: z, position }) => ({
       schemeId,
       elementId: z.id,
       position,
@@ -185,16 +174,10 @@ export async function replacePlanRows(db: Db, schemeId: string, plan: Plan, tran
       roofLivePsf: z.roofLive_psf,
       snowPsf: z.snow_psf,
     })),
-    opts,
-  );
-  await models.Deck.bulkCreate(
-    at(plan.decks).map(({ item: d, position }) => ({
+    Deck: at(plan.decks).map(({ item: d, position }) => ({
       schemeId, elementId: d.id, position, levelId: d.level, polygon: d.polygon, spanDirection: d.spanDirection, zoneId: d.zone, slab: d.slab ?? null,
     })),
-    opts,
-  );
-  await models.PointLoad.bulkCreate(
-    at(plan.pointLoads).map(({ item: p, position }) => ({
+    PointLoad: at(plan.pointLoads).map(({ item: p, position }) => ({
       schemeId,
       elementId: p.id,
       position,
@@ -206,10 +189,7 @@ export async function replacePlanRows(db: Db, schemeId: string, plan: Plan, tran
       lrKip: p.Lr_kip ?? null,
       sKip: p.S_kip ?? null,
     })),
-    opts,
-  );
-  await models.LineLoad.bulkCreate(
-    at(plan.lineLoads).map(({ item: w, position }) => ({
+    LineLoad: at(plan.lineLoads).map(({ item: w, position }) => ({
       schemeId,
       elementId: w.id,
       position,
@@ -223,14 +203,62 @@ export async function replacePlanRows(db: Db, schemeId: string, plan: Plan, tran
       lrKlf: w.Lr_klf ?? null,
       sKlf: w.S_klf ?? null,
     })),
-    opts,
-  );
-  await models.Opening.bulkCreate(
-    at(plan.openings).map(({ item: o, position }) => ({
+    Opening: at(plan.openings).map(({ item: o, position }) => ({
       schemeId, elementId: o.id, position, levelId: o.level, polygon: o.polygon,
     })),
-    opts,
-  );
+  };
+}
+
+/** A digest per table of the rows written, to tell which tables a save changes. */
+type RowDigests = Record<ElementModel, string>;
+
+function rowDigests(rows: Record<ElementModel, Record<string, unknown>[]>): RowDigests {
+  const out = {} as RowDigests;
+  for (const name of ELEMENT_MODELS) out[name] = createHash('sha1').update(JSON.stringify(rows[name])).digest('base64');
+  return out;
+}
+
+/**
+ * What this process last wrote for a scheme: the revision and a digest of each table's rows.
+ * A revision's rows never change after it is committed (every write bumps the revision, and
+ * the bump is compare-and-set on the revision the writer started from), so when a save starts
+ * from the revision recorded here, a table whose rows digest the same already holds them and
+ * is left alone: a small edit rewrites one table, not nine. Recorded only after the commit;
+ * without a record (another process wrote, or after a restart) every table is rewritten.
+ */
+const WRITTEN_SCHEMES_KEPT = 2000;
+const written = new Map<string, { revision: number; digests: RowDigests }>();
+
+function recordWritten(schemeId: string, revision: number, digests: RowDigests): void {
+  written.delete(schemeId);
+  written.set(schemeId, { revision, digests });
+  while (written.size > WRITTEN_SCHEMES_KEPT) written.delete(written.keys().next().value as string);
+}
+
+/**
+ * Writes the plan's element rows (inside the caller's transaction): each table whose rows
+ * differ from those of `fromRevision` (when this process knows them) is replaced. Returns the
+ * digests of what the tables now hold.
+ */
+async function writePlanRows(db: Db, schemeId: string, plan: Plan, transaction: Transaction, fromRevision: number | null): Promise<RowDigests> {
+  const { models } = db;
+  const rows = planRows(schemeId, plan);
+  const digests = rowDigests(rows);
+  const known = fromRevision === null ? undefined : written.get(schemeId);
+  const before = known && known.revision === fromRevision ? known.digests : null;
+  for (const name of ELEMENT_MODELS) {
+    if (before && before[name] === digests[name]) continue;
+    const model = models[name] as unknown as ModelStatic<Model>;
+    await model.destroy({ where: { schemeId }, transaction });
+    if (rows[name].length > 0) await model.bulkCreate(rows[name], { transaction });
+  }
+  return digests;
+}
+
+/** Replaces the scheme's element rows with the plan's (inside the caller's transaction). */
+export async function replacePlanRows(db: Db, schemeId: string, plan: Plan, transaction: Transaction): Promise<void> {
+  written.delete(schemeId);
+  await writePlanRows(db, schemeId, plan, transaction, null);
 }
 
 // ---------------------------------------------------------------------------------------
@@ -377,13 +405,23 @@ export async function commitPlanRevision(db: Db, scheme: SchemeRow, input: Commi
       { where: { id: schemeId, revision: input.expectedRevision }, transaction },
     );
     if (updated !== 1) throw new RevisionConflict();
-    await replacePlanRows(db, schemeId, plan, transaction);
+    const digests = await writePlanRows(db, schemeId, plan, transaction, input.expectedRevision);
     await db.models.PlanRevision.create(
       { schemeId, revision: next, plan: exportPlanFile(plan), note: input.note, userId: input.userId },
       { transaction },
     );
-    return next;
-  });
+    return { next, digests };
+  }).then(
+    ({ next, digests }) => {
+      recordWritten(schemeId, next, digests);
+      return next;
+    },
+    (err: unknown) => {
+      // What the tables hold after a failed write is whatever the rollback left: known no more.
+      written.delete(schemeId);
+      throw err;
+    },
+  );
 }
 
 /** Writes the first revision of a new scheme (row already created inside transaction). */
@@ -400,4 +438,5 @@ export async function writeInitialRevision(
     { schemeId, revision: 1, plan: exportPlanFile(plan) as PlanFileInput, note, userId },
     { transaction },
   );
+  // Not recorded as written: the caller's transaction may still roll back.
 }

@@ -4,8 +4,9 @@ import { SCHEME_CAUTION } from '../../shared/engine/index';
 import { scheduleBasis, scheduleMarkRows, scheduleRows, type ScheduleBasis, type ScheduleRow } from '../../shared/drafting/schedule.drafting';
 import { SCHEDULE_MARK_CSV_COLUMNS, scheduleCsv } from '../../shared/drafting/schedule-csv.drafting';
 import type { Plan, PlanProblem } from '../../shared/schemas/plan.schema';
-import { findOwnScheme, readPlan, type SchemeServiceContext } from './plan-store.service';
-import { getSchemeDesign } from './scheme-design.service';
+import { readPlan, type SchemeServiceContext } from './plan-store.service';
+import { currentSchemeDesign, type CurrentDesign } from './scheme-design.service';
+import { jsonBody, JsonBodyCache, type JsonBody } from './json-body-cache';
 import { fileSlug } from './schemes.service';
 
 // The member schedule of a scheme: its current design (designed first when stale) read
@@ -33,10 +34,12 @@ export interface SchemeDrafting {
 
 /** The scheme, its plan and a current design (designing it first when stale). */
 export async function loadSchemeDrafting(ctx: SchemeServiceContext, schemeId: string): Promise<SchemeDrafting> {
-  const view = await getSchemeDesign(ctx, schemeId, { designIfStale: true });
-  const row = await findOwnScheme(ctx, schemeId);
-  const attrs = row.get({ plain: true });
-  const plan = await readPlan(ctx.db, attrs);
+  return draftingOf(ctx, await currentSchemeDesign(ctx, schemeId, { designIfStale: true }));
+}
+
+async function draftingOf(ctx: SchemeServiceContext, current: CurrentDesign): Promise<SchemeDrafting> {
+  const attrs = current.scheme;
+  const [view, plan] = await Promise.all([current.view(), readPlan(ctx.db, attrs)]);
   return {
     scheme: { id: attrs.id, projectId: attrs.projectId, name: attrs.name, revision: attrs.revision },
     plan,
@@ -44,8 +47,7 @@ export async function loadSchemeDrafting(ctx: SchemeServiceContext, schemeId: st
   };
 }
 
-export async function getSchedule(ctx: SchemeServiceContext, schemeId: string): Promise<ScheduleView> {
-  const { scheme, plan, design } = await loadSchemeDrafting(ctx, schemeId);
+function scheduleView({ scheme, plan, design }: SchemeDrafting): ScheduleView {
   return {
     scheme,
     design: { revision: design.revision, designedAt: design.designedAt },
@@ -57,6 +59,26 @@ export async function getSchedule(ctx: SchemeServiceContext, schemeId: string): 
     compositeNote: COMPOSITE_NOTE,
     columnSchedule: buildColumnSchedule(design, plan),
   };
+}
+
+export async function getSchedule(ctx: SchemeServiceContext, schemeId: string): Promise<ScheduleView> {
+  return scheduleView(await loadSchemeDrafting(ctx, schemeId));
+}
+
+/**
+ * Schedules as response bodies, by what they are made of: the design run, the plan revision
+ * (the element rows change only with it) and the scheme's name and project. A new design run,
+ * a save, a mark edit (a save with its own run) or a rename each make a new key; old ones fall
+ * out least recently used first.
+ */
+const scheduleBodies = new JsonBodyCache<string>(32, 24 * 1024 * 1024);
+
+/** GET …/schedule as the response body: built and serialised once per run and revision. */
+export async function getScheduleBody(ctx: SchemeServiceContext, schemeId: string): Promise<JsonBody> {
+  const current = await currentSchemeDesign(ctx, schemeId, { designIfStale: true });
+  const s = current.scheme;
+  const key = JSON.stringify([current.runId, s.id, s.revision, s.projectId, s.name]);
+  return scheduleBodies.get(key) ?? scheduleBodies.set(key, jsonBody(scheduleView(await draftingOf(ctx, current))));
 }
 
 /** GET …/schedule.csv: the schedule's rows, one per member (or one per mark with `by: 'mark'`). */

@@ -3,7 +3,10 @@ import type { SchemeResult } from '../../shared/engine/index';
 import type { Plan } from '../../shared/schemas/plan.schema';
 import { AppError } from '../errors/app-error';
 import { designPool } from './design-runs/design-pool';
+import type { StoredDesign } from './design-runs/design.worker';
+import { jsonBody, jsonBodyFromBytes, JsonBodyCache, type JsonBody } from './json-body-cache';
 import type { DesignRunAttributes, DesignRunCreation } from '../models/design-run.model';
+import type { SchemeAttributes } from '../models/scheme.model';
 import type { Db } from '../models/models';
 import { findOwnScheme, readPlan, type SchemeServiceContext } from './plan-store.service';
 import { recordSchemeAudit, SCHEME_AUDIT_ACTIONS } from './scheme-audit.service';
@@ -62,8 +65,15 @@ type RunMeta = Omit<DesignRunAttributes, 'result'>;
  * else a design read does. A few, most recently used first; deep-frozen, because every reader
  * shares the one copy (a reader that changed it would throw, not corrupt the others).
  */
-const RESULT_CACHE_SIZE = 8;
+const RESULT_CACHE_SIZE = 4;
 const resultCache = new Map<string, Record<string, unknown>>();
+
+/**
+ * Design views as response bodies (about 1.7 MB of JSON for the demo building), by run and
+ * staleness: a run never changes, so its view is serialised once, not per read.
+ */
+const viewBodies = new JsonBodyCache<string>(8, 24 * 1024 * 1024);
+const bodyKey = (runId: string, stale: boolean) => `${runId}:${stale ? 'stale' : 'current'}`;
 
 function deepFreeze<T>(value: T): T {
   if (value && typeof value === 'object' && !Object.isFrozen(value)) {
@@ -126,9 +136,11 @@ async function latestRun(db: Db, schemeId: string, transaction?: Transaction): P
 
 /**
  * Runs the engine on a plan in a design worker (off the request thread, within the time and
- * memory budget); an engine failure or a run over budget is a clear 422, never a 500.
+ * memory budget); an engine failure or a run over budget is a clear 422, never a 500. The
+ * worker hands back the result packed for storage and as JSON bytes, so the request thread
+ * neither serialises nor packs it.
  */
-export function runEngine(plan: Plan): Promise<SchemeResult> {
+export function runEngine(plan: Plan): Promise<StoredDesign> {
   return designPool().run(plan);
 }
 
@@ -185,42 +197,110 @@ async function pruneDesignResults(db: Db, schemeId: string, transaction?: Transa
  */
 export type DesignTrigger = 'requested' | 'on_read' | 'seed';
 
+/** A design run just stored: its row without the result, the scheme's revision now, and the result as kept. */
+interface FreshRun {
+  meta: RunMeta;
+  schemeRevision: number;
+  stored: StoredDesign;
+}
+
+/**
+ * Designs in flight, by scheme and revision: a request for a design that is already being
+ * computed (several people opening the schedule of a scheme just saved, a second click on
+ * Design) waits for that run instead of starting the same one again.
+ */
+const inFlight = new Map<string, Promise<FreshRun>>();
+
+async function designAndStore(ctx: SchemeServiceContext, schemeId: string, trigger: DesignTrigger): Promise<FreshRun> {
+  const scheme = await findOwnScheme(ctx, schemeId);
+  const attrs = scheme.get({ plain: true });
+  const key = `${schemeId}:${attrs.revision}`;
+  const running = inFlight.get(key);
+  if (running) return running;
+  const run = (async (): Promise<FreshRun> => {
+    const plan = await readPlan(ctx.db, attrs);
+    const stored = await runEngine(plan);
+    const row = await storeDesignRun(ctx.db, {
+      schemeId,
+      revision: attrs.revision,
+      result: stored.packed as unknown as Record<string, unknown>,
+      userId: ctx.actor.userId,
+    });
+    const { result: _packed, ...meta } = row.get({ plain: true });
+    await recordSchemeAudit(ctx, {
+      action: SCHEME_AUDIT_ACTIONS.designRun,
+      schemeId,
+      schemeName: attrs.name,
+      projectId: attrs.projectId,
+      detail: {
+        revision: attrs.revision,
+        designRunId: meta.id,
+        trigger,
+        steelWeight_lb: meta.steelWeightLb,
+        pieces: meta.pieces,
+        failingMembers: meta.failingMembers,
+      },
+    });
+    // The scheme may have been saved while the engine ran: compare with the revision now.
+    const now = await ctx.db.models.Scheme.findByPk(schemeId, { attributes: ['revision'] });
+    return { meta, schemeRevision: now?.getDataValue('revision') ?? attrs.revision, stored };
+  })();
+  inFlight.set(key, run);
+  try {
+    return await run;
+  } finally {
+    if (inFlight.get(key) === run) inFlight.delete(key);
+  }
+}
+
+/** The design view of a fresh run as a body: the worker's JSON of the result with the run's fields appended. */
+function freshBody(fresh: FreshRun): JsonBody {
+  const { meta, schemeRevision, stored } = fresh;
+  const stale = meta.revision !== schemeRevision;
+  const key = bodyKey(meta.id, stale);
+  const cached = viewBodies.get(key);
+  if (cached) return cached;
+  const fields = { revision: meta.revision, designedAt: new Date(meta.createdAt).toISOString(), stale };
+  const top = stored.packed.result;
+  const json = Buffer.from(stored.json.buffer, stored.json.byteOffset, stored.json.byteLength);
+  // {...result, revision, designedAt, stale} serialises as the result's text with the three
+  // fields appended, unless the result already has one of them (then it keeps its place).
+  if (Object.keys(fields).some((k) => k in top) || json.length < 2 || json[json.length - 1] !== 0x7d) {
+    return viewBodies.set(key, jsonBody(toDesignView(meta, resultFromPacked(meta.id, stored), schemeRevision)));
+  }
+  const tail = JSON.stringify(fields).slice(1);
+  const bytes = Buffer.concat([json.subarray(0, json.length - 1), Buffer.from(json.length === 2 ? tail : `,${tail}`, 'utf8')]);
+  return viewBodies.set(key, jsonBodyFromBytes(bytes));
+}
+
+/** The result of a fresh run as readers share it (unpacked once, kept with the other parsed results). */
+function resultFromPacked(runId: string, stored: StoredDesign): Record<string, unknown> {
+  return resultCache.get(runId) ?? remember(runId, unpackDesignResult(stored.packed));
+}
+
 /** POST /api/schemes/:id/design: designs the current plan and stores the run. */
 export async function designSchemeNow(
   ctx: SchemeServiceContext,
   schemeId: string,
   options: { trigger?: DesignTrigger } = {},
 ): Promise<SchemeDesignView> {
+  const fresh = await designAndStore(ctx, schemeId, options.trigger ?? 'requested');
+  return toDesignView(fresh.meta, resultFromPacked(fresh.meta.id, fresh.stored), fresh.schemeRevision);
+}
+
+/** POST /api/schemes/:id/design as the response body (the same bytes res.json would send of designSchemeNow's view). */
+export async function designSchemeNowBody(ctx: SchemeServiceContext, schemeId: string): Promise<JsonBody> {
+  return freshBody(await designAndStore(ctx, schemeId, 'requested'));
+}
+
+/** GET /api/schemes/:id/design as the response body, serialised once per run (and staleness). */
+export async function getLatestDesignBody(ctx: SchemeServiceContext, schemeId: string): Promise<JsonBody> {
   const scheme = await findOwnScheme(ctx, schemeId);
-  const attrs = scheme.get({ plain: true });
-  const plan = await readPlan(ctx.db, attrs);
-  const result = await runEngine(plan);
-  const run = await storeDesignRun(ctx.db, {
-    schemeId,
-    revision: attrs.revision,
-    result,
-    userId: ctx.actor.userId,
-  });
-  const stored = run.get({ plain: true });
-  await recordSchemeAudit(ctx, {
-    action: SCHEME_AUDIT_ACTIONS.designRun,
-    schemeId,
-    schemeName: attrs.name,
-    projectId: attrs.projectId,
-    detail: {
-      revision: attrs.revision,
-      designRunId: stored.id,
-      trigger: options.trigger ?? 'requested',
-      steelWeight_lb: stored.steelWeightLb,
-      pieces: stored.pieces,
-      failingMembers: stored.failingMembers,
-    },
-  });
-  // The scheme may have been saved while the engine ran: compare with the revision now.
-  const now = await ctx.db.models.Scheme.findByPk(schemeId, { attributes: ['revision'] });
-  // The stored row holds the packed form; the engine's own output is what readers get.
-  const { result: _packed, ...meta } = stored;
-  return toDesignView(meta, remember(stored.id, result as unknown as Record<string, unknown>), now?.getDataValue('revision') ?? attrs.revision);
+  const revision = scheme.getDataValue('revision');
+  const run = await latestRun(ctx.db, schemeId);
+  if (!run) throw new AppError(404, 'not_designed', 'This scheme has not been designed yet.');
+  const key = bodyKey(run.id, run.revision !== revision);
+  return viewBodies.get(key) ?? viewBodies.set(key, jsonBody(toDesignView(run, await resultOf(ctx.db, run.id), revision)));
 }
 
 /** GET /api/schemes/:id/design: the latest stored run (404 not_designed when none). */
@@ -238,14 +318,41 @@ export async function getSchemeDesign(
   schemeId: string,
   options: { designIfStale: boolean },
 ): Promise<SchemeDesignView> {
-  const scheme = await findOwnScheme(ctx, schemeId);
-  const revision = scheme.getDataValue('revision');
+  return (await currentSchemeDesign(ctx, schemeId, options)).view();
+}
+
+/**
+ * The run getSchemeDesign reads, without reading its result yet: features that keep what they
+ * derive from a run (schedule, tonnage) look their copy up by `runId` first and only ask for
+ * the view when they have none. `scheme` is the scheme as it stands after any design.
+ */
+export interface CurrentDesign {
+  scheme: SchemeAttributes;
+  runId: string;
+  /** The revision the run was computed from. */
+  revision: number;
+  view(): Promise<SchemeDesignView>;
+}
+
+export async function currentSchemeDesign(
+  ctx: SchemeServiceContext,
+  schemeId: string,
+  options: { designIfStale: boolean },
+): Promise<CurrentDesign> {
+  const scheme = (await findOwnScheme(ctx, schemeId)).get({ plain: true });
   const run = await latestRun(ctx.db, schemeId);
-  if (run && (run.revision === revision || !options.designIfStale)) {
-    return toDesignView(run, await resultOf(ctx.db, run.id), revision);
+  if (run && (run.revision === scheme.revision || !options.designIfStale)) {
+    return { scheme, runId: run.id, revision: run.revision, view: async () => toDesignView(run, await resultOf(ctx.db, run.id), scheme.revision) };
   }
   if (!options.designIfStale) {
     throw new AppError(404, 'not_designed', 'This scheme has not been designed yet.');
   }
-  return designSchemeNow(ctx, schemeId, { trigger: 'on_read' });
+  const fresh = await designAndStore(ctx, schemeId, 'on_read');
+  const now = (await findOwnScheme(ctx, schemeId)).get({ plain: true });
+  return {
+    scheme: now,
+    runId: fresh.meta.id,
+    revision: fresh.meta.revision,
+    view: async () => toDesignView(fresh.meta, resultFromPacked(fresh.meta.id, fresh.stored), fresh.schemeRevision),
+  };
 }

@@ -10,7 +10,7 @@ import {
 import type { Db } from '../models/models';
 import type { SchemeAttributes } from '../models/scheme.model';
 import { AppError } from '../errors/app-error';
-import { getSchemeDesign, type SchemeDesignView } from './scheme-design.service';
+import { currentSchemeDesign, type SchemeDesignView } from './scheme-design.service';
 import type { SchemeServiceContext } from './plan-store.service';
 
 // Tonnage of one scheme from its stored design (designed first when stale), with the
@@ -60,19 +60,49 @@ export function tonnageInputOf(design: Record<string, unknown>): TonnageDesignIn
   };
 }
 
-export function tonnageView(design: SchemeDesignView, levels: TonnageLevelInput[], prices: UnitPrices | null): SchemeTonnageView {
-  const t = computeTonnage(tonnageInputOf(design), levels);
+/** What tonnage derives from a run and the plan's levels, before prices. */
+interface TonnageBase {
+  t: ReturnType<typeof computeTonnage>;
+  revision: number;
+  designedAt: string;
+  failingMembers: number;
+  problemCount: number;
+}
+
+function tonnageBase(design: SchemeDesignView, levels: TonnageLevelInput[]): TonnageBase {
   const members = Array.isArray(design.members) ? (design.members as { passes?: boolean }[]) : [];
   return {
-    totals: withCost(t.totals, prices),
-    byLevel: t.byLevel.map((l) => withCost(l, prices)),
-    byKind: t.byKind.map((k) => withCost(k, prices)),
+    t: computeTonnage(tonnageInputOf(design), levels),
     revision: design.revision,
     designedAt: design.designedAt,
     failingMembers: members.filter((m) => m.passes === false).length,
     problemCount: Array.isArray(design.problems) ? design.problems.length : 0,
   };
 }
+
+function pricedView(base: TonnageBase, prices: UnitPrices | null): SchemeTonnageView {
+  const { t } = base;
+  return {
+    totals: withCost(t.totals, prices),
+    byLevel: t.byLevel.map((l) => withCost(l, prices)),
+    byKind: t.byKind.map((k) => withCost(k, prices)),
+    revision: base.revision,
+    designedAt: base.designedAt,
+    failingMembers: base.failingMembers,
+    problemCount: base.problemCount,
+  };
+}
+
+export function tonnageView(design: SchemeDesignView, levels: TonnageLevelInput[], prices: UnitPrices | null): SchemeTonnageView {
+  return pricedView(tonnageBase(design, levels), prices);
+}
+
+/**
+ * Tonnage before prices, by design run and plan revision (the levels change only with a
+ * save): a few kilobytes each, the most recently used kept. Prices are applied per request.
+ */
+const TONNAGE_CACHE_SIZE = 256;
+const tonnageCache = new Map<string, TonnageBase>();
 
 export async function schemeLevels(db: Db, schemeId: string): Promise<TonnageLevelInput[]> {
   const rows = await db.models.Level.findAll({ where: { schemeId }, order: [['position', 'ASC']] });
@@ -85,7 +115,20 @@ export async function getSchemeTonnage(
   scheme: Pick<SchemeAttributes, 'id'>,
   prices: UnitPrices | null,
 ): Promise<SchemeTonnageView> {
-  const design = await getSchemeDesign(ctx, scheme.id, { designIfStale: true });
-  if (design.stale) throw new AppError(409, 'design_stale', 'The scheme changed while it was being designed; try again.');
-  return tonnageView(design, await schemeLevels(ctx.db, scheme.id), prices);
+  const current = await currentSchemeDesign(ctx, scheme.id, { designIfStale: true });
+  if (current.revision !== current.scheme.revision) {
+    throw new AppError(409, 'design_stale', 'The scheme changed while it was being designed; try again.');
+  }
+  const key = `${current.runId}:${current.scheme.revision}`;
+  let base = tonnageCache.get(key);
+  if (base) {
+    tonnageCache.delete(key);
+  } else {
+    const [design, levels] = await Promise.all([current.view(), schemeLevels(ctx.db, scheme.id)]);
+    if (design.stale) throw new AppError(409, 'design_stale', 'The scheme changed while it was being designed; try again.');
+    base = tonnageBase(design, levels);
+  }
+  tonnageCache.set(key, base);
+  while (tonnageCache.size > TONNAGE_CACHE_SIZE) tonnageCache.delete(tonnageCache.keys().next().value as string);
+  return pricedView(base, prices);
 }

@@ -13,6 +13,11 @@
  * load generator itself (and with anything else running), which the figures include.
  *
  * Options (environment): BENCH_CLIENTS (50), BENCH_DURATION_S (60), BENCH_WARMUP_S (10).
+ *
+ * Each client has one request in flight and no pause between requests, so by Little's law the
+ * mean response time is CLIENTS / (requests per second): p95 ≤ 50 ms with 50 clients needs the
+ * server to answer about 1,000 requests/s. `npx tsx tests/bench/api-cpu.bench.ts` gives the
+ * server's CPU time per request per route, which does not depend on how busy the machine is.
  */
 import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';

@@ -15,9 +15,16 @@ export interface ServerProcess {
   kill(signal?: NodeJS.Signals): Promise<void>;
 }
 
-export async function startServerProcess(options: { databaseUrl: string; env?: Record<string, string>; port?: number; timeoutMs?: number }): Promise<ServerProcess> {
+export async function startServerProcess(options: {
+  databaseUrl: string;
+  env?: Record<string, string>;
+  port?: number;
+  timeoutMs?: number;
+  /** Extra node options before the entry (e.g. `--cpu-prof`). */
+  nodeArgs?: string[];
+}): Promise<ServerProcess> {
   const port = options.port ?? (await freePort());
-  const child = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
+  const child = spawn(process.execPath, [...(options.nodeArgs ?? []), '--import', 'tsx', 'server/index.ts'], {
     env: {
       ...process.env,
       NODE_ENV: 'test',

@@ -5,11 +5,11 @@
  */
 import { availableParallelism } from 'node:os';
 import { Worker } from 'node:worker_threads';
-import type { SchemeResult, StudyResult } from '../../../shared/engine/index';
+import type { StudyResult } from '../../../shared/engine/index';
 import type { Plan } from '../../../shared/schemas/plan.schema';
 import type { StudySpec } from '../../../shared/schemas/study.schema';
 import { AppError } from '../../errors/app-error';
-import type { DesignReply } from './design.worker';
+import type { DesignReply, StoredDesign } from './design.worker';
 
 export interface DesignBudget {
   /** Longest a design run may take, ms. */
@@ -26,7 +26,9 @@ export const DEFAULT_DESIGN_BUDGET: DesignBudget = {
   timeoutMs: 60_000,
   memoryMb: 1024,
   workers: Math.max(1, Math.min(2, availableParallelism() - 1)),
-  maxQueue: 32,
+  // Above the number of people a busy firm has designing at once (one run each), so a burst of
+  // design requests waits its turn rather than being refused; each waiting run holds only its plan.
+  maxQueue: 64,
 };
 
 interface Task {
@@ -56,9 +58,13 @@ export class DesignPool {
 
   constructor(readonly budget: DesignBudget) {}
 
-  /** Designs a plan in a worker; rejects with an AppError (422 over budget or engine failure, 503 queue full). */
-  run(plan: Plan): Promise<SchemeResult> {
-    return this.submit<SchemeResult>(plan);
+  /**
+   * Designs a plan in a worker; resolves with the result as the server keeps it (packed, and
+   * its JSON bytes), both made in the worker. Rejects with an AppError (422 over budget or
+   * engine failure, 503 queue full).
+   */
+  run(plan: Plan): Promise<StoredDesign> {
+    return this.submit<StoredDesign>(plan);
   }
 
   /** A bay study of the plan in a worker, under the same budget (each option is a whole design). */
@@ -124,7 +130,7 @@ export class DesignPool {
         return;
       }
       this.finish(slot);
-      if (reply.ok) task.resolve(reply.result as never);
+      if (reply.ok) task.resolve(('stored' in reply ? reply.stored : reply.result) as never);
       else task.reject(new AppError(422, 'design_failed', `The plan could not be designed: ${reply.message}`));
       this.dispatch();
     });
