@@ -30,6 +30,10 @@ export interface MemberSheetSlotArgs {
   canEdit: boolean;
   lockShape: (shape: string | null) => void;
   setConstraints: (c: { maxDepth_in: number | null; minDepth_in: number | null; allowedNominalDepths: number[] | null }) => void;
+  /** Bracing, Lb override and deflection limits set on the member (null: follow the framing / design basis). */
+  setMemberSettings: (s: { bracing: PlanMember['bracing'] | null; Lb_override_ft: number | null; deflectionLimits: PlanMember['deflectionLimits'] | null }) => void;
+  /** Whether the plan on screen is the saved revision (exports are of the saved one). */
+  saved: boolean;
   close: () => void;
 }
 
@@ -320,6 +324,8 @@ export function PlanEditor(props: PlanEditorProps) {
                 canEdit,
                 lockShape: (shape) => dispatch(store, 'member.setShape', { id: selectedMember.id, shape }),
                 setConstraints: (c) => dispatch(store, 'member.setConstraints', { id: selectedMember.id, ...c }),
+                setMemberSettings: (c) => dispatch(store, 'member.setBracing', { id: selectedMember.id, ...c }),
+                saved: saveState.status === 'saved' || saveState.status === 'readonly',
                 close: () => dispatch(store, 'selection.set', { ids: [] }),
               })}
             </div>
