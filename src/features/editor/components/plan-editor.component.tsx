@@ -236,6 +236,7 @@ export function PlanEditor(props: PlanEditorProps) {
           <ActionButton store={store} id="view.fit" />
           <EditMenu store={store} canEdit={canEdit} />
           <UnitsSwitch className="mx-1" />
+          <ReactionsToggle store={store} />
           {props.renderUnderlayPanel ? (
             <Button variant="quiet" className="h-8 text-xs" aria-expanded={showUnderlay} onClick={() => setShowUnderlay((v) => !v)}>
               Underlay
@@ -378,6 +379,16 @@ function useFillWindowHeight(ref: React.RefObject<HTMLDivElement | null>): numbe
     return () => window.removeEventListener('resize', measure);
   }, [ref]);
   return height;
+}
+
+/** Shows or hides end reactions on the Plan (a view choice, for every role). */
+function ReactionsToggle({ store }: { store: EditorStore }) {
+  const on = useStore(store, (s) => !!s.showReactions);
+  return (
+    <Button variant={on ? 'primary' : 'quiet'} className="h-8 text-xs" aria-pressed={on} title="Show end reactions at each member end" onClick={() => store.setState({ showReactions: !on })}>
+      Reactions
+    </Button>
+  );
 }
 
 function ActionButton({ store, id, disabled, text }: { store: EditorStore; id: ActionId; disabled?: boolean; text?: string }) {
