@@ -178,7 +178,7 @@ export function MemberSheet({
           </p>
         </div>
         <div className="flex shrink-0 items-center gap-2">
-          {design ? <UtilisationChip ratio={design.ratio} /> : <UtilisationChip ratio={Number.NaN} />}
+          <span data-testid="member-sheet-ratio">{design ? <UtilisationChip ratio={design.ratio} /> : <UtilisationChip ratio={Number.NaN} />}</span>
           <Button variant="quiet" onClick={onClose} aria-label="Close member sheet">
             Close
           </Button>
