@@ -10,6 +10,7 @@ import * as m0007 from './migrations/0007-plan-v2-composite-columns';
 import * as m0008 from './migrations/0008-underlay-pdf-pages';
 import * as m0009 from './migrations/0009-bay-studies';
 import * as m0011 from './migrations/0011-column-tier-shapes';
+import * as m0014 from './migrations/0014-member-deflection-limits';
 
 export type Migration = MigrationFn<QueryInterface>;
 
@@ -25,8 +26,8 @@ const MIGRATIONS: { name: string; up: Migration; down: Migration }[] = [
   { name: '0007-plan-v2-composite-columns', ...m0007 },
   { name: '0008-underlay-pdf-pages', ...m0008 },
   { name: '0009-bay-studies', ...m0009 },
-  // 0010 is another branch's (the lead numbers migrations across branches).
   { name: '0011-column-tier-shapes', ...m0011 },
+  { name: '0014-member-deflection-limits', ...m0014 },
 ];
 
 /** The migration names in the order they run. */

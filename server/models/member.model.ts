@@ -1,5 +1,5 @@
 import { DataTypes, type Sequelize } from 'sequelize';
-import type { PlanBracing } from '../../shared/schemas/plan.schema';
+import type { PlanBracing, PlanMemberDeflectionLimits } from '../../shared/schemas/plan.schema';
 import { definePlanElementModel, type PlanElementBase } from './plan-element.base';
 
 export interface MemberAttributes extends PlanElementBase {
@@ -22,6 +22,8 @@ export interface MemberAttributes extends PlanElementBase {
   composite: boolean | null;
   /** Plan version 2: a stud count to check. */
   studs: number | null;
+  /** Per-member deflection limits (migration 0014); NULL with 'deflectionLimits' in nullFields = explicit null. */
+  deflectionLimits: PlanMemberDeflectionLimits | null;
   /** Comma list of optional fields the file gave as an explicit null (NULL alone means absent). */
   nullFields: string | null;
 }
@@ -44,6 +46,7 @@ export function defineMemberModel(sequelize: Sequelize) {
     markLocked: { type: DataTypes.BOOLEAN, allowNull: true },
     composite: { type: DataTypes.BOOLEAN, allowNull: true },
     studs: { type: DataTypes.INTEGER, allowNull: true },
+    deflectionLimits: { type: DataTypes.JSON, allowNull: true },
     nullFields: { type: DataTypes.STRING(200), allowNull: true },
   });
 }

@@ -3,7 +3,7 @@ import { z } from 'zod';
 import type { AppContext } from '../app-context';
 import { authOf, requireRole } from '../auth/auth.middleware';
 import { idParams, validate } from '../middleware/validate.middleware';
-import { getCalcBookPdf } from '../services/calc-book.service';
+import { getCalcBookPdf, getMemberCalcSheetPdf } from '../services/calc-book.service';
 import { cautionHeader } from './schedule.routes';
 
 const calcBookQuery = z.object({
@@ -11,7 +11,14 @@ const calcBookQuery = z.object({
   level: z.string({ error: 'level must be a level id' }).min(1, 'level must be a level id').max(255, 'level is too long').optional(),
 });
 
-/** /api/schemes/:id/calc-book.pdf: the printable calculation report of a scheme. */
+const memberParams = idParams.extend({
+  memberId: z.string({ error: 'memberId must be a member id' }).min(1, 'memberId must be a member id').max(255, 'memberId is too long'),
+});
+
+/**
+ * /api/schemes/:id/calc-book.pdf: the printable calculation report of a scheme;
+ * /api/schemes/:id/members/:memberId/calc-sheet.pdf: one member's calc sheet (from the Member sheet).
+ */
 export function calcBookRoutes(ctx: AppContext): Router {
   const router = Router();
 
@@ -22,6 +29,20 @@ export function calcBookRoutes(ctx: AppContext): Router {
       { db: ctx.db, actor: { firmId: auth.firmId, userId: auth.userId } },
       params.id,
       { members: query.members, levelId: query.level, downloadedBy: auth.name },
+    );
+    res.setHeader('Content-Disposition', `attachment; filename="${filename}"`);
+    res.setHeader('X-Baywright-Caution', cautionHeader(caution));
+    res.type('application/pdf').send(pdf);
+  });
+
+  router.get('/:id/members/:memberId/calc-sheet.pdf', requireRole('export:read'), async (req, res) => {
+    const { params } = validate(req, { params: memberParams });
+    const auth = authOf(res);
+    const { filename, pdf, caution } = await getMemberCalcSheetPdf(
+      { db: ctx.db, actor: { firmId: auth.firmId, userId: auth.userId } },
+      params.id,
+      params.memberId,
+      { downloadedBy: auth.name },
     );
     res.setHeader('Content-Disposition', `attachment; filename="${filename}"`);
     res.setHeader('X-Baywright-Caution', cautionHeader(caution));

@@ -1,4 +1,4 @@
-import { buildCalcBook, type CalcBook, type CalcBookMembers } from '../../shared/report/calc-book.report';
+import { buildCalcBook, buildMemberCalcSheet, type CalcBook, type CalcBookMembers } from '../../shared/report/calc-book.report';
 import { AppError } from '../errors/app-error';
 import { renderCalcBookPdf } from '../pdf/calc-book.pdf';
 import type { SchemeServiceContext } from './plan-store.service';
@@ -70,4 +70,38 @@ export async function getCalcBookPdf(
   const membersPart = options.members === 'all' ? '-all' : '';
   const pdf = await renderCalcBookPdf(book, { author: preparedBy });
   return { filename: `${fileSlug(scheme.name)}-calc-book${levelPart}${membersPart}-r${scheme.revision}.pdf`, pdf, caution: book.caution };
+}
+
+/**
+ * One member's calc sheet (the Member sheet's download), from the scheme's current design
+ * (designed first when stale). A member the scheme does not have is a 404 naming it.
+ */
+export async function getMemberCalcSheetPdf(
+  ctx: SchemeServiceContext,
+  schemeId: string,
+  memberId: string,
+  options: { downloadedBy: string; date?: Date },
+): Promise<{ filename: string; pdf: Buffer; caution: string }> {
+  const { scheme, plan, design } = await loadSchemeDrafting(ctx, schemeId);
+  const date = options.date ?? new Date();
+  // As the Calc book: prepared by the scheme's engineer; who downloaded it is printed apart.
+  const preparedBy = await schemeEngineer(ctx, schemeId);
+  const project = await ctx.db.models.Project.findByPk(scheme.projectId);
+  const p = project?.get({ plain: true });
+  const sheet = buildMemberCalcSheet({
+    plan,
+    design,
+    project: { name: p?.name ?? '', number: p?.number ?? null, client: p?.client ?? null, address: p?.address ?? null },
+    scheme: { name: scheme.name, revision: scheme.revision },
+    designedRevision: design.revision,
+    designedAt: design.designedAt,
+    date: date.toISOString().slice(0, 10),
+    preparedBy,
+    downloadedBy: { name: options.downloadedBy, at: date.toISOString() },
+    memberId,
+  });
+  if (!sheet) throw new AppError(404, 'not_found', `Member "${memberId.slice(0, 60)}" is not a designed member of this scheme.`);
+  const mark = sheet.marks[0] || memberId;
+  const pdf = await renderCalcBookPdf(sheet, { author: preparedBy });
+  return { filename: `${fileSlug(scheme.name)}-calc-sheet-${fileSlug(mark)}-r${scheme.revision}.pdf`, pdf, caution: sheet.caution };
 }

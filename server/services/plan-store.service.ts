@@ -106,7 +106,7 @@ export function storageProblems(plan: Plan): PlanProblem[] {
 
 /** Member fields that are optional and may also be null: NULL in the column means absent
  *  unless the field is listed in null_fields. */
-const MEMBER_OPTIONAL_NULLABLE = ['minDepth_in', 'allowedNominalDepths', 'Lb_override_ft', 'bracing', 'mark', 'composite', 'studs'] as const;
+const MEMBER_OPTIONAL_NULLABLE = ['minDepth_in', 'allowedNominalDepths', 'Lb_override_ft', 'bracing', 'deflectionLimits', 'mark', 'composite', 'studs'] as const;
 
 function memberRow(schemeId: string, m: PlanMember, position: number): Omit<MemberAttributes, 'id'> {
   const explicitNulls = MEMBER_OPTIONAL_NULLABLE.filter((k) => k in m && m[k] === null);
@@ -130,6 +130,7 @@ function memberRow(schemeId: string, m: PlanMember, position: number): Omit<Memb
     markLocked: m.markLocked ?? null,
     composite: m.composite ?? null,
     studs: m.studs ?? null,
+    deflectionLimits: m.deflectionLimits ?? null,
     nullFields: explicitNulls.length > 0 ? explicitNulls.join(',') : null,
   };
 }
@@ -323,6 +324,7 @@ export async function readPlan(db: Db, scheme: SchemeAttributes, transaction?: T
       setOptional(m, 'allowedNominalDepths', r.allowedNominalDepths === null ? null : json(r.allowedNominalDepths), nulls.has('allowedNominalDepths'));
       setOptional(m, 'Lb_override_ft', r.lbOverrideFt, nulls.has('Lb_override_ft'));
       setOptional(m, 'bracing', r.bracing === null ? null : json(r.bracing), nulls.has('bracing'));
+      setOptional(m, 'deflectionLimits', r.deflectionLimits === null || r.deflectionLimits === undefined ? null : json(r.deflectionLimits), nulls.has('deflectionLimits'));
       setOptional(m, 'mark', r.mark, nulls.has('mark'));
       setOptional(m, 'markLocked', bool(r.markLocked));
       setOptional(m, 'composite', bool(r.composite), nulls.has('composite'));

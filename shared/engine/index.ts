@@ -28,6 +28,8 @@ export { runTakedown } from './takedown/gravity-takedown.takedown';
 export type { TakedownResult, MemberTakedown, EndReaction } from './takedown/gravity-takedown.takedown';
 export { designScheme, SCHEME_CAUTION } from './scheme/design-scheme.scheme';
 export type { SchemeResult, SchemeMember, SchemeOptions } from './scheme/design-scheme.scheme';
+export { memberBracingSource, memberDeflectionLimits } from './scheme/member-settings.scheme';
+export type { BracingUsed, DeflectionLimitsUsed, SettingSource } from './scheme/member-settings.scheme';
 // Layout and bay study: the Infill tool's rules and framing options for bays (calc study).
 export { findBay, bayPolygon, infillBay, infillDirection, applyInfill } from './layout/bay-infill.layout';
 export type { Bay, InfillRequest, InfillResult } from './layout/bay-infill.layout';

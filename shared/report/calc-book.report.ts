@@ -4,7 +4,7 @@
  * Pure: the PDF renderer (server/pdf/calc-book.pdf.ts) only lays it out, so everything the
  * report states is testable here. Numbers stay numbers (CalcNumber) until they are drawn.
  */
-import { E_KSI, STANDARDS } from '../engine/index';
+import { E_KSI, STANDARDS, memberBracingSource, memberDeflectionLimits } from '../engine/index';
 import type { MemberCheck, MemberLoad, SchemeMember, SchemeResult } from '../engine/index';
 import type { Plan } from '../schemas/plan.schema';
 
@@ -150,11 +150,11 @@ function attentionReasons(m: SchemeMember, problems: SchemeResult['problems']): 
   return reasons;
 }
 
-function describeBracing(m: SchemeMember): string {
+function describeBracing(m: SchemeMember, setOnMember = false): string {
   const b = m.bracing;
-  if (b === 'continuous') return 'continuous (deck across the span)';
+  if (b === 'continuous') return setOnMember ? 'continuous' : 'continuous (deck across the span)';
   if (b === 'none') return 'at the supports only';
-  return b.points_ft.length === 0 ? 'at the supports only' : `at ${b.points_ft.map((x) => `${x.toFixed(2)} ft`).join(', ')} (members framing in)`;
+  return b.points_ft.length === 0 ? 'at the supports only' : `at ${b.points_ft.map((x) => `${x.toFixed(2)} ft`).join(', ')}${setOnMember ? '' : ' (members framing in)'}`;
 }
 
 function loadRow(l: MemberLoad): CalcCell[] {
@@ -175,7 +175,7 @@ const resistance = (c: MemberCheck): string =>
   c.phi !== undefined ? `φ = ${c.phi.toFixed(2)} (LRFD)` : c.omega !== undefined ? `Ω = ${c.omega.toFixed(2)} (ASD)` : '—';
 
 /** The key working of a check: quantity, value, unit, where it comes from. */
-export function checkWorking(c: MemberCheck): CalcCell[][] {
+export function checkWorking(c: MemberCheck, limitRef = 'IBC Table 1604.3'): CalcCell[][] {
   const rows: CalcCell[][] = [];
   const add = (q: string, v: number | null | undefined, digits: number, unit: string, ref: string) => {
     if (v === undefined) return;
@@ -209,7 +209,7 @@ export function checkWorking(c: MemberCheck): CalcCell[][] {
     add('Vn = 0.6 Fy Aw Cv1', c.Vn_kip, 1, 'kip', 'Eq. G2-1');
   } else {
     add('Ix', c.Ix_in4, 0, 'in⁴', 'AISC Shapes Database v15.0');
-    add('Limit span/n, n', c.limit_n, 0, '', 'IBC Table 1604.3');
+    add('Limit span/n, n', c.limit_n, 0, '', limitRef);
     add('Maximum at', c.at_ft, 2, 'ft', 'from the start support');
     if (c.loadCase) rows.push(['Loads', c.loadCase, '', 'unfactored']);
   }
@@ -217,7 +217,15 @@ export function checkWorking(c: MemberCheck): CalcCell[][] {
   return rows;
 }
 
-function memberSection(m: SchemeMember, others: string[], levelName: string, reasons: string[]): CalcSection {
+/** Where a member's deflection limits come from (the design basis unless set on the member). */
+function limitRefs(plan: Plan, memberId: string): { live: string; total: string } {
+  const pm = plan.members.find((x) => x.id === memberId);
+  const used = memberDeflectionLimits(plan.designBasis, { deflectionLimits: pm?.deflectionLimits ?? null });
+  const ref = (s: 'member' | 'basis') => (s === 'member' ? 'set on this member' : 'design basis (IBC Table 1604.3 defaults)');
+  return { live: ref(used.source.live), total: ref(used.source.total) };
+}
+
+function memberSection(m: SchemeMember, others: string[], levelName: string, reasons: string[], refs?: { live: string; total: string }): CalcSection {
   const d = m.design;
   const title = `${m.mark} — ${m.shape ?? 'no shape'} (${m.kind} ${m.id})`;
   const blocks: CalcBlock[] = [];
@@ -316,7 +324,7 @@ function memberSection(m: SchemeMember, others: string[], levelName: string, rea
     ]),
   });
   for (const c of d.checks) {
-    const rows = checkWorking(c);
+    const rows = checkWorking(c, c.name === 'deflectionLive' ? refs?.live : c.name === 'deflectionTotal' ? refs?.total : undefined);
     if (rows.length === 0) continue;
     blocks.push({
       type: 'table',
@@ -564,7 +572,7 @@ export function buildCalcBook(input: CalcBookInput): CalcBook {
         },
       ],
     });
-    for (const m of ofLevel) sections.push(memberSection(m, othersOf.get(m.id) ?? [], level.name, flagged.get(m.id) ?? []));
+    for (const m of ofLevel) sections.push(memberSection(m, othersOf.get(m.id) ?? [], level.name, flagged.get(m.id) ?? [], limitRefs(plan, m.id)));
   }
 
   // Column stack and column pages (AISC 360-16 Chapter E)
@@ -696,5 +704,106 @@ export function buildCalcBook(input: CalcBookInput): CalcBook {
     marks: [...new Set(members.map((m) => m.mark))].sort(compareMarks),
     sections,
     runningTitle: `Baywright calc book · ${project.name} · ${scheme.name} · rev ${scheme.revision} · ${input.date}`,
+  };
+}
+
+/** A one-member calc sheet: the calc book's member working with a title block, for one member. */
+export interface MemberCalcSheetInput extends Omit<CalcBookInput, 'options'> {
+  memberId: string;
+}
+
+const sourceText = (s: 'member' | 'basis') => (s === 'member' ? 'set on this member' : 'from the design basis');
+
+/**
+ * The calc sheet of one member (the Member sheet's download): title block, caution, the
+ * member's loads, Mu / Vu (Ma / Va in ASD), unbraced segments, every check with its clause
+ * and working, deflection against the limits used (with where each came from), composite
+ * stages where composite, reactions. Null when the design has no such member.
+ */
+export function buildMemberCalcSheet(input: MemberCalcSheetInput): CalcBook | null {
+  const { plan, design, project, scheme } = input;
+  const m = (design.members ?? []).find((x) => x.id === input.memberId);
+  if (!m) return null;
+  const pm = plan.members.find((x) => x.id === m.id);
+  const basis = plan.designBasis;
+  const level = plan.levels.find((l) => l.id === m.level);
+  const limits = memberDeflectionLimits(basis, { deflectionLimits: pm?.deflectionLimits ?? null });
+  const bracingSource = memberBracingSource({ bracing: pm?.bracing ?? null, Lb_override_ft: pm?.Lb_override_ft ?? null });
+  const reasons = attentionReasons(m, design.problems ?? []);
+  const section = memberSection(m, [], level?.name ?? m.level, reasons, limitRefs(plan, m.id));
+  const d = m.design;
+  const lrfd = (d?.method ?? basis.method) === 'LRFD';
+  const settingsRows: [string, CalcCell][] = [
+    [lrfd ? 'Mu (required flexural strength), kip-ft' : 'Ma (required flexural strength), kip-ft', d ? num(d.Mr_kipft, 1) : null],
+    [lrfd ? 'φbMn (available), kip-ft' : 'Mn/Ωb (available), kip-ft', d ? num(d.Mc_kipft, 1) : null],
+    [lrfd ? 'Vu (required shear strength), kip' : 'Va (required shear strength), kip', d ? num(d.Vr_kip, 1) : null],
+    [lrfd ? 'φvVn (available), kip' : 'Vn/Ωv (available), kip', d ? num(d.Vc_kip, 1) : null],
+    ['Lb of the governing segment, ft', d ? num(d.Lb_ft, 2) : null],
+    ['Bracing', `${describeBracing(m, bracingSource.bracing === 'member')}; ${sourceText(bracingSource.bracing)}`],
+    ['Lb override', bracingSource.Lb_override_ft === null ? 'none (Lb between brace points)' : `${bracingSource.Lb_override_ft.toFixed(2)} ft on every segment, Cb = 1.0; set on this member`],
+    ['Live-load deflection limit', `${deflLimit(limits.live)}; ${sourceText(limits.source.live)}`],
+    ['Total-load deflection limit', `${deflLimit(limits.total)}; ${sourceText(limits.source.total)}`],
+    ['Live-load deflection, in', d ? num(d.deflectionLive_in, 3) : null],
+    ['Total-load deflection, in', d ? num(d.deflectionTotal_in, 3) : null],
+  ];
+  // Strength and serviceability summary first, after the member's own fields.
+  const blocks = [...section.blocks];
+  const at = blocks.findIndex((b) => b.type === 'fields');
+  blocks.splice(at + 1, 0, { type: 'table', caption: 'Summary: demand, capacity and the limits used', columns: [{ label: 'Quantity', weight: 3 }, { label: 'Value', weight: 3.2 }], rows: settingsRows });
+  if (d?.composite) {
+    const c = d.composite;
+    blocks.push({
+      type: 'table',
+      caption: 'Composite stages (AISC 360-16 Chapter I)',
+      columns: [
+        { label: 'Stage', weight: 1.6 },
+        { label: 'Mr, kip-ft', weight: 1, align: 'right' },
+        { label: 'Mc, kip-ft', weight: 1, align: 'right' },
+        { label: 'Ratio', weight: 0.8, align: 'right' },
+        { label: 'Deflection, in', weight: 1, align: 'right' },
+        { label: 'Basis', weight: 3 },
+      ],
+      rows: [
+        ['Construction (bare steel, wet concrete)', num(c.construction.Mr_kipft, 1), num(c.construction.Mc_kipft, 1), num(c.construction.ratio, 3), num(c.construction.deflection_in, 3), `${c.construction.combination}, ${c.construction.clause}; Lb ${c.construction.Lb_ft.toFixed(2)} ft`],
+        ['Composite (concrete hardened)', num(d.Mr_kipft, 1), num(c.Mc_kipft, 1), num(d.ratios.flexure, 3), num(c.deflectionLive_in, 3), `${c.studs} studs, ${Math.round(c.percentComposite * 100)} % composite, I_LB ${c.Ilb_in4.toFixed(0)} in⁴ (Commentary Eq. C-I3-1); live-load deflection`],
+      ],
+    });
+  }
+  const title = `${m.mark} — ${m.shape ?? 'no shape'}`;
+  return {
+    title: `Member calc sheet — ${project.name}, ${scheme.name}, ${m.mark}`,
+    caution: CALC_BOOK_CAUTION,
+    marks: [m.mark],
+    sections: [
+      {
+        id: 'cover',
+        title: 'Member calc sheet',
+        blocks: [
+          { type: 'heading', text: `${project.name} — ${scheme.name} — ${m.mark}` },
+          {
+            type: 'fields',
+            rows: [
+              ['Project', project.name],
+              ...(project.number ? ([['Project number', project.number]] as [string, CalcCell][]) : []),
+              ...(project.client ? ([['Client', project.client]] as [string, CalcCell][]) : []),
+              ...(project.address ? ([['Address', project.address]] as [string, CalcCell][]) : []),
+              ['Scheme', scheme.name],
+              ['Plan revision', `${scheme.revision}${input.designedRevision !== undefined && input.designedRevision !== scheme.revision ? ` (design is of revision ${input.designedRevision})` : ''}`],
+              ...(input.designedAt ? ([['Designed', input.designedAt.slice(0, 16).replace('T', ' ') + ' UTC']] as [string, CalcCell][]) : []),
+              ['Date', input.date],
+              ['Prepared by', input.preparedBy],
+              ...(input.downloadedBy ? ([['Downloaded by', `${input.downloadedBy.name}, ${input.downloadedBy.at.slice(0, 16).replace('T', ' ')} UTC`]] as [string, CalcCell][]) : []),
+              ['Member', `${m.mark} (${m.kind}), ${level?.name ?? m.level}`],
+              ['Design method', basis.method === 'LRFD' ? 'LRFD, ASCE 7-16 §2.3.1 combinations' : 'ASD, ASCE 7-16 §2.4.1 combinations'],
+              ['Steel Fy, ksi; E, ksi', `${basis.Fy_ksi}; ${E_KSI}`],
+              ['Standards', 'AISC 360-16 (Chapters F, G; I where composite), ASCE 7-16 §2.3/§2.4 and §4.7, IBC Table 1604.3, AISC Shapes Database v15.0'],
+            ],
+          },
+          { type: 'caution', text: CALC_BOOK_CAUTION },
+        ],
+      },
+      { ...section, title, blocks },
+    ],
+    runningTitle: `Baywright member calc sheet · ${project.name} · ${scheme.name} · ${m.mark} · rev ${scheme.revision} · ${input.date}`,
   };
 }

@@ -143,6 +143,18 @@ export const bracingSchema = z.union([
 ]);
 export type PlanBracing = z.infer<typeof bracingSchema>;
 
+/**
+ * Per-member deflection limits (design-basis §5: limits are "editable per project"; this lets
+ * the engineer tighten or set one member, e.g. live span/600 under cladding). Denominators n of
+ * span/n; a number sets that limit on this member, null or absent follows designBasis.deflectionLimits.
+ * A member cannot switch a check off: null means "as the design basis says", never "not checked".
+ */
+export const memberDeflectionLimitsSchema = z.object({
+  live: deflectionDenominator.nullable().optional(),
+  total: deflectionDenominator.nullable().optional(),
+});
+export type PlanMemberDeflectionLimits = z.infer<typeof memberDeflectionLimitsSchema>;
+
 export const memberSchema = z.object({
   id: z.string().min(1),
   level: z.string().min(1),
@@ -158,6 +170,8 @@ export const memberSchema = z.object({
   Lb_override_ft: alongSpanFt.nullable().optional(),
   /** Bracing override; without it the engine derives bracing from deck and framing. */
   bracing: bracingSchema.nullable().optional(),
+  /** Per-member deflection limits; null (or absent) follows the design basis (see memberDeflectionLimitsSchema). */
+  deflectionLimits: memberDeflectionLimitsSchema.nullable().optional(),
   mark: z.string().nullable().optional(),
   markLocked: z.boolean().optional(),
   /** Version 2: null (or absent) follows designBasis.composite; true/false forces composite on/off. */

@@ -16,6 +16,7 @@ import { PlanEditor } from '../features/editor/components/plan-editor.component'
 import { MemberSheet } from '../features/member-sheet/components/member-sheet.component';
 import { ColumnSheet } from '../features/column-stack/components/column-sheet.component';
 import { buildColumnSchedule } from '../../shared/drafting/column-schedule.drafting';
+import { memberCalcSheetHref } from '../features/member-sheet/api/member-calc-sheet.api';
 import { useCreateScheme } from '../features/schemes/api/create-scheme.api';
 import { useSchemes } from '../features/schemes/api/get-schemes.api';
 import { BuildingView } from '../features/building-view/components/building-view.component';
@@ -173,7 +174,7 @@ function SchemePlan({
               </div>
             );
           }}
-          renderMemberSheet={({ member, planMember, plan, result, canEdit: can, lockShape, setConstraints, close }) => (
+          renderMemberSheet={({ member, planMember, plan, result, canEdit: can, lockShape, setConstraints, setMemberSettings, saved, close }) => (
             <MemberSheet
               member={member}
               designBasis={plan.designBasis}
@@ -182,6 +183,9 @@ function SchemePlan({
               canEdit={can}
               onLockShape={lockShape}
               onConstraints={setConstraints}
+              onMemberSettings={setMemberSettings}
+              calcSheetHref={memberCalcSheetHref(schemeId, member.id)}
+              saved={saved}
               onClose={close}
               names={planNamer(plan, new Map(result.members.map((m) => [m.id, m.mark])))}
               problems={result.problems.filter((p) => p.elementId === member.id).map((p) => describeProblem(p.message, planNamer(plan, new Map(result.members.map((m) => [m.id, m.mark])))))}

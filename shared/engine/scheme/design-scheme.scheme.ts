@@ -23,6 +23,7 @@ import { assignMarks, sharedMarkConflicts, type MarkInput } from './member-marks
 import { compositeMemberInput, compositeSites, planNeedsWetStage, wetStagePlan, type MemberCompositeStatus } from './composite-plan.scheme';
 import type { CompositeMemberInput } from '../sizing/member-design.types';
 import { schemeColumns, type SchemeColumn } from './column-design.scheme';
+import { memberDeflectionLimits } from './member-settings.scheme';
 
 export interface SchemeOptions {
   /** Members of the same level, kind, span, load layout and bracing get one size: the heaviest demand governs. */
@@ -208,7 +209,7 @@ export function memberDesignInput(plan: Plan, mt: MemberTakedown, forcedShape: s
     bracing: mt.bracing,
     method: plan.designBasis.method,
     Fy_ksi: plan.designBasis.Fy_ksi,
-    deflectionLimits: plan.designBasis.deflectionLimits,
+    deflectionLimits: m.deflectionLimits ? limitsOnly(memberDeflectionLimits(plan.designBasis, m)) : plan.designBasis.deflectionLimits,
     shape: forcedShape ?? m.shape,
     maxDepth_in: m.maxDepth_in,
     minDepth_in: m.minDepth_in ?? null,
@@ -217,6 +218,8 @@ export function memberDesignInput(plan: Plan, mt: MemberTakedown, forcedShape: s
     Lb_override_ft: m.Lb_override_ft ?? null,
   };
 }
+
+const limitsOnly = (d: { live: number | null; total: number | null }) => ({ live: d.live, total: d.total });
 
 /** Rounding of the design key: positions and magnitudes far below any engineering meaning. */
 const n9 = (v: number) => Math.round(v * 1e9) / 1e9;
@@ -267,8 +270,9 @@ class DesignTable {
     }
     push(basis.method === 'LRFD' ? 0 : 1);
     push(basis.Fy_ksi);
-    push(basis.deflectionLimits.live ?? ABSENT);
-    push(basis.deflectionLimits.total ?? ABSENT);
+    const limits = m.deflectionLimits ? memberDeflectionLimits(basis, m) : basis.deflectionLimits;
+    push(limits.live ?? ABSENT);
+    push(limits.total ?? ABSENT);
     push(m.maxDepth_in ?? ABSENT);
     push(m.minDepth_in ?? ABSENT);
     const allowed = m.allowedNominalDepths ?? [];
@@ -376,7 +380,11 @@ function groupKey(mt: MemberTakedown): string {
     .map((l) => `${l.case}${l.kind}${'x_ft' in l ? l.x_ft.toFixed(1) : 'from_ft' in l ? `${l.from_ft.toFixed(1)}-${l.to_ft.toFixed(1)}` : ''}`)
     .sort()
     .join(',');
-  return [mt.level, mt.kind, mt.span_ft.toFixed(2), JSON.stringify(mt.bracing), mt.member.shape ?? '', layout].join('|');
+  const key = [mt.level, mt.kind, mt.span_ft.toFixed(2), JSON.stringify(mt.bracing), mt.member.shape ?? '', layout];
+  // Members with their own Lb or deflection limits group only with members that set the same.
+  if (mt.member.Lb_override_ft != null) key.push(`Lb${mt.member.Lb_override_ft}`);
+  if (mt.member.deflectionLimits) key.push(`defl${JSON.stringify(mt.member.deflectionLimits)}`);
+  return key.join('|');
 }
 
 /** The wet-concrete stage of a plan: composite sites and the construction takedown. */

@@ -391,6 +391,10 @@ function draftingRows(): RouteCase[] {
       method: 'GET', route: '/api/schemes/:id/calc-book.pdf', allowed: readers, okStatus: 200,
       path: scheme('own', '/calc-book.pdf?level=L2'), foreignPath: scheme('foreign', '/calc-book.pdf'),
     },
+    {
+      method: 'GET', route: '/api/schemes/:id/members/:memberId/calc-sheet.pdf', allowed: readers, okStatus: 200,
+      path: scheme('own', '/members/b2/calc-sheet.pdf'), foreignPath: scheme('foreign', '/members/b2/calc-sheet.pdf'),
+    },
     { method: 'GET', route: '/api/schemes/:id/model.ifc', allowed: readers, okStatus: 200, path: scheme('own', '/model.ifc'), foreignPath: scheme('foreign', '/model.ifc') },
   ];
 }

@@ -12,7 +12,7 @@ import {
 } from './plan-edits';
 import { applyInfill, bayPolygon, findBay, infillBay, infillDirection } from '../../../../shared/engine/index';
 import { fitView, panBy, zoomAt } from '../canvas/view-transform';
-import type { Plan, PlanZone } from '../../../../shared/schemas/plan.schema';
+import type { Plan, PlanMember, PlanZone } from '../../../../shared/schemas/plan.schema';
 
 /** 'record': one undo step when the plan changes. 'none': never in the undo history. */
 export type UndoMode = 'record' | 'none';
@@ -226,6 +226,25 @@ export const ACTIONS = {
     id: 'member.setConstraints', label: 'Depth limits', undo: 'record', edits: true,
     run: (s, a) => ({
       plan: { ...s.plan, members: s.plan.members.map((m) => (m.id === a.id ? { ...m, maxDepth_in: a.maxDepth_in, minDepth_in: a.minDepth_in, allowedNominalDepths: a.allowedNominalDepths } : m)) },
+    }),
+  }),
+  'member.setBracing': action<{ id: string; bracing: PlanMember['bracing']; Lb_override_ft: number | null; deflectionLimits: PlanMember['deflectionLimits'] }>({
+    id: 'member.setBracing', label: 'Bracing and deflection limits', undo: 'record', edits: true,
+    run: (s, a) => ({
+      plan: {
+        ...s.plan,
+        members: s.plan.members.map((m) => {
+          if (m.id !== a.id) return m;
+          // Absent fields follow the framing and the design basis; only what is set is written.
+          const { bracing: _b, Lb_override_ft: _lb, deflectionLimits: _d, ...rest } = m;
+          return {
+            ...rest,
+            ...(a.bracing ? { bracing: a.bracing } : {}),
+            ...(a.Lb_override_ft != null ? { Lb_override_ft: a.Lb_override_ft } : {}),
+            ...(a.deflectionLimits ? { deflectionLimits: a.deflectionLimits } : {}),
+          };
+        }),
+      },
     }),
   }),
   'plan.setDesignBasis': action<{ designBasis: Plan['designBasis'] }>({

@@ -9,7 +9,7 @@ import type { Plan } from '../../../../shared/schemas/plan.schema';
 import type { PlanPoint, View } from '../store/editor.types';
 import { zoneTint } from '../tools/zone-presets';
 import type { StaticGeometry } from './static-geometry';
-import type { UnitSystem } from '../../../lib/units';
+import { formatValue, type UnitSystem } from '../../../lib/units';
 import { MONO, SANS, lengthText, lineLoadText, pointLoadText, type PlanTheme } from './plan-theme';
 import { toScreen, visibleBounds } from './view-transform';
 import { memberChipTexts } from '../members/member-status';
@@ -22,8 +22,17 @@ export const MEMBER_WIDTH_PX = { girder: 4.5, beam: 2 } as const;
 /** Labels are drawn on members at least this long on screen. */
 export const LABEL_MIN_PX = 80;
 
+export interface DrawStaticOptions {
+  /** Draw each member's end reactions (the Plan's Reactions toggle). */
+  reactions?: boolean;
+  /** Filled in when drawn: reactions printed, and those left out because no free spot was near the end. */
+  stats?: { reactionsDrawn: number; reactionsHidden: number };
+}
+
 /** Returns how many member labels (size and ratio) were drawn. */
-export function drawStatic(ctx: CanvasRenderingContext2D, plan: Plan, geo: StaticGeometry, view: View, theme: PlanTheme, system: UnitSystem = 'US', labelBoxes?: LabelBox[]): number {
+export function drawStatic(
+  ctx: CanvasRenderingContext2D, plan: Plan, geo: StaticGeometry, view: View, theme: PlanTheme, system: UnitSystem = 'US', labelBoxes?: LabelBox[], options: DrawStaticOptions = {},
+): number {
   // The paper is the container's background, so an underlay can show beneath.
   ctx.save();
   const extents = gridExtents(plan, geo);
@@ -117,6 +126,10 @@ export function drawStatic(ctx: CanvasRenderingContext2D, plan: Plan, geo: Stati
   for (const { p, at } of points) placer.reserve({ x0: at[0] - 8, y0: at[1] - 8, x1: at[0] + 8, y1: at[1] + 8, what: `point load ${p.id} symbol` });
   const labelled = drawMemberLabels(ctx, geo, view, theme, onScreen, placer);
   for (const { p, at } of points) drawPointLoad(ctx, at, pointLoadText(p.D_kip, p.L_kip, system), theme, placer, p.id);
+  if (options.reactions) {
+    const counts = drawReactions(ctx, geo, view, theme, system, onScreen, placer);
+    if (options.stats) Object.assign(options.stats, counts);
+  }
   ctx.font = `10px ${MONO}`;
   ctx.fillStyle = theme.load;
   ctx.textAlign = 'left';
@@ -408,6 +421,61 @@ function drawMemberLabels(ctx: CanvasRenderingContext2D, geo: StaticGeometry, vi
   }
   ctx.restore();
   return drawn;
+}
+
+/**
+ * Each end reaction as "R 24.3" (in the reader's force unit; the legend says which combination),
+ * just inside the member end, on either side of it, nearer or farther along; a reaction with no
+ * free spot is left out (and counted) rather than drawn over another label.
+ */
+function drawReactions(
+  ctx: CanvasRenderingContext2D, geo: StaticGeometry, view: View, theme: PlanTheme, system: UnitSystem, onScreen: (p: PlanPoint) => boolean, placer: LabelPlacer,
+): { reactionsDrawn: number; reactionsHidden: number } {
+  let reactionsDrawn = 0;
+  let reactionsHidden = 0;
+  ctx.save();
+  ctx.font = `600 9.5px ${MONO}`;
+  ctx.textBaseline = 'middle';
+  ctx.textAlign = 'left';
+  for (const r of geo.reactions) {
+    const [ax, ay] = toScreen(view, r.start);
+    const [bx, by] = toScreen(view, r.end);
+    const len = Math.hypot(bx - ax, by - ay);
+    if (len < LABEL_MIN_PX) continue;
+    const ux = (bx - ax) / len;
+    const uy = (by - ay) / len;
+    for (const end of ['start', 'end'] as const) {
+      const at = end === 'start' ? r.start : r.end;
+      if (!onScreen(at)) continue;
+      const kip = end === 'start' ? r.startKip : r.endKip;
+      const text = `R ${formatValue('force_kip', kip, system, { digits: 1 })}`;
+      const tw = ctx.measureText(text).width;
+      const [ex, ey] = end === 'start' ? [ax, ay] : [bx, by];
+      const inward = end === 'start' ? 1 : -1;
+      const candidates: LabelBox[] = [];
+      for (const along of [16, 30, 46]) {
+        for (const side of [1, -1]) {
+          // Centre of the text box: along the member from the end, then off to one side.
+          const cx = ex + ux * along * inward + -uy * side * 11;
+          const cy = ey + uy * along * inward + ux * side * 11;
+          candidates.push({ x0: cx - tw / 2, y0: cy - 6, x1: cx + tw / 2, y1: cy + 6, what: `reaction ${r.id} ${end}` });
+        }
+      }
+      const spot = placer.place(candidates);
+      if (!spot) {
+        reactionsHidden++;
+        continue;
+      }
+      ctx.lineWidth = 3;
+      ctx.strokeStyle = theme.paper;
+      ctx.fillStyle = theme.ink;
+      ctx.strokeText(text, spot.x0, (spot.y0 + spot.y1) / 2);
+      ctx.fillText(text, spot.x0, (spot.y0 + spot.y1) / 2);
+      reactionsDrawn++;
+    }
+  }
+  ctx.restore();
+  return { reactionsDrawn, reactionsHidden };
 }
 
 function drawPointLoad(ctx: CanvasRenderingContext2D, [x, y]: [number, number], text: string, theme: PlanTheme, placer: LabelPlacer, id: string) {

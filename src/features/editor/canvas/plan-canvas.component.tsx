@@ -15,7 +15,7 @@ import { scaleBar } from './view-transform';
 import { pickAt } from '../tools/hit-test.tool';
 import { memberStatus } from '../members/member-status';
 import { toPlan } from './view-transform';
-import type { UnitSystem } from '../../../lib/units';
+import { unitLabel, type UnitSystem } from '../../../lib/units';
 import { useUnits } from '../../../lib/units-context';
 
 export type PlanViewArgs = { scale: number; x: number; y: number };
@@ -105,7 +105,7 @@ export function PlanCanvas({ store, design, controller, label, renderUnderlay }:
       if (s.plan !== prev.plan || s.levelId !== prev.levelId) {
         rebuild();
         staticLayer.current?.batchDraw();
-      } else if (s.view !== prev.view) staticLayer.current?.batchDraw();
+      } else if (s.view !== prev.view || s.showReactions !== prev.showReactions) staticLayer.current?.batchDraw();
       if (s.view !== prev.view || s.selection !== prev.selection || s.draft !== prev.draft || s.hover !== prev.hover || s.tool !== prev.tool || s.plan !== prev.plan || s.studyPreview !== prev.studyPreview) {
         overlayLayer.current?.batchDraw();
       }
@@ -209,7 +209,9 @@ export function PlanCanvas({ store, design, controller, label, renderUnderlay }:
                 }
                 return;
               }
-              const labelled = drawStatic(ctx._context, store.getState().plan, g, view, theme.current, systemRef.current);
+              const stats = { reactionsDrawn: 0, reactionsHidden: 0 };
+              const showReactions = !!store.getState().showReactions;
+              const labelled = drawStatic(ctx._context, store.getState().plan, g, view, theme.current, systemRef.current, undefined, { reactions: showReactions, stats });
               // Performance probe: a test may set window.__planDrawProbe = [] to collect draw times.
               (globalThis as { __planDrawProbe?: number[] }).__planDrawProbe?.push(performance.now() - t0);
               // Read-back for tests and tools: the view and how many members carry a printed size.
@@ -221,6 +223,8 @@ export function PlanCanvas({ store, design, controller, label, renderUnderlay }:
                 el.dataset.labelledMembers = String(labelled);
                 el.dataset.members = String(g.memberCount);
                 el.dataset.units = systemRef.current;
+                el.dataset.reactionsDrawn = String(showReactions ? stats.reactionsDrawn : 0);
+                el.dataset.reactionsHidden = String(showReactions ? stats.reactionsHidden : 0);
               }
             }}
           />
@@ -236,6 +240,7 @@ export function PlanCanvas({ store, design, controller, label, renderUnderlay }:
         </Layer>
       </Stage>
       <ScaleIndicator store={store} system={system} />
+      <ReactionsLegend store={store} design={design} system={system} />
       {tooltip.content ? (
         <div
           role="tooltip"
@@ -255,6 +260,19 @@ function UnderlayNodes({ store, render }: { store: EditorStore; render: (view: P
   const x = useStore(store, (s) => s.view.x);
   const y = useStore(store, (s) => s.view.y);
   return <>{render({ scale, x, y })}</>;
+}
+
+/** What the R figures on the Plan are, shown while they are drawn. */
+function ReactionsLegend({ store, design, system }: { store: EditorStore; design: LiveDesign; system: UnitSystem }) {
+  const show = useStore(store, (s) => !!s.showReactions);
+  const snap = useSyncExternalStore(design.subscribe, design.getSnapshot);
+  if (!show) return null;
+  const method = snap.result?.method === 'ASD' ? 'ASD' : 'LRFD';
+  return (
+    <p data-testid="reactions-legend" className="pointer-events-none absolute bottom-3 left-3 rounded-[2px] bg-paper-raised/90 px-1.5 py-1 text-[11px] text-ink">
+      R = end reaction, {method === 'LRFD' ? 'LRFD factored' : 'ASD service'} (governing ASCE 7-16 combination), {unitLabel('force_kip', system)}. Zoom in where one is left out.
+    </p>
+  );
 }
 
 function ScaleIndicator({ store, system }: { store: EditorStore; system: UnitSystem }) {

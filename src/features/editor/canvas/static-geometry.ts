@@ -5,11 +5,15 @@ import { planNamer } from '../../../../shared/drafting/element-names.drafting';
  * in a handful of calls. Paths are in plan feet; the view transform is applied when drawn.
  */
 import type { Plan } from '../../../../shared/schemas/plan.schema';
+import type { SchemeMember } from '../../../../shared/engine/index';
 import type { LiveDesignSnapshot } from '../design/live-design';
 import { memberStatus, type MemberStatus } from '../members/member-status';
 import type { UtilisationBand } from '../../../lib/utilisation';
 import type { PlanPoint } from '../store/editor.types';
 import { gridIntersectionLabel } from '../../../../shared/drafting/grid-location.drafting';
+import { factoredReaction } from '../../../../shared/drafting/schedule.drafting';
+
+type SchemeReactionEnd = SchemeMember['reactions']['start'];
 
 export interface MemberLabel {
   id: string;
@@ -30,6 +34,13 @@ export interface StaticGeometry {
   /** Loads in plan units (kip, klf); their labels are written in the reader's units when drawn. */
   pointLoads: { id: string; at: PlanPoint; D_kip: number; L_kip: number }[];
   lineLoads: { id: string; start: PlanPoint; end: PlanPoint; D_klf: number; L_klf: number }[];
+  /**
+   * End reactions of each designed member, kip: LRFD factored or ASD service, the governing
+   * ASCE 7-16 combination of its unfactored D, L (reduced), Lr and S (as the plan sheet prints).
+   */
+  reactions: { id: string; start: PlanPoint; end: PlanPoint; startKip: number; endKip: number }[];
+  /** Design method the reactions are for (null before the first design). */
+  reactionMethod: 'LRFD' | 'ASD' | null;
   memberCount: number;
 }
 
@@ -61,6 +72,15 @@ export function buildStaticGeometry(plan: Plan, levelId: string, design: LiveDes
     g.count++;
     labels.push({ id: m.id, kind: m.kind, start: m.start, end: m.end, status });
   }
+  const method = design.result?.method === 'ASD' ? 'ASD' : 'LRFD';
+  const reactions: StaticGeometry['reactions'] = [];
+  for (const m of plan.members) {
+    if (m.level !== levelId) continue;
+    const dm = design.byId.get(m.id);
+    if (!dm || !dm.design) continue;
+    const f = (r: SchemeReactionEnd) => factoredReaction(method, { D_kip: r.D_kip, L_kip: r.L_kip, Lr_kip: r.Lr_kip ?? 0, S_kip: r.S_kip ?? 0 }).factored_kip;
+    reactions.push({ id: m.id, start: m.start, end: m.end, startKip: f(dm.reactions.start), endKip: f(dm.reactions.end) });
+  }
   const zoneIndex = new Map(plan.zones.map((z, i) => [z.id, i]));
   // Beams first so girders draw over them.
   const members = [...groups.values()].sort((a, b) => (a.kind === b.kind ? 0 : a.kind === 'beam' ? -1 : 1));
@@ -73,6 +93,8 @@ export function buildStaticGeometry(plan: Plan, levelId: string, design: LiveDes
     columnLabels: columnLabels(plan, levelId, design),
     pointLoads: plan.pointLoads.filter((p) => p.level === levelId).map((p) => ({ id: p.id, at: [p.x_ft, p.y_ft] as PlanPoint, D_kip: p.D_kip, L_kip: p.L_kip })),
     lineLoads: plan.lineLoads.filter((w) => w.level === levelId).map((w) => ({ id: w.id, start: w.start, end: w.end, D_klf: w.D_klf, L_klf: w.L_klf })),
+    reactions,
+    reactionMethod: design.result ? method : null,
     memberCount: labels.length,
   };
 }

@@ -30,6 +30,10 @@ export interface MemberSheetSlotArgs {
   canEdit: boolean;
   lockShape: (shape: string | null) => void;
   setConstraints: (c: { maxDepth_in: number | null; minDepth_in: number | null; allowedNominalDepths: number[] | null }) => void;
+  /** Bracing, Lb override and deflection limits set on the member (null: follow the framing / design basis). */
+  setMemberSettings: (s: { bracing: PlanMember['bracing'] | null; Lb_override_ft: number | null; deflectionLimits: PlanMember['deflectionLimits'] | null }) => void;
+  /** Whether the plan on screen is the saved revision (exports are of the saved one). */
+  saved: boolean;
   close: () => void;
 }
 
@@ -250,6 +254,7 @@ export function PlanEditor(props: PlanEditorProps) {
           <ActionButton store={store} id="view.fit" />
           <EditMenu store={store} canEdit={canEdit} />
           <UnitsSwitch className="mx-1" />
+          <ReactionsToggle store={store} />
           {props.renderUnderlayPanel ? (
             <Button variant="quiet" className="h-8 text-xs" aria-expanded={showUnderlay} onClick={() => setShowUnderlay((v) => !v)}>
               Underlay
@@ -338,6 +343,8 @@ export function PlanEditor(props: PlanEditorProps) {
                 canEdit,
                 lockShape: (shape) => dispatch(store, 'member.setShape', { id: selectedMember.id, shape }),
                 setConstraints: (c) => dispatch(store, 'member.setConstraints', { id: selectedMember.id, ...c }),
+                setMemberSettings: (c) => dispatch(store, 'member.setBracing', { id: selectedMember.id, ...c }),
+                saved: saveState.status === 'saved' || saveState.status === 'readonly',
                 close: () => dispatch(store, 'selection.set', { ids: [] }),
               })}
             </div>
@@ -401,6 +408,16 @@ function useFillWindowHeight(ref: React.RefObject<HTMLDivElement | null>): numbe
     return () => window.removeEventListener('resize', measure);
   }, [ref]);
   return height;
+}
+
+/** Shows or hides end reactions on the Plan (a view choice, for every role). */
+function ReactionsToggle({ store }: { store: EditorStore }) {
+  const on = useStore(store, (s) => !!s.showReactions);
+  return (
+    <Button variant={on ? 'primary' : 'quiet'} className="h-8 text-xs" aria-pressed={on} title="Show end reactions at each member end" onClick={() => store.setState({ showReactions: !on })}>
+      Reactions
+    </Button>
+  );
 }
 
 function ActionButton({ store, id, disabled, text }: { store: EditorStore; id: ActionId; disabled?: boolean; text?: string }) {

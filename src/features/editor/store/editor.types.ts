@@ -58,6 +58,8 @@ export interface EditorState {
   readOnly: boolean;
   /** A short message from the last action (what it did, or why it could not). */
   notice: EditorNotice | null;
+  /** Draw each member's end reactions on the Plan (a view choice, never saved with the plan). */
+  showReactions?: boolean;
   /** Bays and framing of a trial option drawn over the plan (never part of the plan, never saved). */
   studyPreview?: StudyPreview | null;
 }

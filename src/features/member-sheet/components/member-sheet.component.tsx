@@ -13,6 +13,9 @@
  *     onLockShape={(shape) => …}           // "W21X48" to lock, null to unlock
  *     onConstraints={(c) => …}             // { maxDepth_in, minDepth_in, allowedNominalDepths }, inches,
  *                                          // null = no bound; validated (at least one catalog shape fits)
+ *     onMemberSettings={(s) => …}          // optional: { bracing, Lb_override_ft, deflectionLimits } set on the
+ *                                          // member (null = follow the framing / design basis)
+ *     calcSheetHref="/api/…/calc-sheet.pdf" // optional: the one-member calc sheet download
  *     onClose={() => …}                    // Close button and the Escape key
  *     problems={['…']}                     // optional: scheme problems naming this member
  *   />
@@ -40,6 +43,8 @@ import { MemberDiagramsPanel } from './member-diagrams.component';
 import { MemberLoadsTable, MemberReactionsTable } from './member-loads.component';
 import type { PlanNamer } from '../../../../shared/drafting/element-names.drafting';
 import { ConstraintsSummary, DepthConstraintsForm, ShapeLock } from './member-lock.component';
+import { MemberSettingsPanel } from './member-settings.component';
+import type { MemberBracingSettings } from '../lib/member-settings.model';
 
 export interface MemberSheetProps {
   member: SchemeMember;
@@ -49,6 +54,12 @@ export interface MemberSheetProps {
   canEdit: boolean;
   onLockShape: (shape: string | null) => void;
   onConstraints: (constraints: MemberConstraints) => void;
+  /** Sets the member's bracing, Lb override and deflection limits (the caller re-designs). */
+  onMemberSettings?: (settings: MemberBracingSettings) => void;
+  /** Where the one-member calc sheet PDF downloads from (the saved revision's design). */
+  calcSheetHref?: string;
+  /** Whether the plan on screen is saved (the calc sheet is of the saved revision). */
+  saved?: boolean;
   onClose: () => void;
   problems?: string[];
   /** Names for the sheet's sentences (marks, grid locations, level and zone names), from the plan. */
@@ -100,7 +111,9 @@ function AlternativeRow({ label, alt, units, empty }: { label: string; alt: Alte
   );
 }
 
-export function MemberSheet({ member, designBasis, planMember, units, canEdit, onLockShape, onConstraints, onClose, problems = [], names }: MemberSheetProps) {
+export function MemberSheet({
+  member, designBasis, planMember, units, canEdit, onLockShape, onConstraints, onMemberSettings, calcSheetHref, saved = true, onClose, problems = [], names,
+}: MemberSheetProps) {
   const design = member.design;
   const idBase = `member-sheet-${member.id}`;
 
@@ -111,6 +124,8 @@ export function MemberSheet({ member, designBasis, planMember, units, canEdit, o
     minDepth_in: planMember?.minDepth_in ?? null,
     allowedNominalDepths: planMember?.allowedNominalDepths ?? null,
     Lb_override_ft: planMember?.Lb_override_ft ?? null,
+    bracing: planMember?.bracing ?? null,
+    deflectionLimits: planMember?.deflectionLimits ?? null,
   });
   const settings = useMemo(() => JSON.parse(settingsKey) as MemberPlanSettings, [settingsKey]);
   const constraints: MemberConstraints = useMemo(
@@ -118,6 +133,10 @@ export function MemberSheet({ member, designBasis, planMember, units, canEdit, o
     [settings],
   );
   const lockedShape = planMember ? settings.shape : design?.locked ? design.shape : null;
+  const bracingSettings: MemberBracingSettings = useMemo(
+    () => ({ bracing: settings.bracing ?? null, Lb_override_ft: settings.Lb_override_ft ?? null, deflectionLimits: settings.deflectionLimits ?? null }),
+    [settings],
+  );
 
   const input = useMemo(() => sheetDesignInput(member, designBasis, settings), [member, designBasis, settings]);
   const diagrams = useMemo(() => (design ? attempt(() => sheetDiagrams(input, design.shape)) : null), [input, design]);
@@ -159,7 +178,7 @@ export function MemberSheet({ member, designBasis, planMember, units, canEdit, o
           </p>
         </div>
         <div className="flex shrink-0 items-center gap-2">
-          {design ? <UtilisationChip ratio={design.ratio} /> : <UtilisationChip ratio={Number.NaN} />}
+          <span data-testid="member-sheet-ratio">{design ? <UtilisationChip ratio={design.ratio} /> : <UtilisationChip ratio={Number.NaN} />}</span>
           <Button variant="quiet" onClick={onClose} aria-label="Close member sheet">
             Close
           </Button>
@@ -249,6 +268,18 @@ export function MemberSheet({ member, designBasis, planMember, units, canEdit, o
         <MemberReactionsTable design={design} member={member} units={units} />
       </Section>
 
+      <Section title="Bracing and deflection limits" id={`${idBase}-bracing`}>
+        <MemberSettingsPanel
+          member={member}
+          design={design}
+          designBasis={designBasis}
+          settings={bracingSettings}
+          units={units}
+          canEdit={canEdit && !!onMemberSettings}
+          onSettings={(s) => onMemberSettings?.(s)}
+        />
+      </Section>
+
       <Section title="Size and constraints" id={`${idBase}-size`}>
         {canEdit ? (
           <>
@@ -259,6 +290,18 @@ export function MemberSheet({ member, designBasis, planMember, units, canEdit, o
           <ConstraintsSummary value={constraints} lockedShape={lockedShape} units={units} />
         )}
       </Section>
+
+      {calcSheetHref ? (
+        <Section title="Calc sheet" id={`${idBase}-calc-sheet`}>
+          <p className="text-sm text-ink-soft">
+            <a className="text-accent underline" href={calcSheetHref} download data-testid="member-calc-sheet-link">
+              Download this member’s calc sheet (PDF)
+            </a>{' '}
+            — loads, Mu and Vu, every check with its clause, deflection{design?.composite ? ', both composite stages' : ''}, title block and caution.
+            {saved ? '' : ' Your latest change is still saving; the sheet is of the last saved revision.'}
+          </p>
+        </Section>
+      ) : null}
 
       <footer className="border-t border-line pt-3">
         <EngineerCaution />

@@ -3,10 +3,10 @@
 // memberDiagrams), the next lighter and next shallower shapes (memberAlternatives) and a
 // preview of a shape before it is locked. Pure functions of their arguments.
 import {
-  designMember, memberAlternatives, memberDiagrams, MemberInputError,
+  designMember, memberAlternatives, memberDeflectionLimits, memberDiagrams, MemberInputError,
   type AlternativeShape, type MemberDesignInput, type MemberDesignResult, type MemberLoad, type SchemeMember,
 } from '../../../../shared/engine/index';
-import type { PlanDesignBasis } from '../../../../shared/schemas/plan.schema';
+import type { PlanBracing, PlanDesignBasis, PlanMemberDeflectionLimits } from '../../../../shared/schemas/plan.schema';
 
 /** Per-member constraints the engineer may set (plan member fields of the same names). */
 export interface MemberConstraints {
@@ -19,6 +19,10 @@ export interface MemberConstraints {
 export interface MemberPlanSettings extends MemberConstraints {
   shape: string | null;
   Lb_override_ft?: number | null;
+  /** Bracing set on the member (null: derived from the framing and deck). */
+  bracing?: PlanBracing | null;
+  /** Deflection limits set on the member (null: the design basis). */
+  deflectionLimits?: PlanMemberDeflectionLimits | null;
 }
 
 export const SELF_WEIGHT_PREFIX = 'self weight';
@@ -39,7 +43,7 @@ export function sheetDesignInput(member: SchemeMember, basis: PlanDesignBasis, s
     bracing: member.bracing,
     method: basis.method,
     Fy_ksi: basis.Fy_ksi,
-    deflectionLimits: { live: basis.deflectionLimits.live, total: basis.deflectionLimits.total },
+    deflectionLimits: (({ live, total }) => ({ live, total }))(memberDeflectionLimits(basis, { deflectionLimits: settings?.deflectionLimits ?? null })),
     shape: null,
     maxDepth_in: settings?.maxDepth_in ?? null,
     minDepth_in: settings?.minDepth_in ?? null,
