@@ -101,6 +101,18 @@ describe('PUT /api/schemes/:id/plan from an older revision', () => {
     expect(await storedShapes(schemeId)).toMatchObject({ b2: 'W21X44', b6: 'W18X35' });
   });
 
+  it('when two saves of different members race on the same revision, then both succeed and the scheme ends with both', async () => {
+    const schemeId = await markedScheme();
+    const answers = await Promise.all([
+      t.agents.owner.put(`/api/schemes/${schemeId}/plan`).send({ revision: 2, plan: withShape(markedPlan(), 'b2', 'W21X44') }),
+      t.agents.engineer.put(`/api/schemes/${schemeId}/plan`).send({ revision: 2, plan: withShape(markedPlan(), 'b6', 'W18X35') }),
+    ]);
+    expect(answers.map((a) => a.status)).toEqual([200, 200]);
+    expect(answers.map((a) => a.body.revision).sort()).toEqual([3, 4]);
+    expect(await storedShapes(schemeId)).toMatchObject({ b2: 'W21X44', b6: 'W18X35' });
+    expect((await t.ctx.db.models.Scheme.findByPk(schemeId))!.getDataValue('revision')).toBe(4);
+  });
+
   it('when the later save changed nothing the earlier did not, then no revision is written and the answer carries their plan', async () => {
     const schemeId = await markedScheme();
     await t.agents.owner.put(`/api/schemes/${schemeId}/plan`).send({ revision: 2, plan: withShape(markedPlan(), 'b2', 'W21X44') }).expect(200);
