@@ -665,7 +665,7 @@ export function buildCalcBook(input: CalcBookInput): CalcBook {
       blocks: [
         {
           type: 'paragraph',
-          text: `${c.tiers.length} tier(s)${c.spliceLevels?.length ? `, splices above ${c.spliceLevels.map((l) => levelName.get(l) ?? l).join(', ')}` : ''}${c.locked ? `; size locked to ${c.locked} (checked, not replaced)` : ''}; ${num(c.weight_lb, 0)} lb of steel. Flexural buckling about both axes, AISC 360-16 E3 (Fe by Eq. E3-4; Fcr by Eq. E3-2 where Lc/r ≤ 4.71 sqrt(E/Fy), else Eq. E3-3; Pn = Fcr Ag, Eq. E3-1) or E7 where Table B4.1a makes the web or flanges slender (Pn = Fcr Ae, Eq. E7-1, effective widths by Eq. E7-2/E7-3); ${lrfdCol ? 'φc = 0.90' : 'Ωc = 1.67'} (E1). E = ${num(E_KSI, 0)} ksi.`,
+          text: `${c.tiers.length} tier(s)${c.spliceLevels?.length ? `, splices above ${c.spliceLevels.map((l) => levelName.get(l) ?? l).join(', ')}` : ''}${c.locked ? `; size locked to ${c.locked} (checked, not replaced)` : ''}; ${cellText(num(c.weight_lb, 0))} lb of steel. Flexural buckling about both axes, AISC 360-16 E3 (Fe by Eq. E3-4; Fcr by Eq. E3-2 where Lc/r ≤ 4.71 sqrt(E/Fy), else Eq. E3-3; Pn = Fcr Ag, Eq. E3-1) or E7 where Table B4.1a makes the web or flanges slender (Pn = Fcr Ae, Eq. E7-1, effective widths by Eq. E7-2/E7-3); ${lrfdCol ? 'φc = 0.90' : 'Ωc = 1.67'} (E1). E = ${cellText(num(E_KSI, 0))} ksi.`,
         },
         {
           type: 'table',

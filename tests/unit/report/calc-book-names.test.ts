@@ -62,6 +62,8 @@ describe('the demo building speaks in marks, grid locations and level names', ()
     const text = book.sections.map(textOf).join('\n');
     expect(text.length).toBeGreaterThan(10_000);
     expect(idsIn(text, ids)).toEqual([]);
+    // Figures in sentences are written out (the column paragraph printed "[object Object] lb").
+    expect(text).not.toContain('[object Object]');
   }, 120_000);
 
   it('when its design problems are shown as the Plan shows them, then none names an element id', () => {
