@@ -268,11 +268,11 @@ function memberSection(m: SchemeMember, others: string[], levelName: string, rea
         ? ([
           ['Composite (AISC 360-16 Chapter I)', `${d.composite.studs} studs ${d.composite.studDiameter_in} in, ${Math.round(d.composite.percentComposite * 100)} % composite, PNA in the ${d.composite.PNA}`],
           ['Effective width b, in (I3.1a)', num(d.composite.effectiveWidth_in, 1)],
-          ['Qn per stud, kip (Eq. I8-1)', `${num(d.composite.Qn_kip, 2)} (${d.composite.RgRpBasis})`],
-          ['ΣQn, kip; Y2, in', `${num(d.composite.sumQn_kip, 1)}; ${num(d.composite.Y2_in, 2)}`],
+          ['Qn per stud, kip (Eq. I8-1)', `${cellText(num(d.composite.Qn_kip, 2))} (${d.composite.RgRpBasis})`],
+          ['ΣQn, kip; Y2, in', `${cellText(num(d.composite.sumQn_kip, 1))}; ${cellText(num(d.composite.Y2_in, 2))}`],
           ['I_LB, in⁴ (Commentary Eq. C-I3-1)', num(d.composite.Ilb_in4, 0)],
-          ['Construction stage (bare steel)', `Mr ${num(d.composite.construction.Mr_kipft, 1)} / Mc ${num(d.composite.construction.Mc_kipft, 1)} kip-ft (${d.composite.construction.combination}, ${d.composite.construction.clause}), ratio ${num(d.composite.construction.ratio, 3)}`],
-          ['Wet-concrete deflection, in; camber, in', `${num(d.composite.preCompositeDeflection_in, 2)}; ${d.composite.camber_in > 0 ? num(d.composite.camber_in, 2) : 'none'} (${d.composite.camberBasis})`],
+          ['Construction stage (bare steel)', `Mr ${cellText(num(d.composite.construction.Mr_kipft, 1))} / Mc ${cellText(num(d.composite.construction.Mc_kipft, 1))} kip-ft (${d.composite.construction.combination}, ${d.composite.construction.clause}), ratio ${cellText(num(d.composite.construction.ratio, 3))}`],
+          ['Wet-concrete deflection, in; camber, in', `${cellText(num(d.composite.preCompositeDeflection_in, 2))}; ${d.composite.camber_in > 0 ? cellText(num(d.composite.camber_in, 2)) : 'none'} (${d.composite.camberBasis})`],
         ] as [string, CalcCell][])
         : m.compositeNote ? ([['Composite', `no: ${m.compositeNote}`]] as [string, CalcCell][]) : []),
       ['Tributary width, ft', num(m.tributaryWidth_ft, 2)],
