@@ -128,47 +128,7 @@ test.describe('plan', () => {
     await drafter.getByTestId('plan-editor').screenshot({ path: `${SCREENSHOT_DIR}/plan-drafter.png` });
     await drafterContext.close();
   });
-
-  test('when two people save the same scheme, then the later one sees what changed there and can keep theirs or save over', async ({ page, browser }) => {
-    test.setTimeout(120_000);
-    await page.setViewportSize({ width: 1600, height: 1000 });
-    await signInAs(page, 'engineer@example.com');
-    const url = await schemeWithPlan(page, generatedPlan(2, 1, 2), `Conflict ${Date.now().toString(36).slice(-4)}`);
-    await page.goto(url);
-    const canvas = await planCanvas(page);
-    await expect(page.getByTestId('save-status')).toHaveText(/^Saved · revision \d+/);
-
-    // The owner opens the same scheme and adds a column, which is saved first.
-    const ownerContext = await browser.newContext({ viewport: { width: 1600, height: 1000 } });
-    const owner = await ownerContext.newPage();
-    await signInAs(owner, 'owner@example.com');
-    await owner.goto(url);
-    const ownerCanvas = await planCanvas(owner);
-    await ownerCanvas.focus();
-    await owner.keyboard.press('c');
-    await clickPlan(owner, ownerCanvas, 15, 15);
-    await expect(owner.getByTestId('save-status')).toHaveText(/^Saved · revision \d+/, { timeout: 15_000 });
-    await ownerContext.close();
-
-    // The engineer, still on the old revision, adds a point load: the save meets the newer revision.
-    await canvas.focus();
-    await page.keyboard.press('p');
-    await clickPlan(page, canvas, 45, 15);
-    const banner = page.getByRole('alert').filter({ hasText: 'while you were drawing' });
-    await expect(banner).toContainText('Changed there: 1 column added.', { timeout: 15_000 });
-    await expect(banner).toContainText('Yours differs from theirs by: 1 column removed, 1 point load added.');
-    await expect(page.getByTestId('save-status')).toHaveText('Not saved: someone else saved first');
-    await page.getByTestId('plan-editor').screenshot({ path: `${SCREENSHOT_DIR}/plan-conflict.png` });
-
-    await page.getByRole('button', { name: 'Keep mine (save over)' }).click();
-    await expect(banner).toHaveCount(0);
-    await expect(page.getByTestId('save-status')).toHaveText(/^Saved · revision \d+/, { timeout: 15_000 });
-    // The stored plan is now the engineer's: the point load is there, the owner's column is not.
-    const schemeId = new URL(page.url()).searchParams.get('scheme');
-    const stored = (await (await page.request.get(`/api/schemes/${schemeId}`)).json()) as { scheme: { plan: { pointLoads: unknown[]; columns: unknown[] } } };
-    expect(stored.scheme.plan.pointLoads).toHaveLength(1);
-    expect(stored.scheme.plan.columns).toHaveLength(6);
-  });
+  // Two people saving one scheme: e2e/merge.spec.ts.
 });
 
 /** Weight per foot from a designation: W16X31 → 31. */

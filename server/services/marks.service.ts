@@ -1,7 +1,7 @@
 import { SCHEME_CAUTION, type SchemeResult } from '../../shared/engine/index';
 import { assignMarks, withIssuedMarks } from '../../shared/engine/scheme/member-marks.scheme';
 import type { Plan, PlanMember } from '../../shared/schemas/plan.schema';
-import { formatFeetInches } from '../../shared/drafting/grid-location.drafting';
+import { formatFeetInches, gridLocation } from '../../shared/drafting/grid-location.drafting';
 import { AppError } from '../errors/app-error';
 import {
   commitPlanRevision,
@@ -49,6 +49,12 @@ function marksInvalid(message: string, memberId: string, mark: string | null): A
   return new AppError(422, 'marks_invalid', message, { details: { memberId, mark }, fields: { [`marks.${memberId}`]: message } });
 }
 
+/** A member as the drawing places it: "beam at A–B / 1+10'-0"" (its kind and grid location; the mark is what is in question). */
+function memberWhere(plan: Plan, m: PlanMember): string {
+  const where = gridLocation(m.start, m.end, plan.grids);
+  return `${m.kind} ${where ? `at ${where}` : `from (${m.start[0].toFixed(1)}, ${m.start[1].toFixed(1)}) to (${m.end[0].toFixed(1)}, ${m.end[1].toFixed(1)}) ft`}`;
+}
+
 function conflict(current: number, yours: number): AppError {
   return new AppError(
     409,
@@ -91,10 +97,9 @@ export function checkManualMarks(
       const same =
         a && b && a.kind === b.kind && a.shape !== null && a.shape === b.shape && Math.abs(a.span_ft - b.span_ft) <= SPAN_TOLERANCE_FT;
       if (same) continue;
-      const describe = (d: typeof a, id: string) =>
-        d ? `${d.kind} ${d.shape ?? 'not sized'}, span ${formatFeetInches(d.span_ft)}` : `member ${id} (not designed)`;
+      const describe = (d: typeof a) => (d ? `${d.shape ?? 'not sized'}, span ${formatFeetInches(d.span_ft)}` : 'not designed');
       throw marksInvalid(
-        `Mark ${m.mark} on ${levelName(m.level)} is already used by member ${holder.id} (${describe(a, holder.id)}); member ${m.id} is ${describe(b, m.id)}. A mark can be shared only by members of the same size and span.`,
+        `Mark ${m.mark} on ${levelName(m.level)} is already used by the ${memberWhere(plan, holder)} (${describe(a)}); the ${memberWhere(plan, m)} is ${describe(b)}. A mark can be shared only by members of the same size and span.`,
         m.id,
         m.mark!,
       );
@@ -174,8 +179,8 @@ export async function editMarks(
   const byId = new Map(plan.members.map((m) => [m.id, m]));
   for (const edit of input.marks) {
     const member = byId.get(edit.memberId);
-    if (!member) throw marksInvalid(`Member ${edit.memberId} is not in this scheme.`, edit.memberId, edit.mark);
-    if (seen.has(edit.memberId)) throw marksInvalid(`Member ${edit.memberId} is listed twice.`, edit.memberId, edit.mark);
+    if (!member) throw marksInvalid(`A member of this mark edit is not in this scheme (deleted since it was opened?); reload the plan and edit the marks again.`, edit.memberId, edit.mark);
+    if (seen.has(edit.memberId)) throw marksInvalid(`The ${memberWhere(plan, member)} is given a mark twice in one edit.`, edit.memberId, edit.mark);
     seen.add(edit.memberId);
     if (edit.mark === null) {
       delete member.mark;
@@ -188,7 +193,7 @@ export async function editMarks(
   const names = new Map(plan.levels.map((l) => [l.id, l.name]));
   const edited = new Set(input.marks.map((e) => e.memberId));
   checkManualMarks(plan, design, (id) => names.get(id) ?? id, new Map([...current].filter(([id]) => !edited.has(id))));
-  const list = input.marks.map((e) => `${e.memberId}→${e.mark ?? 'rule'}`).join(', ');
+  const list = input.marks.map((e) => `${memberWhere(plan, byId.get(e.memberId)!)} → ${e.mark ?? 'by the rule'}`).join(', ');
   return saveMarks(ctx, scheme, plan, design, input.revision, `Marks edited: ${list}`.slice(0, 500));
 }
 

@@ -13,6 +13,8 @@ import {
 } from '../../shared/schemas/plan.schema';
 import { gravityLoadProblems } from '../../shared/schemas/plan-gravity-loads';
 import { columnInputProblems } from '../../shared/schemas/plan-columns';
+import { mergePlans, type MergeConflict } from '../../shared/schemas/plan-merge';
+import { describeChanges, elementName, sideWords } from '../../shared/drafting/plan-changes.drafting';
 import { AppError } from '../errors/app-error';
 import type { SchemeAttributes, SchemeStatus } from '../models/scheme.model';
 import type { SchemePatchInput } from '../schemas/scheme.schema';
@@ -248,7 +250,93 @@ export interface RevisionConflictCurrent {
   updatedAt: string;
 }
 
-async function conflictError(ctx: SchemeServiceContext, schemeId: string, yourRevision: number): Promise<AppError> {
+/** What a save based on an older revision took in from the saves made since (200 with `merged`). */
+export interface SaveMerge {
+  /** The revision the save started from. */
+  basedOn: number;
+  /** The revision it was merged with, and who saved the revisions in between. */
+  mergedWith: number;
+  by: string[];
+  /** One line per element taken in from their saves, named as people name them (marks, grid locations, level names). */
+  changes: string[];
+  /** The plan as saved: theirs and mine together. */
+  plan: PlanFileInput;
+}
+
+export interface SaveConflictItem {
+  kind: MergeConflict['kind'];
+  id: string;
+  /** "beam 2B1 at B–C / 2" */
+  label: string;
+  mine: string;
+  theirs: string;
+}
+
+/** A save's plan with the scheme's own name (the plan name is the scheme's; renaming is not a plan edit). */
+const named = (plan: Plan, name: string): Plan => ({ ...plan, name });
+
+async function savedBetween(ctx: SchemeServiceContext, schemeId: string, after: number, upTo: number): Promise<string[]> {
+  const rows = await ctx.db.models.PlanRevision.findAll({ where: { schemeId }, attributes: ['revision', 'userId'], order: [['revision', 'ASC']] });
+  const ids = rows.filter((r) => r.getDataValue('revision') > after && r.getDataValue('revision') <= upTo).map((r) => r.getDataValue('userId'));
+  const people = await peopleByIds(ctx, ids);
+  return [...new Set(ids.map((id) => (id ? (people.get(id)?.name ?? 'someone else') : 'someone else')))];
+}
+
+/** What their saves changed that this save did not also do the same way. */
+function theirsOnly(base: Plan, mine: Plan, theirs: Plan): string[] {
+  const same = new Set(describeChanges(base, mine));
+  return describeChanges(base, theirs).filter((line) => !same.has(line));
+}
+
+type MergeAttempt =
+  | { kind: 'merged'; plan: Plan; current: Plan; currentRevision: number; base: Plan }
+  | { kind: 'conflict'; error: AppError };
+
+/**
+ * A save based on revision `basedOn` when the scheme has moved on: a three-way merge on
+ * element ids (shared/schemas/plan-merge) of the base revision's snapshot, this save and the
+ * current plan. Elements only one side changed are taken from that side; elements both
+ * changed differently are a 409 naming each one as people name it, with the current plan.
+ */
+async function mergeWithCurrent(ctx: SchemeServiceContext, scheme: SchemeRow, basedOn: number, mine: Plan): Promise<MergeAttempt> {
+  const schemeId = scheme.getDataValue('id');
+  const attrs = scheme.get({ plain: true });
+  const name = attrs.name;
+  const snapshot = basedOn < attrs.revision ? await ctx.db.models.PlanRevision.findOne({ where: { schemeId, revision: basedOn } }) : null;
+  if (!snapshot) return { kind: 'conflict', error: await conflictError(ctx, schemeId, basedOn, [], null) };
+  const raw = snapshot.getDataValue('plan');
+  const parsedBase = parsePlanFile(typeof raw === 'string' ? JSON.parse(raw) : raw).plan;
+  if (!parsedBase) return { kind: 'conflict', error: await conflictError(ctx, schemeId, basedOn, [], null) };
+  const base = named(parsedBase, name);
+  const current = named(await readPlan(ctx.db, attrs), name);
+  const { plan, conflicts } = mergePlans(base, named(mine, name), current);
+  if (conflicts.length > 0) {
+    const items = conflicts.map((c) => ({
+      kind: c.kind,
+      id: c.id,
+      label: elementName(c.kind, c.id, [current, mine, base]),
+      mine: sideWords(c, base, mine),
+      theirs: sideWords(c, base, current),
+    }));
+    return { kind: 'conflict', error: await conflictError(ctx, schemeId, basedOn, items, null) };
+  }
+  // The merge must itself be a plan that can be saved (their removed level under my new beam is not).
+  try {
+    acceptPlan(exportPlanFile(plan));
+  } catch (err) {
+    if (!(err instanceof AppError)) throw err;
+    return { kind: 'conflict', error: await conflictError(ctx, schemeId, basedOn, [], err.message.replace(/^The plan cannot be saved: /, '')) };
+  }
+  return { kind: 'merged', plan, current, currentRevision: attrs.revision, base };
+}
+
+async function conflictError(
+  ctx: SchemeServiceContext,
+  schemeId: string,
+  yourRevision: number,
+  conflicts: SaveConflictItem[] = [],
+  mergeProblem: string | null = null,
+): Promise<AppError> {
   const detail = await getScheme(ctx, schemeId);
   const current: RevisionConflictCurrent = {
     revision: detail.revision,
@@ -256,45 +344,84 @@ async function conflictError(ctx: SchemeServiceContext, schemeId: string, yourRe
     updatedBy: detail.updatedBy,
     updatedAt: detail.updatedAt,
   };
+  const who = current.updatedBy?.name ?? 'someone else';
+  const shown = conflicts.slice(0, 5).map((c) => c.label);
+  const what = conflicts.length
+    ? ` and changed ${conflicts.length === 1 ? 'an element' : `${conflicts.length} elements`} you also changed: ${shown.join('; ')}${conflicts.length > shown.length ? ` and ${conflicts.length - shown.length} more` : ''}. Your other changes merge with theirs; choose whose version to keep for ${conflicts.length === 1 ? 'it' : 'each'} and save again.`
+    : mergeProblem
+      ? `; your changes and theirs cannot be merged as they stand (${mergeProblem}). Your changes were not saved; choose whose plan to keep.`
+      : '. Your changes were not saved; merge them into the current plan and save again.';
   return new AppError(
     409,
     'revision_conflict',
-    `This scheme was saved by ${current.updatedBy?.name ?? 'someone else'} since revision ${yourRevision} (it is now at revision ${current.revision}). Your changes were not saved; merge them into the current plan and save again.`,
-    { details: { current } },
+    `This scheme was saved by ${who} since revision ${yourRevision} (it is now at revision ${current.revision})${what}`,
+    { details: { current, conflicts, ...(mergeProblem ? { mergeProblem } : {}) } },
   );
 }
 
 /**
  * PUT /api/schemes/:id/plan. Saves the plan as the next revision when `revision` is the
- * current one (409 revision_conflict with the current plan otherwise). Plans that cannot be
- * read or repaired are refused (422); topology problems are saved and reported.
+ * current one. A save based on an older revision is merged with the saves made since
+ * (three-way on element ids): when no element was changed by both, the merge is saved as a
+ * new revision and the answer carries `merged` (what was taken in from the others and the
+ * plan as saved); otherwise 409 revision_conflict names each element both changed, with the
+ * current plan, and nothing is written. Plans that cannot be read or repaired are refused
+ * (422); topology problems are saved and reported.
  */
 export async function saveSchemePlan(
   ctx: SchemeServiceContext,
   schemeId: string,
   input: { revision: number; plan: unknown; note: string | null },
-): Promise<{ revision: number; repairs: string[]; problems: PlanProblem[] }> {
-  const scheme = await findOwnScheme(ctx, schemeId);
+): Promise<{ revision: number; repairs: string[]; problems: PlanProblem[]; merged?: SaveMerge }> {
+  let scheme = await findOwnScheme(ctx, schemeId);
   const { plan, repairs, warnings } = acceptPlan(input.plan);
-  try {
-    const revision = await commitPlanRevision(ctx.db, scheme, {
-      plan,
-      userId: ctx.actor.userId,
-      note: input.note,
-      expectedRevision: input.revision,
-    });
-    await recordSchemeAudit(ctx, {
-      action: SCHEME_AUDIT_ACTIONS.planRevised,
-      schemeId,
-      schemeName: scheme.getDataValue('name'),
-      projectId: scheme.getDataValue('projectId'),
-      detail: { revision, previousRevision: input.revision, ...(input.note ? { note: input.note } : {}) },
-    });
-    return { revision, repairs, problems: [...warnings, ...topologyProblems(plan)] };
-  } catch (err) {
-    if (err instanceof RevisionConflict) throw await conflictError(ctx, schemeId, input.revision);
-    throw err;
+  // A save that races another is merged with it; a few rounds at most, then it is a conflict.
+  for (let round = 0; round < 4; round++) {
+    const currentRevision = scheme.getDataValue('revision');
+    let toWrite = plan;
+    let merge: SaveMerge | undefined;
+    if (input.revision !== currentRevision) {
+      const attempt = await mergeWithCurrent(ctx, scheme, input.revision, plan);
+      if (attempt.kind === 'conflict') throw attempt.error;
+      toWrite = attempt.plan;
+      merge = {
+        basedOn: input.revision,
+        mergedWith: currentRevision,
+        by: await savedBetween(ctx, schemeId, input.revision, currentRevision),
+        changes: theirsOnly(attempt.base, named(plan, attempt.base.name), attempt.current),
+        plan: exportPlanFile(attempt.plan),
+      };
+      // Nothing of mine is left to write (I changed nothing they had not): their revision stands.
+      if (JSON.stringify(exportPlanFile(attempt.plan)) === JSON.stringify(exportPlanFile(attempt.current))) {
+        return { revision: currentRevision, repairs, problems: [...warnings, ...topologyProblems(attempt.plan)], merged: merge };
+      }
+    }
+    try {
+      const revision = await commitPlanRevision(ctx.db, scheme, {
+        plan: toWrite,
+        userId: ctx.actor.userId,
+        note: input.note ?? (merge ? `Merged with revision ${merge.mergedWith}` : null),
+        expectedRevision: currentRevision,
+      });
+      await recordSchemeAudit(ctx, {
+        action: SCHEME_AUDIT_ACTIONS.planRevised,
+        schemeId,
+        schemeName: scheme.getDataValue('name'),
+        projectId: scheme.getDataValue('projectId'),
+        detail: {
+          revision,
+          previousRevision: currentRevision,
+          ...(merge ? { basedOn: input.revision, merged: true } : {}),
+          ...(input.note ? { note: input.note } : {}),
+        },
+      });
+      return { revision, repairs, problems: [...warnings, ...topologyProblems(toWrite)], ...(merge ? { merged: merge } : {}) };
+    } catch (err) {
+      if (!(err instanceof RevisionConflict)) throw err;
+      scheme = await findOwnScheme(ctx, schemeId);
+    }
   }
+  throw await conflictError(ctx, schemeId, input.revision);
 }
 
 export async function exportScheme(

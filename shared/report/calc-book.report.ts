@@ -7,6 +7,44 @@
 import { E_KSI, STANDARDS, memberBracingSource, memberDeflectionLimits } from '../engine/index';
 import type { MemberCheck, MemberLoad, SchemeMember, SchemeResult } from '../engine/index';
 import type { Plan } from '../schemas/plan.schema';
+import { describeProblem, planNamer, type PlanNamer } from '../drafting/element-names.drafting';
+import { describeLoadSource } from '../drafting/load-source.drafting';
+import { gridIntersectionLabel, gridLocation } from '../drafting/grid-location.drafting';
+
+/**
+ * Names for the book's sentences: members by kind, mark and grid location, columns by grid
+ * intersection, levels and zones by name (issue 16 item 11: no internal ids in what a person reads).
+ */
+interface BookNames extends PlanNamer {
+  /** "column at B2" or "beam 2B1 at A–B / 1" for a support id. */
+  support(id: string): string;
+  /** A member's place on the grid ("A–B / 1"), else its kind and mark. */
+  where(id: string): string;
+  /** A column by its grid intersection. */
+  column(id: string): string;
+}
+
+function bookNames(plan: Plan, design: Pick<SchemeResult, 'members'>): BookNames {
+  const base = planNamer(plan, new Map((design.members ?? []).map((m) => [m.id, m.mark])));
+  const members = new Map(plan.members.map((m) => [m.id, m]));
+  const columns = new Map(plan.columns.map((c) => [c.id, c]));
+  const column = (id: string) => {
+    const c = columns.get(id);
+    if (!c) return 'a column';
+    const at = gridIntersectionLabel(c.x_ft, c.y_ft, plan.grids);
+    return at ? `column at ${at}` : `column at (${c.x_ft.toFixed(1)}, ${c.y_ft.toFixed(1)}) ft`;
+  };
+  return {
+    ...base,
+    column,
+    support: (id) => (columns.has(id) ? column(id) : (base.member(id) ?? 'a member')),
+    where(id) {
+      const m = members.get(id);
+      if (!m) return '—';
+      return gridLocation(m.start, m.end, plan.grids) ?? `(${m.start[0].toFixed(1)}, ${m.start[1].toFixed(1)})–(${m.end[0].toFixed(1)}, ${m.end[1].toFixed(1)}) ft`;
+    },
+  };
+}
 
 /** The notice on the cover and on every page of the calc book (product.md, Cautions). */
 export const CALC_BOOK_CAUTION =
@@ -136,7 +174,7 @@ const CHECK_TITLE: Record<string, string> = {
 };
 
 /** Members that fail a check, could not be designed or have a plan problem against them. */
-function attentionReasons(m: SchemeMember, problems: SchemeResult['problems']): string[] {
+function attentionReasons(m: SchemeMember, problems: SchemeResult['problems'], names: BookNames): string[] {
   const reasons: string[] = [];
   if (!m.design) reasons.push('not designed');
   else if (!m.design.passes) reasons.push(m.design.failure ?? `${CHECK_TITLE[m.design.governing] ?? m.design.governing} ratio ${m.design.ratio.toFixed(3)} > 1.0`);
@@ -144,7 +182,7 @@ function attentionReasons(m: SchemeMember, problems: SchemeResult['problems']): 
     if (p.elementId !== m.id) continue;
     // The engine's own "member fails" problem repeats the failure reason above.
     if (p.code === 'member-fails' && m.design && !m.design.passes) continue;
-    reasons.push(`${p.severity}: ${p.message}`);
+    reasons.push(`${p.severity}: ${describeProblem(p.message, names)}`);
   }
   if (reasons.length === 0 && !m.passes) reasons.push('does not pass');
   return reasons;
@@ -157,8 +195,8 @@ function describeBracing(m: SchemeMember, setOnMember = false): string {
   return b.points_ft.length === 0 ? 'at the supports only' : `at ${b.points_ft.map((x) => `${x.toFixed(2)} ft`).join(', ')}${setOnMember ? '' : ' (members framing in)'}`;
 }
 
-function loadRow(l: MemberLoad): CalcCell[] {
-  const src = l.source ?? '';
+function loadRow(l: MemberLoad, names: BookNames): CalcCell[] {
+  const src = describeLoadSource(l.source ?? '', null, names);
   switch (l.kind) {
     case 'uniform':
       return [l.case, 'uniform', num(l.w_klf, 3), 'klf', 'full span', src];
@@ -225,9 +263,9 @@ function limitRefs(plan: Plan, memberId: string): { live: string; total: string 
   return { live: ref(used.source.live), total: ref(used.source.total) };
 }
 
-function memberSection(m: SchemeMember, others: string[], levelName: string, reasons: string[], refs?: { live: string; total: string }): CalcSection {
+function memberSection(m: SchemeMember, others: string[], levelName: string, reasons: string[], names: BookNames, refs?: { live: string; total: string }): CalcSection {
   const d = m.design;
-  const title = `${m.mark} — ${m.shape ?? 'no shape'} (${m.kind} ${m.id})`;
+  const title = `${m.mark} — ${m.shape ?? 'no shape'} (${m.kind} at ${names.where(m.id)})`;
   const blocks: CalcBlock[] = [];
   if (reasons.length > 0) blocks.push({ type: 'caution', text: `Needs attention: ${reasons.join('; ')}` });
   blocks.push({
@@ -241,11 +279,11 @@ function memberSection(m: SchemeMember, others: string[], levelName: string, rea
         ? ([
           ['Composite (AISC 360-16 Chapter I)', `${d.composite.studs} studs ${d.composite.studDiameter_in} in, ${Math.round(d.composite.percentComposite * 100)} % composite, PNA in the ${d.composite.PNA}`],
           ['Effective width b, in (I3.1a)', num(d.composite.effectiveWidth_in, 1)],
-          ['Qn per stud, kip (Eq. I8-1)', `${num(d.composite.Qn_kip, 2)} (${d.composite.RgRpBasis})`],
-          ['ΣQn, kip; Y2, in', `${num(d.composite.sumQn_kip, 1)}; ${num(d.composite.Y2_in, 2)}`],
+          ['Qn per stud, kip (Eq. I8-1)', `${cellText(num(d.composite.Qn_kip, 2))} (${d.composite.RgRpBasis})`],
+          ['ΣQn, kip; Y2, in', `${cellText(num(d.composite.sumQn_kip, 1))}; ${cellText(num(d.composite.Y2_in, 2))}`],
           ['I_LB, in⁴ (Commentary Eq. C-I3-1)', num(d.composite.Ilb_in4, 0)],
-          ['Construction stage (bare steel)', `Mr ${num(d.composite.construction.Mr_kipft, 1)} / Mc ${num(d.composite.construction.Mc_kipft, 1)} kip-ft (${d.composite.construction.combination}, ${d.composite.construction.clause}), ratio ${num(d.composite.construction.ratio, 3)}`],
-          ['Wet-concrete deflection, in; camber, in', `${num(d.composite.preCompositeDeflection_in, 2)}; ${d.composite.camber_in > 0 ? num(d.composite.camber_in, 2) : 'none'} (${d.composite.camberBasis})`],
+          ['Construction stage (bare steel)', `Mr ${cellText(num(d.composite.construction.Mr_kipft, 1))} / Mc ${cellText(num(d.composite.construction.Mc_kipft, 1))} kip-ft (${d.composite.construction.combination}, ${d.composite.construction.clause}), ratio ${cellText(num(d.composite.construction.ratio, 3))}`],
+          ['Wet-concrete deflection, in; camber, in', `${cellText(num(d.composite.preCompositeDeflection_in, 2))}; ${d.composite.camber_in > 0 ? cellText(num(d.composite.camber_in, 2)) : 'none'} (${d.composite.camberBasis})`],
         ] as [string, CalcCell][])
         : m.compositeNote ? ([['Composite', `no: ${m.compositeNote}`]] as [string, CalcCell][]) : []),
       ['Tributary width, ft', num(m.tributaryWidth_ft, 2)],
@@ -254,7 +292,7 @@ function memberSection(m: SchemeMember, others: string[], levelName: string, rea
       ['KLL (ASCE 7-16 Table 4.7-1)', num(m.KLL, 0)],
       ['Live load reduction factor (Eq. 4.7-1)', num(m.liveReductionFactor, 3)],
       ['Compression flange braced', describeBracing(m)],
-      ...(others.length > 0 ? ([['Same mark, not printed', others.join(', ')]] as [string, CalcCell][]) : []),
+      ...(others.length > 0 ? ([['Same mark, not printed', others.map((id) => names.where(id)).join('; ')]] as [string, CalcCell][]) : []),
     ],
   });
   blocks.push({
@@ -268,7 +306,7 @@ function memberSection(m: SchemeMember, others: string[], levelName: string, rea
       { label: 'Where', weight: 1.3 },
       { label: 'Source', weight: 4 },
     ],
-    rows: m.loads.map(loadRow),
+    rows: m.loads.map((l) => loadRow(l, names)),
   });
   if (!d) {
     blocks.push({ type: 'paragraph', text: 'This member could not be designed; see Needs attention.', tone: 'strong' });
@@ -346,7 +384,7 @@ function memberSection(m: SchemeMember, others: string[], levelName: string, rea
   });
   const end = (label: string, r: SchemeMember['reactions']['start']): CalcCell[] => [
     label,
-    r.supportedBy ?? 'nothing',
+    r.supportedBy ? names.support(r.supportedBy) : 'nothing',
     num(r.D_kip, 2),
     num(r.L_kip, 2),
     num(r.Lunreduced_kip, 2),
@@ -389,10 +427,11 @@ export function buildCalcBook(input: CalcBookInput): CalcBook {
   const levels = plan.levels.filter((l) => levelId === undefined || l.id === levelId);
   const members = (design.members ?? []).filter((m) => levelId === undefined || m.level === levelId);
   const problems = design.problems ?? [];
+  const names = bookNames(plan, design);
 
   const flagged = new Map<string, string[]>();
   for (const m of members) {
-    const reasons = attentionReasons(m, problems);
+    const reasons = attentionReasons(m, problems, names);
     if (reasons.length > 0) flagged.set(m.id, reasons);
   }
 
@@ -434,7 +473,7 @@ export function buildCalcBook(input: CalcBookInput): CalcBook {
   const attentionRows: CalcCell[][] = members
     .filter((m) => flagged.has(m.id))
     .sort((a, b) => compareMarks(a.mark, b.mark) || a.id.localeCompare(b.id))
-    .map((m) => [m.mark, m.id, m.shape ?? '—', opt(m.ratio, 3), m.governing ? (CHECK_TITLE[m.governing] ?? m.governing) : '—', flagged.get(m.id)!.join('; ')]);
+    .map((m) => [m.mark, names.where(m.id), m.shape ?? '—', opt(m.ratio, 3), m.governing ? (CHECK_TITLE[m.governing] ?? m.governing) : '—', flagged.get(m.id)!.join('; ')]);
   sections.push({
     id: 'attention',
     title: 'Needs attention',
@@ -448,7 +487,7 @@ export function buildCalcBook(input: CalcBookInput): CalcBook {
                     type: 'table',
                     columns: [
                       { label: 'Mark', weight: 0.7 },
-                      { label: 'Member', weight: 0.8 },
+                      { label: 'Grid location', weight: 0.8 },
                       { label: 'Shape', weight: 1 },
                       { label: 'Ratio', weight: 0.7, align: 'right' },
                       { label: 'Governing', weight: 1.2 },
@@ -458,7 +497,7 @@ export function buildCalcBook(input: CalcBookInput): CalcBook {
                   } as CalcBlock,
                 ]
               : []),
-            ...(planWide.length > 0 ? [{ type: 'list', items: planWide.map((p) => `${p.severity}: ${p.message}`) } as CalcBlock] : []),
+            ...(planWide.length > 0 ? [{ type: 'list', items: planWide.map((p) => `${p.severity}: ${describeProblem(p.message, names)}`) } as CalcBlock] : []),
           ],
   });
 
@@ -559,7 +598,7 @@ export function buildCalcBook(input: CalcBookInput): CalcBook {
           caption: `${all.length} member(s), ${new Set(all.map((m) => m.mark)).size} mark(s); elevation ${level.elevation_ft} ft${level.roof ? ', roof' : ''}`,
           columns: [
             { label: 'Mark', weight: 0.8 },
-            { label: 'Members', weight: 2.2 },
+            { label: 'Grid locations', weight: 2.2 },
             { label: 'Shape', weight: 1.1 },
             { label: 'Span, ft', weight: 0.9, align: 'right' },
             { label: 'Ratio', weight: 0.8, align: 'right' },
@@ -567,12 +606,12 @@ export function buildCalcBook(input: CalcBookInput): CalcBook {
           ],
           rows: [...new Set(all.map((m) => m.mark))].sort(compareMarks).map((mark) => {
             const g = all.filter((m) => m.mark === mark).sort(workHarder);
-            return [mark, g.map((m) => m.id).join(', '), g[0].shape ?? '—', num(g[0].span_ft, 2), opt(g[0].ratio, 3), g[0].governing ? (CHECK_TITLE[g[0].governing] ?? g[0].governing) : '—'];
+            return [mark, g.map((m) => names.where(m.id)).join('; '), g[0].shape ?? '—', num(g[0].span_ft, 2), opt(g[0].ratio, 3), g[0].governing ? (CHECK_TITLE[g[0].governing] ?? g[0].governing) : '—'];
           }),
         },
       ],
     });
-    for (const m of ofLevel) sections.push(memberSection(m, othersOf.get(m.id) ?? [], level.name, flagged.get(m.id) ?? [], limitRefs(plan, m.id)));
+    for (const m of ofLevel) sections.push(memberSection(m, othersOf.get(m.id) ?? [], level.name, flagged.get(m.id) ?? [], names, limitRefs(plan, m.id)));
   }
 
   // Column stack and column pages (AISC 360-16 Chapter E)
@@ -611,7 +650,7 @@ export function buildCalcBook(input: CalcBookInput): CalcBook {
               ],
               rows: columns.flatMap((c) =>
                 c.levels.map((l) => [
-                  c.id,
+                  names.column(c.id),
                   `${levelName.get(l.level) ?? l.level}${l.spliceBelow ? ' (splice below)' : ''}`,
                   num(l.D_kip, 1),
                   num(l.L_kip, 1),
@@ -634,11 +673,11 @@ export function buildCalcBook(input: CalcBookInput): CalcBook {
     if (!c.tiers || c.tiers.length === 0) continue;
     sections.push({
       id: `column-${c.id}`,
-      title: `Column ${c.id}`,
+      title: names.column(c.id).replace(/^c/, 'C'),
       blocks: [
         {
           type: 'paragraph',
-          text: `${c.tiers.length} tier(s)${c.spliceLevels?.length ? `, splices above ${c.spliceLevels.map((l) => levelName.get(l) ?? l).join(', ')}` : ''}${c.locked ? `; size locked to ${c.locked} (checked, not replaced)` : ''}; ${num(c.weight_lb, 0)} lb of steel. Flexural buckling about both axes, AISC 360-16 E3 (Fe by Eq. E3-4; Fcr by Eq. E3-2 where Lc/r ≤ 4.71 sqrt(E/Fy), else Eq. E3-3; Pn = Fcr Ag, Eq. E3-1) or E7 where Table B4.1a makes the web or flanges slender (Pn = Fcr Ae, Eq. E7-1, effective widths by Eq. E7-2/E7-3); ${lrfdCol ? 'φc = 0.90' : 'Ωc = 1.67'} (E1). E = ${num(E_KSI, 0)} ksi.`,
+          text: `${c.tiers.length} tier(s)${c.spliceLevels?.length ? `, splices above ${c.spliceLevels.map((l) => levelName.get(l) ?? l).join(', ')}` : ''}${c.locked ? `; size locked to ${c.locked} (checked, not replaced)` : ''}; ${cellText(num(c.weight_lb, 0))} lb of steel. Flexural buckling about both axes, AISC 360-16 E3 (Fe by Eq. E3-4; Fcr by Eq. E3-2 where Lc/r ≤ 4.71 sqrt(E/Fy), else Eq. E3-3; Pn = Fcr Ag, Eq. E3-1) or E7 where Table B4.1a makes the web or flanges slender (Pn = Fcr Ae, Eq. E7-1, effective widths by Eq. E7-2/E7-3); ${lrfdCol ? 'φc = 0.90' : 'Ωc = 1.67'} (E1). E = ${cellText(num(E_KSI, 0))} ksi.`,
         },
         {
           type: 'table',
@@ -729,8 +768,9 @@ export function buildMemberCalcSheet(input: MemberCalcSheetInput): CalcBook | nu
   const level = plan.levels.find((l) => l.id === m.level);
   const limits = memberDeflectionLimits(basis, { deflectionLimits: pm?.deflectionLimits ?? null });
   const bracingSource = memberBracingSource({ bracing: pm?.bracing ?? null, Lb_override_ft: pm?.Lb_override_ft ?? null });
-  const reasons = attentionReasons(m, design.problems ?? []);
-  const section = memberSection(m, [], level?.name ?? m.level, reasons, limitRefs(plan, m.id));
+  const names = bookNames(plan, design);
+  const reasons = attentionReasons(m, design.problems ?? [], names);
+  const section = memberSection(m, [], level?.name ?? m.level, reasons, names, limitRefs(plan, m.id));
   const d = m.design;
   const lrfd = (d?.method ?? basis.method) === 'LRFD';
   const settingsRows: [string, CalcCell][] = [

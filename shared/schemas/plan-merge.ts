@@ -27,7 +27,17 @@ function same(kind: string, a: El | undefined, b: El | undefined): boolean {
   return sameElement(kind, a, b);
 }
 
-export function mergePlans(base: Plan, mine: Plan, theirs: Plan): PlanMerge {
+/** Whose version a conflicting element takes: the engineer's answer, per element. */
+export type MergeChoice = 'mine' | 'theirs';
+
+/** The key of a conflict in a choices map ("members:b2", "settings:designBasis"). */
+export const conflictKey = (c: MergeConflict) => `${c.kind}:${c.id}`;
+
+/**
+ * `choose` answers each conflict (theirs when it is absent or says nothing): the conflicts are
+ * still listed, so the caller can tell what was asked.
+ */
+export function mergePlans(base: Plan, mine: Plan, theirs: Plan, choose?: (c: MergeConflict) => MergeChoice | undefined): PlanMerge {
   const conflicts: MergeConflict[] = [];
   const merged: Record<string, unknown> = { ...theirs };
   for (const kind of MERGED_KINDS) {
@@ -48,8 +58,9 @@ export function mergePlans(base: Plan, mine: Plan, theirs: Plan): PlanMerge {
       else if (!theirsChanged) pick = em;
       else if (same(kind, em, et)) pick = et;
       else {
-        conflicts.push({ kind, id });
-        pick = et; // theirs until the engineer chooses
+        const conflict = { kind, id };
+        conflicts.push(conflict);
+        pick = choose?.(conflict) === 'mine' ? em : et; // theirs until the engineer chooses
       }
       if (pick) out.push(pick);
     }
@@ -59,7 +70,11 @@ export function mergePlans(base: Plan, mine: Plan, theirs: Plan): PlanMerge {
   const settings = (p: Plan) => JSON.stringify({ name: p.name, designBasis: p.designBasis });
   if (settings(mine) !== settings(base)) {
     if (settings(theirs) === settings(base) || settings(theirs) === settings(mine)) Object.assign(merged, { name: mine.name, designBasis: mine.designBasis });
-    else conflicts.push({ kind: 'settings', id: 'designBasis' });
+    else {
+      const conflict = { kind: 'settings' as const, id: 'designBasis' };
+      conflicts.push(conflict);
+      if (choose?.(conflict) === 'mine') Object.assign(merged, { name: mine.name, designBasis: mine.designBasis });
+    }
   }
   return { plan: merged as unknown as Plan, conflicts };
 }

@@ -156,8 +156,14 @@ describe('scheme and plan events', () => {
 
   it('when a save conflicts or is refused, then nothing is recorded for it', async () => {
     const schemeId = await importScheme('Audit conflict scheme');
-    await t.agents.engineer.put(`/api/schemes/${schemeId}/plan`).send({ revision: 1, plan: twoBayPlan() }).expect(200);
-    expect((await t.agents.owner.put(`/api/schemes/${schemeId}/plan`).send({ revision: 1, plan: twoBayPlan() })).status).toBe(409);
+    const sized = (shape: string) => {
+      const plan = twoBayPlan() as { members: { id: string; shape: string | null }[] };
+      plan.members = plan.members.map((m) => (m.id === 'b2' ? { ...m, shape } : m));
+      return plan;
+    };
+    await t.agents.engineer.put(`/api/schemes/${schemeId}/plan`).send({ revision: 1, plan: sized('W21X44') }).expect(200);
+    // Both changed beam b2 differently: a conflict (different elements would have merged).
+    expect((await t.agents.owner.put(`/api/schemes/${schemeId}/plan`).send({ revision: 1, plan: sized('W24X55') })).status).toBe(409);
     expect((await t.agents.engineer.put(`/api/schemes/${schemeId}/plan`).send({ revision: 2, plan: { format: 'nope' } })).status).toBe(422);
     const revised = await eventsOf(schemeId, '?action=plan.revised');
     expect(revised.map((e) => [e.userId, e.detail?.revision])).toEqual([[t.seed.userIds.engineer, 2]]);

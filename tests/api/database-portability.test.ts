@@ -97,7 +97,8 @@ describe(`database portability (${testDialect})`, () => {
   it('when two saves race on the same revision, then exactly one wins and the other is told the revision moved', async () => {
     const { schemeId } = await makeScheme(t);
     const plan = (await t.agents.engineer.get(`/api/schemes/${schemeId}/export`)).body;
-    const edits = ['Race left', 'Race right'].map((name) => ({ ...plan, name }));
+    // Both change the same beam differently: a true conflict, so one must be told (different elements would merge).
+    const edits = ['W21X44', 'W24X55'].map((shape) => ({ ...plan, members: plan.members.map((m: { id: string }) => (m.id === 'b2' ? { ...m, shape } : m)) }));
     const answers = await Promise.all(edits.map((p) => t.agents.engineer.put(`/api/schemes/${schemeId}/plan`).send({ revision: 1, plan: p })));
     expect(answers.map((a) => a.status).sort()).toEqual([200, 409]);
     const loser = answers.find((a) => a.status === 409)!;

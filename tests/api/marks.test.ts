@@ -65,8 +65,9 @@ describe('PATCH /api/schemes/:id/marks', () => {
     expect(res.status).toBe(422);
     expect(res.body.error.code).toBe('marks_invalid');
     expect(res.body.error.message).toContain('Mark 2B5 on Level 2');
-    expect(res.body.error.message).toContain('member b1');
-    expect(res.body.error.message).toContain('member b2');
+    // By kind and grid location: b1 lies on line 1, b2 10 ft east of it.
+    expect(res.body.error.message).toContain('the beam at A–B / 1 (');
+    expect(res.body.error.message).toContain(`the beam at A–B / 1+10'-0" is`);
     expect(res.body.error).toMatchObject({ memberId: 'b2', mark: '2B5' });
     expect((await storedMember(schemeId, 'b2')).mark).toBeNull();
     expect(await t.ctx.db.models.PlanRevision.count({ where: { schemeId } })).toBe(1);
@@ -76,7 +77,9 @@ describe('PATCH /api/schemes/:id/marks', () => {
     const { schemeId } = await makeScheme(t, { designed: true });
     const res = await t.agents.drafter.patch(`/api/schemes/${schemeId}/marks`).send({ revision: 1, marks: [{ memberId: 'nope', mark: 'X1' }] });
     expect(res.status).toBe(422);
-    expect(res.body.error.message).toBe('Member nope is not in this scheme.');
+    expect(res.body.error.message).toBe('A member of this mark edit is not in this scheme (deleted since it was opened?); reload the plan and edit the marks again.');
+    // The id stays where a program reads it: the field key and the details.
+    expect(res.body.error.fields).toHaveProperty(['marks.nope']);
   });
 
   it('when the mark is blank or too long, then 400 names the field', async () => {
@@ -146,7 +149,10 @@ describe('marks once issued stay put', () => {
     expect(otherMark).not.toBe(before.byId.get('b1'));
     const res = await t.agents.drafter.patch(`/api/schemes/${schemeId}/marks`).send({ revision: 1, marks: [{ memberId: 'b1', mark: otherMark }] });
     expect(res.status).toBe(422);
-    expect(res.body.error.message).toContain(`Mark ${otherMark} on Level 2 is already used by member b2`);
+    // Both members by kind and grid location (b2 is 10 ft east of line 1, b1 on line 1), never by id.
+    expect(res.body.error.message).toContain(`Mark ${otherMark} on Level 2 is already used by the beam at A–B / 1+10'-0"`);
+    expect(res.body.error.message).toContain(`the beam at A–B / 1 is`);
+    expect(res.body.error.message).not.toMatch(/\bb[12]\b/);
     expect(await t.ctx.db.models.PlanRevision.count({ where: { schemeId } })).toBe(1);
   });
 });

@@ -140,10 +140,11 @@ describe('PUT /api/schemes/:id/plan', () => {
     expect(rev?.getDataValue('userId')).toBe(t.seed.userIds.engineer);
   });
 
-  it('when the revision is stale, then 409 revision_conflict carries the current plan and nothing is lost', async () => {
+  it('when the revision is stale and both changed the same member, then 409 revision_conflict carries the current plan and nothing is lost', async () => {
     const { schemeId } = await makeScheme(t);
     const first = twoBayPlan() as { members: Record<string, unknown>[] };
     first.members.push({ id: 'b8', level: 'L2', kind: 'beam', start: [5, 0], end: [5, 36], shape: null, maxDepth_in: null });
+    first.members = first.members.map((m) => (m.id === 'b2' ? { ...m, shape: 'W21X44' } : m));
     expect((await t.agents.owner.put(`/api/schemes/${schemeId}/plan`).send({ revision: 1, plan: first })).status).toBe(200);
 
     const second = twoBayPlan() as { members: Record<string, unknown>[] };
@@ -152,6 +153,7 @@ describe('PUT /api/schemes/:id/plan', () => {
     expect(res.status).toBe(409);
     expect(res.body.error.code).toBe('revision_conflict');
     expect(res.body.error.message).toContain('Imogen Ashdown');
+    expect(res.body.error.conflicts).toEqual([{ kind: 'members', id: 'b2', label: `beam at A–B / 1+10'-0"`, mine: 'removed', theirs: 'size W21X44' }]);
     const current = res.body.error.current;
     expect(current.revision).toBe(2);
     expect(current.updatedBy).toEqual({ id: t.seed.userIds.owner, name: 'Imogen Ashdown' });

@@ -12,7 +12,7 @@ function twoBay(): Plan {
   return parsePlanFile(raw).plan!;
 }
 
-function renderEditor(canEdit: boolean, save = vi.fn(async (): Promise<SavePlanOutcome> => ({ kind: 'saved', revision: 2, repairs: [] }))) {
+function renderEditor(canEdit: boolean, save: (schemeId: string, revision: number, plan: Plan) => Promise<SavePlanOutcome> = vi.fn(async (): Promise<SavePlanOutcome> => ({ kind: 'saved', revision: 2, repairs: [] }))) {
   const plan = twoBay();
   const utils = renderWithProviders(<PlanEditor schemeId="s1" schemeName="Scheme A" plan={plan} revision={1} canEdit={canEdit} save={save} />, {
     session: testSession(canEdit ? 'engineer' : 'drafter'),
@@ -98,24 +98,58 @@ describe('Plan editor', () => {
     expect(within(screen.getByRole('table')).getAllByRole('row')).toHaveLength(12);
   });
 
-  it('when a save meets a newer revision, then the banner says what changed and "Take theirs" shows their plan', async () => {
+  it('when a save meets a newer revision that changed the same grid line, then only that line is asked about and the choice is saved with their other change', async () => {
+    // Theirs: grid line 2 moved to 32 ft, and beam b7 deleted.
     const theirs = twoBay();
     theirs.members = theirs.members.filter((m) => m.id !== 'b7');
-    const save = vi.fn(async (): Promise<SavePlanOutcome> => ({ kind: 'conflict', current: { revision: 5, plan: theirs, updatedBy: 'Imogen Ashdown', updatedAt: null } }));
+    theirs.grids = theirs.grids!.map((g) => (g.id === 'g2' ? { ...g, offset_ft: 32 } : g));
+    const save = vi
+      .fn<(schemeId: string, revision: number, plan: Plan) => Promise<SavePlanOutcome>>()
+      .mockResolvedValueOnce({ kind: 'conflict', current: { revision: 5, plan: theirs, updatedBy: 'Imogen Ashdown', updatedAt: null } })
+      .mockResolvedValueOnce({ kind: 'saved', revision: 6, repairs: [] });
     renderEditor(true, save);
-    fireEvent.click(screen.getByRole('button', { name: /Infill/ }));
-    // Grid from spacings is an edit: it is saved, and meets the conflict.
+    // Grid from spacings moves lines 2 and 3 here (to 25 and 50 ft): it is saved, and meets the conflict.
     fireEvent.click(within(screen.getByRole('toolbar', { name: 'Plan tools' })).getByRole('button', { name: /Grid/ }));
     fireEvent.change(screen.getByLabelText('Bays 1, 2, 3 … (east–west), ft'), { target: { value: '2@25' } });
     fireEvent.click(screen.getByRole('button', { name: 'Grid from spacings' }));
-    const alert = await screen.findByRole('alert', {}, { timeout: 5000 });
+    const alert = await screen.findByRole('alert', {}, { timeout: 20_000 });
     expect(alert).toHaveTextContent('Imogen Ashdown saved this scheme (revision 5)');
-    expect(alert).toHaveTextContent('Changed there: 1 member removed.');
-    expect(alert).toHaveTextContent('Yours differs from theirs by: 2 grid lines changed, 1 member added.');
-    await act(async () => fireEvent.click(screen.getByRole('button', { name: 'Take theirs' })));
+    expect(alert).toHaveTextContent('You both changed one element');
+    const items = within(within(alert).getByRole('list', { name: 'Elements you both changed' })).getAllByRole('listitem');
+    expect(items.map((li) => li.textContent)).toEqual(['grid line 2: yours moved; theirs movedKeep mineTake theirs']);
+    // The choice is needed before saving.
+    expect(within(alert).getByRole('button', { name: 'Save my choices' })).toBeDisabled();
+    fireEvent.click(within(items[0]).getByRole('radio', { name: 'Take theirs' }));
+    await act(async () => fireEvent.click(within(alert).getByRole('button', { name: 'Save my choices' })));
     expect(screen.queryByRole('alert')).toBeNull();
-    expect(screen.getByTestId('save-status')).toHaveTextContent('Saved · revision 5');
-  });
+    expect(save).toHaveBeenCalledTimes(2);
+    expect(save.mock.calls[1][1]).toBe(5);
+    const sent = save.mock.calls[1][2];
+    // Theirs for line 2, mine for line 3 (only I moved it), their deleted beam stays deleted.
+    expect(sent.grids!.filter((g) => g.axis === 'x').map((g) => [g.label, g.offset_ft])).toEqual([['1', 0], ['2', 32], ['3', 50]]);
+    expect(sent.members.some((m) => m.id === 'b7')).toBe(false);
+    await waitFor(() => expect(screen.getByTestId('save-status')).toHaveTextContent('Saved · revision 6'));
+  }, 40_000);
+
+  it('when the server merged the save with another, then a notice names who and what came in, and the plan shows it', async () => {
+    const save = vi.fn(async (_schemeId: string, _revision: number, plan: Plan): Promise<SavePlanOutcome> => ({
+      kind: 'saved',
+      revision: 6,
+      repairs: [],
+      merged: { basedOn: 1, mergedWith: 5, by: ['Imogen Ashdown'], changes: ['beam at A–B / 3 removed'], plan: { ...plan, members: plan.members.filter((m) => m.id !== 'b7') } },
+    }));
+    renderEditor(true, save);
+    fireEvent.click(within(screen.getByRole('toolbar', { name: 'Plan tools' })).getByRole('button', { name: /Grid/ }));
+    fireEvent.change(screen.getByLabelText('Bays 1, 2, 3 … (east–west), ft'), { target: { value: '2@25' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Grid from spacings' }));
+    const notice = await screen.findByTestId('merged-notice', {}, { timeout: 20_000 });
+    expect(notice).toHaveTextContent('Merged with Imogen Ashdown’s save (revision 5); your changes are kept and saved with theirs. Taken in from theirs:');
+    expect(within(notice).getAllByRole('listitem').map((li) => li.textContent)).toEqual(['beam at A–B / 3 removed']);
+    expect(screen.getByTestId('save-status')).toHaveTextContent('Saved · revision 6');
+    expect(within(screen.getByRole('table')).getAllByRole('row')).toHaveLength(11);
+    fireEvent.click(within(notice).getByRole('button', { name: 'Dismiss' }));
+    expect(screen.queryByTestId('merged-notice')).toBeNull();
+  }, 40_000);
 
   it('when the grid spacings cannot be read, then the field says why and nothing changes', () => {
     renderEditor(true);

@@ -29,4 +29,15 @@ describe('three-way merge of plans on element ids', () => {
     const theirs = { ...base, members: base.members.map((m) => (m.id === 'b2' ? { ...m, shape: 'W24X55' } : m)) };
     expect(mergePlans(base, mine, theirs).conflicts).toEqual([]);
   });
+
+  it('when the engineer chooses mine for a conflict, then that element is mine and the rest still merges', () => {
+    const base = twoBayPlan();
+    const mine = { ...base, members: base.members.map((m) => (m.id === 'b2' ? { ...m, shape: 'W21X44' } : m)) };
+    const theirs = { ...base, members: base.members.filter((m) => m.id !== 'b7').map((m) => (m.id === 'b2' ? { ...m, shape: 'W24X55' } : m)) };
+    const { plan, conflicts } = mergePlans(base, mine, theirs, (c) => (c.id === 'b2' ? 'mine' : undefined));
+    expect(conflicts).toEqual([{ kind: 'members', id: 'b2' }]);
+    expect(plan.members.find((m) => m.id === 'b2')!.shape).toBe('W21X44');
+    expect(plan.members.some((m) => m.id === 'b7')).toBe(false);
+    expect(mergePlans(base, mine, theirs).plan.members.find((m) => m.id === 'b2')!.shape).toBe('W24X55');
+  });
 });

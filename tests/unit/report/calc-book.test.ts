@@ -125,7 +125,9 @@ describe('buildCalcBook on the two-bay fixture', () => {
     const ends = tableRows(s, 'End reactions');
     expect((ends[0][2] as CalcNumber).n).toBe(m.reactions.start.D_kip);
     expect((ends[1][3] as CalcNumber).n).toBe(m.reactions.end.L_kip);
-    expect(cellText(ends[0][1])).toBe(m.reactions.start.supportedBy);
+    // The support by name, never by id: the fixture's girders bear on columns at grid intersections.
+    expect(m.reactions.start.supportedBy).toBe('C-A1');
+    expect(cellText(ends[0][1])).toBe('column at A1');
   });
 
   it('when built, then the basis of design states the code editions, E, Fy and the engine\u2019s assumptions', () => {
@@ -207,12 +209,13 @@ describe('buildCalcBook with a failing member', () => {
     const attention = b.sections.find((s) => s.id === 'attention')!;
     const t = attention.blocks.find((x) => x.type === 'table');
     if (!t || t.type !== 'table') throw new Error('no attention table');
-    const row = t.rows.find((r) => r[1] === 'b1')!;
+    // b1 runs along grid line 1 from A to B: listed by its grid location, not its id.
+    const row = t.rows.find((r) => r[1] === 'A–B / 1')!;
     expect(row[0]).toBe(b1.mark);
     expect(row[2]).toBe('W8X10');
     expect((row[3] as CalcNumber).n).toBe(b1.ratio);
     expect(b1.ratio!).toBeGreaterThan(1);
-    expect(t.rows.every((r) => design.members.find((m) => m.id === r[1])!.passes === false)).toBe(true);
+    expect(t.rows.every((r) => design.members.some((m) => m.mark === r[0] && !m.passes))).toBe(true);
   });
 
   it('when a failing member shares its mark in distinct mode, then it is still printed in full with its warning', () => {

@@ -2,17 +2,39 @@ import { z } from 'zod';
 import { ApiError } from '../../../lib/api-client';
 import { exportPlanFile, parsePlanFile, type Plan } from '../../../../shared/schemas/plan.schema';
 
-export const savePlanResponseSchema = z.object({ revision: z.number().int(), repairs: z.array(z.string()).default([]) });
+const mergedSchema = z.object({
+  basedOn: z.number().int(),
+  mergedWith: z.number().int(),
+  by: z.array(z.string()).default([]),
+  changes: z.array(z.string()).default([]),
+  plan: z.unknown(),
+});
+
+export const savePlanResponseSchema = z.object({ revision: z.number().int(), repairs: z.array(z.string()).default([]), merged: mergedSchema.optional() });
+
+/** A save based on an older revision that the server merged with the saves made since. */
+export interface SaveMerged {
+  basedOn: number;
+  mergedWith: number;
+  /** Who saved the revisions it was merged with. */
+  by: string[];
+  /** What was taken in from theirs, one line per element, named by mark and grid location. */
+  changes: string[];
+  /** The plan as saved (theirs and mine together). */
+  plan: Plan | null;
+}
 
 export interface SaveConflict {
   revision: number;
   plan: Plan | null;
   updatedBy: string | null;
   updatedAt: string | null;
+  /** Why the server could not merge the save even though no element was changed by both. */
+  mergeProblem?: string | null;
 }
 
 export type SavePlanOutcome =
-  | { kind: 'saved'; revision: number; repairs: string[] }
+  | { kind: 'saved'; revision: number; repairs: string[]; merged?: SaveMerged }
   | { kind: 'conflict'; current: SaveConflict }
   | { kind: 'invalid'; problems: string[] };
 
@@ -25,9 +47,11 @@ const currentSchema = z.object({
 
 /** `current` may sit in the error envelope or beside it. */
 function readConflict(payload: unknown) {
-  const p = payload as { current?: unknown; error?: { current?: unknown } } | undefined;
+  const p = payload as { current?: unknown; error?: { current?: unknown; mergeProblem?: unknown } } | undefined;
   const parsed = currentSchema.safeParse(p?.error?.current ?? p?.current);
-  return parsed.success ? parsed.data : null;
+  if (!parsed.success) return null;
+  const mergeProblem = typeof p?.error?.mergeProblem === 'string' ? p.error.mergeProblem : null;
+  return { ...parsed.data, mergeProblem };
 }
 
 /**
@@ -47,12 +71,17 @@ export async function savePlan(schemeId: string, revision: number, plan: Plan): 
   const payload: unknown = await response.json().catch(() => undefined);
   if (response.ok) {
     const r = savePlanResponseSchema.parse(payload);
-    return { kind: 'saved', revision: r.revision, repairs: r.repairs };
+    if (!r.merged) return { kind: 'saved', revision: r.revision, repairs: r.repairs };
+    const { plan: mergedPlan, ...merged } = r.merged;
+    return { kind: 'saved', revision: r.revision, repairs: r.repairs, merged: { ...merged, plan: parsePlanFile(mergedPlan).plan } };
   }
   if (response.status === 409) {
     const current = readConflict(payload);
     if (current) {
-      return { kind: 'conflict', current: { revision: current.revision, plan: parsePlanFile(current.plan).plan, updatedBy: current.updatedBy ?? null, updatedAt: current.updatedAt ?? null } };
+      return {
+        kind: 'conflict',
+        current: { revision: current.revision, plan: parsePlanFile(current.plan).plan, updatedBy: current.updatedBy ?? null, updatedAt: current.updatedAt ?? null, mergeProblem: current.mergeProblem },
+      };
     }
   }
   if (response.status === 422) {

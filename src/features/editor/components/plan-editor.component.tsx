@@ -15,7 +15,7 @@ import { createEditorStore, type EditorStore } from '../store/editor.store';
 import type { StudyPreview } from '../store/editor.types';
 import { PlanAutosave, type AutosaveSnapshot } from '../sync/plan-autosave';
 import { createToolController } from '../tools/tool-controller';
-import { ConflictBanner } from './conflict-banner.component';
+import { ConflictBanner, MergedBanner } from './conflict-banner.component';
 import { EditMenu } from './edit-menu.component';
 import { LevelBar } from './level-bar.component';
 import { PlanToolbar } from './plan-toolbar.component';
@@ -272,7 +272,16 @@ export function PlanEditor(props: PlanEditorProps) {
           ) : null}
         </div>
       </div>
-      {saveState.conflict ? <ConflictBanner conflict={saveState.conflict} onKeepMine={() => void autosave.keepMine()} onTakeTheirs={() => autosave.takeTheirs()} /> : null}
+      {saveState.conflict ? (
+        <ConflictBanner
+          key={`${saveState.conflict.revision}:${saveState.conflict.items.map((i) => i.key).join(',')}`}
+          conflict={saveState.conflict}
+          onResolve={(choices) => void autosave.resolve(choices)}
+          onKeepMine={() => void autosave.keepMine()}
+          onTakeTheirs={() => autosave.takeTheirs()}
+        />
+      ) : null}
+      {saveState.merged && !saveState.conflict ? <MergedBanner merged={saveState.merged} onDismiss={() => autosave.dismissMerged()} /> : null}
       {recovered && canEdit ? (
         <div role="alert" className="flex flex-wrap items-center gap-3 border-b-2 border-notice bg-notice-wash px-4 py-2 text-sm">
           <span className="flex-1">Changes to this scheme from {new Date(recovered.keptAt).toLocaleString()} were kept on this device but not saved.</span>

@@ -1,13 +1,49 @@
 /**
  * Saves the plan being edited: every change, debounced, PUT with the revision it was based
- * on. On a conflict (someone saved in between) nothing is overwritten and nothing local is
- * dropped: the editor shows what differs and the engineer chooses "keep mine" or "take
- * theirs". Until a save succeeds the local plan is also kept on this device.
+ * on. When someone saved in between, the server merges the two on element ids and saves the
+ * merge: the editor takes in their changes (and says which). Only elements both changed come
+ * back as a conflict: nothing is overwritten and nothing local is dropped, and the engineer
+ * chooses per element (or for all) whether to keep mine or take theirs; everything else of
+ * both is kept. Until a save succeeds the local plan is also kept on this device.
  */
 import type { Plan } from '../../../../shared/schemas/plan.schema';
+import { conflictKey, mergePlans, type MergeChoice, type MergeConflict } from '../../../../shared/schemas/plan-merge';
+import { elementName, sideWords } from '../../../../shared/drafting/plan-changes.drafting';
 import type { SaveConflict, SavePlanOutcome } from '../api/save-plan.api';
 import type { EditorStore } from '../store/editor.store';
 import { diffPlans, type PlanDiff } from './plan-diff';
+
+/** One element both sides changed, as the engineer is asked about it. */
+export interface ConflictItem extends MergeConflict {
+  key: string;
+  /** "beam 2B1 at B–C / 2" */
+  label: string;
+  /** What I did to it, and what they did ("size W21X44", "removed"). */
+  mine: string;
+  theirs: string;
+}
+
+export interface SaveConflictState extends SaveConflict {
+  /** The plan both started from (what this editor last saved or loaded). */
+  base: Plan;
+  /** Elements both changed differently: asked about. Empty when the merge itself cannot be saved (`mergeProblem`). */
+  items: ConflictItem[];
+  theirsVsBase: PlanDiff | null;
+  mineVsTheirs: PlanDiff | null;
+}
+
+/** What a merged save took in from the others' saves, for the notice above the plan. */
+export interface MergedNotice {
+  by: string[];
+  revision: number;
+  changes: string[];
+}
+
+function elementIds(plan: Plan): Set<string> {
+  const ids = new Set<string>();
+  for (const list of [plan.levels, plan.grids ?? [], plan.columns, plan.members, plan.decks, plan.zones, plan.pointLoads, plan.lineLoads, plan.openings]) for (const e of list) ids.add(e.id);
+  return ids;
+}
 
 export type SaveStatus = 'saved' | 'pending' | 'saving' | 'conflict' | 'invalid' | 'offline' | 'readonly';
 
@@ -15,7 +51,9 @@ export interface AutosaveSnapshot {
   status: SaveStatus;
   revision: number;
   message: string | null;
-  conflict: (SaveConflict & { theirsVsBase: PlanDiff | null; mineVsTheirs: PlanDiff | null }) | null;
+  conflict: SaveConflictState | null;
+  /** Set after a save was merged with someone else's; cleared by dismissMerged. */
+  merged: MergedNotice | null;
   problems: string[];
   savedAt: number | null;
 }
@@ -46,7 +84,7 @@ export class PlanAutosave {
 
   constructor(private store: EditorStore, revision: number, private deps: AutosaveDeps) {
     this.lastSaved = store.getState().plan;
-    this.snapshot = { status: store.getState().readOnly ? 'readonly' : 'saved', revision, message: null, conflict: null, problems: [], savedAt: null };
+    this.snapshot = { status: store.getState().readOnly ? 'readonly' : 'saved', revision, message: null, conflict: null, merged: null, problems: [], savedAt: null };
   }
 
   start() {
@@ -151,6 +189,12 @@ export class PlanAutosave {
     }
     this.inFlight = false;
     if (outcome.kind === 'saved') {
+      if (outcome.merged?.plan) {
+        this.tookMerge(plan, outcome.revision, outcome.merged.plan, { by: outcome.merged.by, revision: outcome.merged.mergedWith, changes: outcome.merged.changes });
+        this.set({ message: outcome.repairs.length ? `Saved; the server fixed: ${outcome.repairs.join('; ')}` : null, problems: [], savedAt: Date.now() });
+        this.deps.onSaved?.(outcome.revision, outcome.merged.plan);
+        return;
+      }
       this.lastSaved = plan;
       this.set({ status: 'saved', revision: outcome.revision, message: outcome.repairs.length ? `Saved; the server fixed: ${outcome.repairs.join('; ')}` : null, problems: [], savedAt: Date.now() });
       this.deps.onSaved?.(outcome.revision, plan);
@@ -160,20 +204,96 @@ export class PlanAutosave {
     }
     if (outcome.kind === 'conflict') {
       const theirs = outcome.current.plan;
-      this.set({
-        status: 'conflict',
-        conflict: {
-          ...outcome.current,
-          theirsVsBase: theirs ? diffPlans(this.lastSaved, theirs) : null,
-          mineVsTheirs: theirs ? diffPlans(theirs, this.store.getState().plan) : null,
-        },
-      });
+      if (!theirs) {
+        this.set({ status: 'conflict', conflict: { ...outcome.current, base: this.lastSaved, items: [], theirsVsBase: null, mineVsTheirs: null } });
+        return;
+      }
+      this.enterConflict(this.lastSaved, theirs, outcome.current);
       return;
     }
     this.set({ status: 'invalid', problems: outcome.problems, message: 'The server refused this plan; your drawing is kept here.' });
   }
 
-  /** Save over the other change: my plan, based on their revision. */
+  /**
+   * The server saved `sent` merged with theirs as `merged` (revision `revision`). The editor
+   * shows the merge; edits made while the save was on its way are merged over it here the same
+   * way (base: what was sent), and asked about when they touch an element theirs changed.
+   */
+  private tookMerge(sent: Plan, revision: number, merged: Plan, notice: MergedNotice) {
+    const local = this.store.getState().plan;
+    this.lastSaved = merged;
+    if (local === sent) {
+      this.set({ status: 'saved', revision, merged: notice });
+      this.apply(merged);
+      this.discardLocalDraft();
+      return;
+    }
+    const m = mergePlans(sent, local, merged);
+    if (m.conflicts.length > 0) {
+      this.set({ revision, merged: notice });
+      this.enterConflict(sent, merged, { revision, plan: merged, updatedBy: notice.by.join(', ') || null, updatedAt: null });
+      return;
+    }
+    this.set({ status: 'pending', revision, merged: notice });
+    this.apply(m.plan);
+    this.schedule(this.deps.debounceMs ?? 600);
+  }
+
+  /** Shows `plan` in the editor (one Undo step), keeping the selection of elements still there. */
+  private apply(plan: Plan) {
+    const ids = elementIds(plan);
+    const { selection } = this.store.getState();
+    this.store.setState({ plan, selection: selection.filter((id) => ids.has(id)) });
+  }
+
+  private enterConflict(base: Plan, theirs: Plan, current: SaveConflict) {
+    const mine = this.store.getState().plan;
+    const { conflicts } = mergePlans(base, mine, theirs);
+    const items: ConflictItem[] = conflicts.map((c) => ({
+      ...c,
+      key: conflictKey(c),
+      label: elementName(c.kind, c.id, [theirs, mine, base]),
+      mine: sideWords(c, base, mine),
+      theirs: sideWords(c, base, theirs),
+    }));
+    this.set({
+      status: 'conflict',
+      conflict: { ...current, plan: theirs, base, items, theirsVsBase: diffPlans(base, theirs), mineVsTheirs: diffPlans(theirs, mine) },
+    });
+  }
+
+  /**
+   * The engineer's answers to a conflict: each element both changed takes mine or theirs (as
+   * `choices` says; theirs when unanswered), everything else of both is kept, and the result
+   * is saved on their revision.
+   */
+  async resolve(choices: ReadonlyMap<string, MergeChoice>) {
+    const c = this.snapshot.conflict;
+    if (!c || !c.plan) return;
+    const mine = this.store.getState().plan;
+    const merged = mergePlans(c.base, mine, c.plan, (x) => choices.get(conflictKey(x))).plan;
+    this.lastSaved = c.plan;
+    this.set({ status: 'pending', revision: c.revision, conflict: null });
+    this.apply(JSON.stringify(merged) === JSON.stringify(c.plan) ? c.plan : merged);
+    await this.flush();
+  }
+
+  /** Mine for every element both changed; everything else of both is kept. */
+  keepMineForAll() {
+    const items = this.snapshot.conflict?.items ?? [];
+    return this.resolve(new Map(items.map((i) => [i.key, 'mine' as const])));
+  }
+
+  /** Theirs for every element both changed; my other changes are kept. */
+  takeTheirsForAll() {
+    return this.resolve(new Map());
+  }
+
+  dismissMerged() {
+    this.set({ merged: null });
+  }
+
+  /** Save over the other change: my whole plan, based on their revision (when the two cannot be merged). */
   async keepMine() {
     const c = this.snapshot.conflict;
     if (!c) return;
@@ -182,7 +302,7 @@ export class PlanAutosave {
     await this.flush();
   }
 
-  /** Take the saved plan; mine stays one Undo away (and on this device until then). */
+  /** Take their whole plan (when the two cannot be merged); mine stays one Undo away (and on this device until then). */
   takeTheirs() {
     const c = this.snapshot.conflict;
     if (!c || !c.plan) return;
