@@ -10,7 +10,7 @@ import * as m0007 from './migrations/0007-plan-v2-composite-columns';
 import * as m0008 from './migrations/0008-underlay-pdf-pages';
 import * as m0009 from './migrations/0009-bay-studies';
 import * as m0011 from './migrations/0011-column-tier-shapes';
-import * as m0014 from './migrations/0014-member-deflection-limits';
+import * as m0012 from './migrations/0012-member-deflection-limits';
 
 export type Migration = MigrationFn<QueryInterface>;
 
@@ -27,7 +27,7 @@ const MIGRATIONS: { name: string; up: Migration; down: Migration }[] = [
   { name: '0008-underlay-pdf-pages', ...m0008 },
   { name: '0009-bay-studies', ...m0009 },
   { name: '0011-column-tier-shapes', ...m0011 },
-  { name: '0014-member-deflection-limits', ...m0014 },
+  { name: '0012-member-deflection-limits', ...m0012 },
 ];
 
 /** The migration names in the order they run. */

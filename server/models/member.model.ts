@@ -22,7 +22,7 @@ export interface MemberAttributes extends PlanElementBase {
   composite: boolean | null;
   /** Plan version 2: a stud count to check. */
   studs: number | null;
-  /** Per-member deflection limits (migration 0014); NULL with 'deflectionLimits' in nullFields = explicit null. */
+  /** Per-member deflection limits (migration 0012); NULL with 'deflectionLimits' in nullFields = explicit null. */
   deflectionLimits: PlanMemberDeflectionLimits | null;
   /** Comma list of optional fields the file gave as an explicit null (NULL alone means absent). */
   nullFields: string | null;
