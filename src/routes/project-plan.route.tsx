@@ -158,7 +158,7 @@ function SchemePlan({
             />
           )}
           renderDesignBasis={({ designBasis, canEdit: can, submit }) => <DesignBasisForm value={designBasis} canEdit={can} onSubmit={submit} units={system} />}
-          renderMemberSheet={({ member, planMember, plan, result, canEdit: can, lockShape, setConstraints, close }) => (
+          renderMemberSheet={({ member, planMember, plan, result, canEdit: can, lockShape, setConstraints, setComposite, close }) => (
             <MemberSheet
               member={member}
               designBasis={plan.designBasis}
@@ -167,6 +167,7 @@ function SchemePlan({
               canEdit={can}
               onLockShape={lockShape}
               onConstraints={setConstraints}
+              onComposite={setComposite}
               onClose={close}
               names={planNamer(plan, new Map(result.members.map((m) => [m.id, m.mark])))}
               problems={result.problems.filter((p) => p.elementId === member.id).map((p) => describeProblem(p.message, planNamer(plan, new Map(result.members.map((m) => [m.id, m.mark])))))}

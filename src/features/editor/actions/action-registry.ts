@@ -228,6 +228,10 @@ export const ACTIONS = {
       plan: { ...s.plan, members: s.plan.members.map((m) => (m.id === a.id ? { ...m, maxDepth_in: a.maxDepth_in, minDepth_in: a.minDepth_in, allowedNominalDepths: a.allowedNominalDepths } : m)) },
     }),
   }),
+  'member.setComposite': action<{ id: string; composite: boolean | null }>({
+    id: 'member.setComposite', label: 'Composite or bare steel', undo: 'record', edits: true,
+    run: (s, a) => ({ plan: { ...s.plan, members: s.plan.members.map((m) => (m.id === a.id ? { ...m, composite: a.composite } : m)) } }),
+  }),
   'plan.setDesignBasis': action<{ designBasis: Plan['designBasis'] }>({
     id: 'plan.setDesignBasis', label: 'Design basis', undo: 'record', edits: true, run: (s, a) => ({ plan: { ...s.plan, designBasis: a.designBasis } }),
   }),

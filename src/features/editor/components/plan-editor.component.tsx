@@ -30,6 +30,8 @@ export interface MemberSheetSlotArgs {
   canEdit: boolean;
   lockShape: (shape: string | null) => void;
   setConstraints: (c: { maxDepth_in: number | null; minDepth_in: number | null; allowedNominalDepths: number[] | null }) => void;
+  /** null follows the design basis; true/false forces composite or bare steel (plan file members[].composite). */
+  setComposite: (composite: boolean | null) => void;
   close: () => void;
 }
 
@@ -320,6 +322,7 @@ export function PlanEditor(props: PlanEditorProps) {
                 canEdit,
                 lockShape: (shape) => dispatch(store, 'member.setShape', { id: selectedMember.id, shape }),
                 setConstraints: (c) => dispatch(store, 'member.setConstraints', { id: selectedMember.id, ...c }),
+                setComposite: (composite) => dispatch(store, 'member.setComposite', { id: selectedMember.id, composite }),
                 close: () => dispatch(store, 'selection.set', { ids: [] }),
               })}
             </div>

@@ -35,7 +35,7 @@ import {
   attempt, bracePoints, sheetAlternatives, sheetDesignInput, sheetDiagrams, type MemberConstraints, type MemberPlanSettings,
 } from '../lib/member-sheet.model';
 import { MemberChecksTable, MemberSegmentsTable } from './member-checks.component';
-import { MemberCompositePanel } from './member-composite.component';
+import { MemberCompositeChoice, MemberCompositePanel } from './member-composite.component';
 import { MemberDiagramsPanel } from './member-diagrams.component';
 import { MemberLoadsTable, MemberReactionsTable } from './member-loads.component';
 import type { PlanNamer } from '../../../../shared/drafting/element-names.drafting';
@@ -49,6 +49,8 @@ export interface MemberSheetProps {
   canEdit: boolean;
   onLockShape: (shape: string | null) => void;
   onConstraints: (constraints: MemberConstraints) => void;
+  /** Composite on/off for this member (null follows the design basis); absent hides the control. */
+  onComposite?: (composite: boolean | null) => void;
   onClose: () => void;
   problems?: string[];
   /** Names for the sheet's sentences (marks, grid locations, level and zone names), from the plan. */
@@ -100,7 +102,7 @@ function AlternativeRow({ label, alt, units, empty }: { label: string; alt: Alte
   );
 }
 
-export function MemberSheet({ member, designBasis, planMember, units, canEdit, onLockShape, onConstraints, onClose, problems = [], names }: MemberSheetProps) {
+export function MemberSheet({ member, designBasis, planMember, units, canEdit, onLockShape, onConstraints, onComposite, onClose, problems = [], names }: MemberSheetProps) {
   const design = member.design;
   const idBase = `member-sheet-${member.id}`;
 
@@ -221,6 +223,7 @@ export function MemberSheet({ member, designBasis, planMember, units, canEdit, o
           </Section>
 
           <Section title="Composite section" id={`${idBase}-composite`}>
+            <MemberCompositeChoice value={planMember?.composite ?? null} basisComposite={designBasis.composite?.enabled ?? false} canEdit={canEdit && !!onComposite} onChange={(v) => onComposite?.(v)} />
             <MemberCompositePanel design={design} note={member?.compositeNote ?? null} />
           </Section>
 

@@ -19,6 +19,8 @@ export interface MemberConstraints {
 export interface MemberPlanSettings extends MemberConstraints {
   shape: string | null;
   Lb_override_ft?: number | null;
+  /** null follows the design basis; true/false forces composite or bare steel. */
+  composite?: boolean | null;
 }
 
 export const SELF_WEIGHT_PREFIX = 'self weight';
