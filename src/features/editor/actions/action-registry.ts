@@ -12,7 +12,7 @@ import {
 } from './plan-edits';
 import { applyInfill, bayPolygon, findBay, infillBay, infillDirection } from '../../../../shared/engine/index';
 import { fitView, panBy, zoomAt } from '../canvas/view-transform';
-import type { Plan, PlanZone } from '../../../../shared/schemas/plan.schema';
+import type { Plan, PlanSlab, PlanZone } from '../../../../shared/schemas/plan.schema';
 
 /** 'record': one undo step when the plan changes. 'none': never in the undo history. */
 export type UndoMode = 'record' | 'none';
@@ -178,6 +178,20 @@ export const ACTIONS = {
   'deck.set': action<{ id: string; spanDirection?: 'x' | 'y'; zone?: string }>({
     id: 'deck.set', label: 'Change deck', undo: 'record', edits: true,
     run: (s, a) => ({ plan: setDeck(s.plan, a.id, { ...(a.spanDirection ? { spanDirection: a.spanDirection } : {}), ...(a.zone ? { zone: a.zone } : {}) }) }),
+  }),
+  'deck.setSlab': action<{ id: string; slab: PlanSlab | null }>({
+    id: 'deck.setSlab', label: 'Slab build-up', undo: 'record', edits: true,
+    run: (s, a) => ({
+      plan: {
+        ...s.plan,
+        decks: s.plan.decks.map((d) => {
+          if (d.id !== a.id) return d;
+          if (a.slab) return { ...d, slab: a.slab };
+          const { slab: _slab, ...rest } = d;
+          return rest;
+        }),
+      },
+    }),
   }),
   'zone.add': action<{ zone: Omit<PlanZone, 'id'> }>({
     id: 'zone.add', label: 'Add load zone', undo: 'record', edits: true,
