@@ -56,7 +56,7 @@ test('when the engineer changes the slab and opens a beam, then studs, camber an
   // The manager prices studs and camber and sees their cost on Tonnage.
   await page.context().clearCookies();
   await signInAs(page, 'manager@example.com');
-  await page.goto('/unit-prices');
+  await page.goto('/settings/unit-prices');
   await page.getByLabel(/^Shear stud \(US\$ each\)/).fill('4.50');
   await page.getByLabel(/^Camber \(US\$ per cambered piece\)/).fill('350');
   await page.getByRole('button', { name: 'Save prices' }).click();
