@@ -1,6 +1,6 @@
 import { expect, test } from '@playwright/test';
 import { SCREENSHOT_DIR, openDemoProject, signInAs } from './support/auth.helpers';
-import { clickPlan, planCanvas } from './support/plan-canvas.helpers';
+import { clickPlan, planCanvas, toPage } from './support/plan-canvas.helpers';
 
 // Composite beams end to end (issue 11): the engineer changes f'c of a deck's slab on the demo
 // scheme, the framing re-designs composite (studs and camber on the Plan labels and the Member
@@ -16,6 +16,13 @@ test('when the engineer changes the slab and opens a beam, then studs, camber an
   await page.getByRole('link', { name: /^Scheme A/ }).click();
   const canvas = await planCanvas(page, 90_000);
   await expect(page.getByTestId('design-status')).toContainText('sized', { timeout: 90_000 });
+  // Zoom in on the first bay until member labels (size, studs, camber) are drawn.
+  for (let i = 0; i < 12; i++) {
+    const p = await toPage(canvas, 15, 15);
+    await page.mouse.move(p.x, p.y);
+    await page.mouse.wheel(0, -120);
+    if (Number(await canvas.getAttribute('data-view-scale')) >= 12) break;
+  }
   await expect(canvas).toHaveAttribute('data-labelled-members', /^[1-9]\d*$/, { timeout: 30_000 });
 
   // A deck between the beams: its slab build-up with the dead load arithmetic.
