@@ -42,8 +42,8 @@ test('when the engineer changes the slab and opens a beam, then studs, camber an
   await clickPlan(page, canvas, 15, 10);
   await expect(page.getByTestId('member-sheet-shape')).toBeVisible({ timeout: 30_000 });
   const sheet = page.getByTestId('member-sheet-slot');
-  await expect(sheet.getByText('Construction stage (bare steel)')).toBeVisible({ timeout: 30_000 });
-  await expect(sheet.getByText('Final stage')).toBeVisible();
+  await expect(sheet.getByText('Construction stage (bare steel)', { exact: true }).first()).toBeVisible({ timeout: 30_000 });
+  await expect(sheet.getByText('Final stage', { exact: true }).first()).toBeVisible();
   await expect(sheet.getByText('Studs', { exact: true }).first()).toBeVisible();
   await expect(sheet.getByText('Camber', { exact: true }).first()).toBeVisible();
   await expect(sheet.getByRole('combobox', { name: 'Composite design' })).toHaveValue('basis');
