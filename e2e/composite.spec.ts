@@ -66,7 +66,8 @@ test('when the engineer changes the slab and opens a beam, then studs, camber an
   await page.getByLabel(/^Shear stud \(US\$ each\)/).fill('4.50');
   await page.getByLabel(/^Camber \(US\$ per cambered piece\)/).fill('350');
   await page.getByRole('button', { name: 'Save prices' }).click();
-  await expect(page.getByRole('status').filter({ hasText: 'Prices saved' })).toBeVisible({ timeout: 30_000 });
+  // The form remounts on the new prices row, so read the current prices rather than the status line.
+  await expect(page.getByRole('region', { name: 'Current prices' }).getByText('$4.50 each')).toBeVisible({ timeout: 30_000 });
   await page.goto('/projects');
   await openDemoProject(page);
   await page.getByRole('navigation', { name: 'Project sections' }).getByRole('link', { name: 'Tonnage' }).click();
