@@ -9,6 +9,7 @@ import * as m0006 from './migrations/0006-scheme-status-prices';
 import * as m0007 from './migrations/0007-plan-v2-composite-columns';
 import * as m0008 from './migrations/0008-underlay-pdf-pages';
 import * as m0009 from './migrations/0009-bay-studies';
+import * as m0010 from './migrations/0010-stud-camber-prices-deck-profiles';
 import * as m0011 from './migrations/0011-column-tier-shapes';
 import * as m0012 from './migrations/0012-member-deflection-limits';
 
@@ -26,6 +27,7 @@ const MIGRATIONS: { name: string; up: Migration; down: Migration }[] = [
   { name: '0007-plan-v2-composite-columns', ...m0007 },
   { name: '0008-underlay-pdf-pages', ...m0008 },
   { name: '0009-bay-studies', ...m0009 },
+  { name: '0010-stud-camber-prices-deck-profiles', ...m0010 },
   { name: '0011-column-tier-shapes', ...m0011 },
   { name: '0012-member-deflection-limits', ...m0012 },
 ];

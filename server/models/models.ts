@@ -26,6 +26,7 @@ import { defineSchemeActivityModel } from './scheme-activity.model';
 import { defineUnitPriceModel } from './unit-price.model';
 import { defineUnderlayModel } from './underlay.model';
 import { defineBayStudyModel } from './bay-study.model';
+import { defineDeckProfileModel } from './deck-profile.model';
 
 // Models are defined per Sequelize instance (tests run many in-memory databases), so the
 // app passes this object around instead of importing model classes globally.
@@ -62,6 +63,8 @@ export function defineModels(sequelize: Sequelize) {
     Underlay: defineUnderlayModel(sequelize),
     // Bay studies of a scheme (0009-bay-studies).
     BayStudy: defineBayStudyModel(sequelize),
+    // The firm's slab build-ups on deck (0010-stud-camber-prices-deck-profiles).
+    DeckProfile: defineDeckProfileModel(sequelize),
   };
 }
 

@@ -1,5 +1,5 @@
 import PDFDocument from 'pdfkit';
-import { describeDifference, formatEstimateUsd, NOT_YET_PRICED, tonnageDifference } from '../../shared/tonnage/cost';
+import { describeDifference, formatEstimateUsd, compositePricesText, notYetPriced, tonnageDifference } from '../../shared/tonnage/cost';
 import { LB_PER_TON } from '../../shared/tonnage/tonnage';
 import type { Comparison, ComparisonScheme } from '../services/comparison.service';
 
@@ -81,7 +81,7 @@ export function comparisonPdf(c: Comparison): Promise<Buffer> {
   const p = c.prices.prices;
   doc.text(
     p
-      ? `Unit prices${p.example ? ' (an invented example, not market prices)' : ''}: $${int.format(p.steel_usd_per_ton)} per ton fabricated and erected; $${int.format(p.connection_usd_each)} per connection; set ${p.setAt.slice(0, 10)}${p.setBy ? ` by ${p.setBy.name}` : ''}. Not yet priced: ${NOT_YET_PRICED.join(', ').toLowerCase()}.`
+      ? `Unit prices${p.example ? ' (an invented example, not market prices)' : ''}: $${int.format(p.steel_usd_per_ton)} per ton fabricated and erected; $${int.format(p.connection_usd_each)} per connection${compositePricesText(p) ? `; ${compositePricesText(p)}` : ''}; set ${p.setAt.slice(0, 10)}${p.setBy ? ` by ${p.setBy.name}` : ''}.${notYetPriced(p).length ? ` Not yet priced: ${notYetPriced(p).join(', ').toLowerCase()}.` : ''}`
       : 'No unit prices are set for the firm: costs are not estimated.',
     { width },
   );

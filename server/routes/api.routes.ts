@@ -26,6 +26,7 @@ import { sessionRoutes } from './session.routes';
 import { teamRoutes } from './team.routes';
 import { UNDERLAY_UPLOAD_PATHS, underlaysRoutes } from './underlays.routes';
 import { unitPricesRoutes } from './unit-prices.routes';
+import { deckProfilesRoutes } from './deck-profiles.routes';
 
 export const JSON_BODY_LIMIT = '2mb';
 
@@ -58,6 +59,7 @@ export function apiRoutes(ctx: AppContext): Router {
   // Bay studies (issue 15).
   api.use('/schemes', bayStudiesRoutes(ctx));
   api.use('/unit-prices', unitPricesRoutes(ctx));
+  api.use('/deck-profiles', deckProfilesRoutes(ctx));
   api.use('/invitations', invitationsRoutes(ctx));
   api.use('/password-resets', passwordResetRoutes(ctx));
   api.use('/team', teamRoutes(ctx));

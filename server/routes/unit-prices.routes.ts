@@ -16,6 +16,9 @@ export const unitPricesBody = z.object({
   // A steel price of zero would make every estimate free: refused.
   steel_usd_per_ton: usd('Steel price per ton', 1, 100_000),
   connection_usd_each: usd('Price per connection', 0, 100_000),
+  // Composite beams (issue 11): absent or null = not priced; estimates then leave them out.
+  stud_usd_each: usd('Price per shear stud', 0, 1_000).nullable().optional().transform((v) => v ?? null),
+  camber_usd_each: usd('Price per cambered piece', 0, 100_000).nullable().optional().transform((v) => v ?? null),
   note: z.string({ error: 'Note must be text' }).trim().max(500, 'Note is at most 500 characters').optional().transform((v) => (v ? v : null)),
 });
 

@@ -1,4 +1,4 @@
-import { NOT_YET_PRICED } from '../../shared/tonnage/cost';
+import { compositePricesText, notYetPriced } from '../../shared/tonnage/cost';
 import { LB_PER_TON, TONNAGE_BASIS } from '../../shared/tonnage/tonnage';
 import { SCHEME_CAUTION } from '../../shared/engine/index';
 import { AppError } from '../errors/app-error';
@@ -109,6 +109,10 @@ const CSV_HEADER = [
   'steel_usd',
   'connections_usd',
   'cost_usd',
+  'studs',
+  'camberedPieces',
+  'studs_usd',
+  'camber_usd',
 ];
 
 function figuresCells(f: FiguresWithCost): (string | number | null)[] {
@@ -122,6 +126,10 @@ function figuresCells(f: FiguresWithCost): (string | number | null)[] {
     f.steel_usd === null ? null : Math.round(f.steel_usd),
     f.connections_usd === null ? null : Math.round(f.connections_usd),
     f.cost_usd === null ? null : Math.round(f.cost_usd),
+    f.studs ?? 0,
+    f.camberedPieces ?? 0,
+    f.studs_usd === null ? null : Math.round(f.studs_usd),
+    f.camber_usd === null ? null : Math.round(f.camber_usd),
   ];
 }
 
@@ -133,7 +141,7 @@ export function comparisonCsv(c: Comparison): string {
   const p = c.prices.prices;
   lines.push(
     p
-      ? `# Unit prices${p.example ? ' (invented example, not a quotation)' : ''}: $${p.steel_usd_per_ton.toLocaleString('en-US')}/ton fabricated and erected; $${p.connection_usd_each.toLocaleString('en-US')} per connection. Not yet priced: ${NOT_YET_PRICED.join(', ')}.`
+      ? `# Unit prices${p.example ? ' (invented example, not a quotation)' : ''}: $${p.steel_usd_per_ton.toLocaleString('en-US')}/ton fabricated and erected; $${p.connection_usd_each.toLocaleString('en-US')} per connection${compositePricesText(p) ? `; ${compositePricesText(p)}` : ''}.${notYetPriced(p).length ? ` Not yet priced: ${notYetPriced(p).join(', ')}.` : ''}`
       : '# No unit prices set: costs are not estimated.',
   );
   lines.push(CSV_HEADER.join(','));

@@ -16,7 +16,14 @@ import type { SchemeServiceContext } from './plan-store.service';
 // Tonnage of one scheme from its stored design (designed first when stale), with the
 // estimated cost from the firm's unit prices. The arithmetic lives in shared/tonnage.
 
-export type FiguresWithCost = TonnageFigures & { cost_usd: number | null; steel_usd: number | null; connections_usd: number | null };
+/** Cost lines: null when the firm has no prices; studs_usd / camber_usd null also when that item is not priced. */
+export type FiguresWithCost = TonnageFigures & {
+  cost_usd: number | null;
+  steel_usd: number | null;
+  connections_usd: number | null;
+  studs_usd: number | null;
+  camber_usd: number | null;
+};
 
 export interface SchemeTonnageView {
   totals: FiguresWithCost;
@@ -29,8 +36,14 @@ export interface SchemeTonnageView {
 }
 
 function withCost<T extends TonnageFigures>(f: T, prices: UnitPrices | null): T & Omit<FiguresWithCost, keyof TonnageFigures> {
-  if (!prices) return { ...f, cost_usd: null, steel_usd: null, connections_usd: null };
-  return { ...f, ...estimateCost(f, prices) };
+  if (!prices) return { ...f, cost_usd: null, steel_usd: null, connections_usd: null, studs_usd: null, camber_usd: null };
+  const c = estimateCost(f, prices);
+  return {
+    ...f,
+    ...c,
+    studs_usd: prices.stud_usd_each == null ? null : c.studs_usd,
+    camber_usd: prices.camber_usd_each == null ? null : c.camber_usd,
+  };
 }
 
 /** The design fields tonnage reads, taken defensively from a stored result. */

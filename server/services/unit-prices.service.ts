@@ -1,4 +1,4 @@
-import { NOT_YET_PRICED, type UnitPrices } from '../../shared/tonnage/cost';
+import { notYetPriced, NOT_YET_PRICED, type UnitPrices } from '../../shared/tonnage/cost';
 import type { Db } from '../models/models';
 import type { UnitPriceAttributes } from '../models/unit-price.model';
 import { recordAudit } from './audit.service';
@@ -8,6 +8,9 @@ import { recordAudit } from './audit.service';
 
 export interface UnitPricesView extends UnitPrices {
   id: string;
+  /** null = not priced (estimates leave studs or camber out). */
+  stud_usd_each: number | null;
+  camber_usd_each: number | null;
   /** The demo's invented example prices, until someone sets real ones. */
   example: boolean;
   note: string | null;
@@ -35,6 +38,8 @@ async function toViews(db: Db, rows: UnitPriceAttributes[]): Promise<UnitPricesV
     id: r.id,
     steel_usd_per_ton: r.steelUsdPerTon,
     connection_usd_each: r.connectionUsdEach,
+    stud_usd_each: r.studUsdEach ?? null,
+    camber_usd_each: r.camberUsdEach ?? null,
     example: Boolean(r.example),
     note: r.note,
     setBy: r.userId && names.has(r.userId) ? { id: r.userId, name: names.get(r.userId)! } : null,
@@ -50,7 +55,7 @@ const NEWEST_FIRST: [string, string][] = [
 export async function getUnitPrices(ctx: PricesCtx, firmId: string): Promise<UnitPricesResponse> {
   const row = await ctx.db.models.UnitPrice.findOne({ where: { firmId }, order: NEWEST_FIRST });
   const [prices] = row ? await toViews(ctx.db, [row.get({ plain: true })]) : [null];
-  return { prices: prices ?? null, notYetPriced: NOT_YET_PRICED, currency: 'USD' };
+  return { prices: prices ?? null, notYetPriced: prices ? notYetPriced(prices) : NOT_YET_PRICED, currency: 'USD' };
 }
 
 export async function listUnitPriceHistory(ctx: PricesCtx, firmId: string): Promise<UnitPricesView[]> {
@@ -76,6 +81,8 @@ export async function setUnitPrices(
     firmId: actor.firmId,
     steelUsdPerTon: input.steel_usd_per_ton,
     connectionUsdEach: input.connection_usd_each,
+    studUsdEach: input.stud_usd_each ?? null,
+    camberUsdEach: input.camber_usd_each ?? null,
     example: options.example ?? false,
     note: input.note ?? null,
     userId: actor.userId,
@@ -88,9 +95,19 @@ export async function setUnitPrices(
     target: 'Unit prices',
     detail: {
       from: before.prices
-        ? { steel_usd_per_ton: before.prices.steel_usd_per_ton, connection_usd_each: before.prices.connection_usd_each }
+        ? {
+            steel_usd_per_ton: before.prices.steel_usd_per_ton,
+            connection_usd_each: before.prices.connection_usd_each,
+            stud_usd_each: before.prices.stud_usd_each,
+            camber_usd_each: before.prices.camber_usd_each,
+          }
         : null,
-      to: { steel_usd_per_ton: input.steel_usd_per_ton, connection_usd_each: input.connection_usd_each },
+      to: {
+        steel_usd_per_ton: input.steel_usd_per_ton,
+        connection_usd_each: input.connection_usd_each,
+        stud_usd_each: input.stud_usd_each ?? null,
+        camber_usd_each: input.camber_usd_each ?? null,
+      },
     },
   });
   return getUnitPrices(ctx, actor.firmId);

@@ -22,6 +22,8 @@ export { E_KSI } from './units/units.constants';
 export { SUPPORT_TOLERANCE_FT, buildFramingTopology, orderBySupport } from './geometry/framing-topology.geometry';
 export type { FramingTopology, FramingMember, EndSupport } from './geometry/framing-topology.geometry';
 export { computeDeckTributary } from './loads/deck-tributary.loads';
+export { slabWeight } from './loads/slab-weight.loads';
+export type { SlabBuildUp } from './loads/slab-weight.loads';
 export { deckOverlapProblems, polygonOverlapAreaFt2 } from './geometry/polygon-overlap.geometry';
 export { eq4_7_1Factor, liveLoadReductionFactor, kllTable4_7_1 } from './loads/live-load-reduction.loads';
 export { runTakedown } from './takedown/gravity-takedown.takedown';

@@ -27,6 +27,19 @@ export function notYetPriced(prices: Pick<UnitPrices, 'stud_usd_each' | 'camber_
   return out;
 }
 
+const priceFmt = new Intl.NumberFormat('en-US', { maximumFractionDigits: 2 });
+
+/**
+ * The stud and camber prices as a phrase for exports ("$4.50 per shear stud; $350 per cambered
+ * piece"), or null when neither is priced.
+ */
+export function compositePricesText(prices: Pick<UnitPrices, 'stud_usd_each' | 'camber_usd_each'>): string | null {
+  const parts: string[] = [];
+  if (prices.stud_usd_each != null) parts.push(`$${priceFmt.format(prices.stud_usd_each)} per shear stud`);
+  if (prices.camber_usd_each != null) parts.push(`$${priceFmt.format(prices.camber_usd_each)} per cambered piece`);
+  return parts.length ? parts.join('; ') : null;
+}
+
 export interface CostBreakdown {
   steel_usd: number;
   connections_usd: number;

@@ -174,7 +174,7 @@ function SchemePlan({
               </div>
             );
           }}
-          renderMemberSheet={({ member, planMember, plan, result, canEdit: can, lockShape, setConstraints, setMemberSettings, saved, close }) => (
+          renderMemberSheet={({ member, planMember, plan, result, canEdit: can, lockShape, setConstraints, setMemberSettings, saved, setComposite, close }) => (
             <MemberSheet
               member={member}
               designBasis={plan.designBasis}
@@ -186,6 +186,7 @@ function SchemePlan({
               onMemberSettings={setMemberSettings}
               calcSheetHref={memberCalcSheetHref(schemeId, member.id)}
               saved={saved}
+              onComposite={setComposite}
               onClose={close}
               names={planNamer(plan, new Map(result.members.map((m) => [m.id, m.mark])))}
               problems={result.problems.filter((p) => p.elementId === member.id).map((p) => describeProblem(p.message, planNamer(plan, new Map(result.members.map((m) => [m.id, m.mark])))))}

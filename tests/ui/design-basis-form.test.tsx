@@ -119,3 +119,71 @@ describe('DesignBasisForm', () => {
     expect(screen.getByText(/can read the design basis but not change it/)).toBeInTheDocument();
   });
 });
+
+// Composite settings (issue 11). An invented project basis: composite on, 3/4 in studs,
+// Fu 65 ksi, 25 % minimum, 10 lb per stud, 20 psf construction live, unshored, cambered
+// (the defaults of calc-interface.md "Additions"; 10 lb per stud is common practice).
+const COMPOSITE_BASIS: PlanDesignBasis = {
+  ...BASIS,
+  composite: { enabled: true, studDiameter_in: 0.75, studFu_ksi: 65, minPercentComposite: 0.25, constructionLive_psf: 20, shored: false, camber: true, studEquivalentWeight_lb: 10 },
+  columns: { series: ['W14'], storeysPerTier: 2 },
+};
+
+describe('DesignBasisForm composite settings', () => {
+  it('when opened on a composite basis, then it shows each setting, the minimum as a percent', () => {
+    render(<DesignBasisForm value={COMPOSITE_BASIS} onSubmit={vi.fn()} canEdit />);
+    expect(screen.getByRole('checkbox', { name: /Design beams and girders under a slab composite/ })).toBeChecked();
+    expect(screen.getByLabelText('Stud diameter')).toHaveValue('0.75');
+    expect(screen.getByLabelText('Stud Fu (ksi)')).toHaveValue('65');
+    expect(screen.getByLabelText('Minimum composite (%)')).toHaveValue('25');
+    expect(screen.getByLabelText('Steel-equivalent weight of a stud (lb)')).toHaveValue('10');
+    expect(screen.getByLabelText('Construction live load (psf)')).toHaveValue('20');
+    expect(screen.getByRole('checkbox', { name: /Shored construction/ })).not.toBeChecked();
+    expect(screen.getByRole('checkbox', { name: /Camber unshored members/ })).toBeChecked();
+  });
+
+  it('when the engineer sets 40 % minimum, 12 lb per stud, 5/8 in studs and no camber, then onSubmit gets them (fraction 0.4) and keeps the column settings', async () => {
+    const onSubmit = vi.fn();
+    render(<DesignBasisForm value={COMPOSITE_BASIS} onSubmit={onSubmit} canEdit />);
+    await replace('Minimum composite (%)', '40');
+    await replace('Steel-equivalent weight of a stud (lb)', '12');
+    await userEvent.selectOptions(screen.getByLabelText('Stud diameter'), '0.625');
+    await userEvent.click(screen.getByRole('checkbox', { name: /Camber unshored members/ }));
+    await userEvent.click(screen.getByRole('button', { name: 'Save design basis' }));
+    await waitFor(() => expect(onSubmit).toHaveBeenCalledTimes(1));
+    const next = onSubmit.mock.calls[0][0] as PlanDesignBasis;
+    expect(next.composite).toEqual({ enabled: true, studDiameter_in: 0.625, studFu_ksi: 65, minPercentComposite: 0.4, constructionLive_psf: 20, shored: false, camber: false, studEquivalentWeight_lb: 12 });
+    expect(next.columns).toEqual({ series: ['W14'], storeysPerTier: 2 });
+  });
+
+  it('when a plan without composite settings switches composite on, then the defaults come with it', async () => {
+    const onSubmit = vi.fn();
+    render(<DesignBasisForm value={BASIS} onSubmit={onSubmit} canEdit />);
+    expect(screen.getByRole('checkbox', { name: /Design beams and girders under a slab composite/ })).not.toBeChecked();
+    await userEvent.click(screen.getByRole('checkbox', { name: /Design beams and girders under a slab composite/ }));
+    await userEvent.click(screen.getByRole('button', { name: 'Save design basis' }));
+    await waitFor(() => expect(onSubmit).toHaveBeenCalledTimes(1));
+    expect(onSubmit.mock.calls[0][0].composite).toEqual({ ...COMPOSITE_BASIS.composite });
+  });
+
+  it('when the minimum composite is under 25 % or a stud weight is text, then those fields say so and nothing is submitted', async () => {
+    const onSubmit = vi.fn();
+    render(<DesignBasisForm value={COMPOSITE_BASIS} onSubmit={onSubmit} canEdit />);
+    await replace('Minimum composite (%)', '10');
+    await replace('Steel-equivalent weight of a stud (lb)', 'ten');
+    await replace('Stud Fu (ksi)', '400');
+    await userEvent.click(screen.getByRole('button', { name: 'Save design basis' }));
+    await waitFor(() => expect(screen.getByLabelText('Minimum composite (%)')).toHaveAccessibleDescription('Minimum composite must be between 25 and 100 %'));
+    expect(screen.getByLabelText('Steel-equivalent weight of a stud (lb)')).toHaveAccessibleDescription('Steel-equivalent weight of a stud must be a number in lb');
+    expect(screen.getByLabelText('Stud Fu (ksi)')).toHaveAccessibleDescription('Stud Fu must be between 50 and 100 ksi');
+    expect(onSubmit).not.toHaveBeenCalled();
+  });
+
+  it('when the role cannot edit, then the composite settings are shown but cannot be changed', () => {
+    render(<DesignBasisForm value={COMPOSITE_BASIS} onSubmit={vi.fn()} canEdit={false} />);
+    expect(screen.getByRole('checkbox', { name: /Design beams and girders under a slab composite/ })).toBeDisabled();
+    expect(screen.getByLabelText('Stud diameter')).toBeDisabled();
+    expect(screen.getByLabelText('Minimum composite (%)')).toHaveValue('25');
+    expect(screen.getByRole('checkbox', { name: /Camber unshored members/ })).toBeDisabled();
+  });
+});

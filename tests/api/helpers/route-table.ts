@@ -265,6 +265,7 @@ export const ROUTE_TABLE: RouteCase[] = [
   ...underlayRows(),
   ...draftingRows(),
   ...reviewRows(),
+  ...deckProfileRows(),
   ...studyRows(),
 ];
 
@@ -296,6 +297,29 @@ function reviewRows(): RouteCase[] {
       body: () => ({ steel_usd_per_ton: 5000, connection_usd_each: 200 }),
     },
     { method: 'GET', route: '/api/unit-prices/history', allowed: readers, okStatus: 200 },
+  ];
+}
+
+/** Deck profile library (issue 11): every role reads; engineers and owners keep the firm's own. */
+const MATRIX_SLAB = { ribHeight_in: 3, toppingThickness_in: 3.25, ribAvgWidth_in: 6, ribSpacing_in: 12, concreteWeight_pcf: 114, fc_ksi: 3.5, deckWeight_psf: 2.5 };
+function deckProfileRows(): RouteCase[] {
+  const readers = ['owner', 'engineer', 'drafter', 'manager'] as const;
+  const writers = ['owner', 'engineer'] as const;
+  const profile = (firm: 'own' | 'foreign') => async (fx: RouteFixture) => {
+    const now = new Date();
+    const row = await fx.t.ctx.db.models.DeckProfile.create({
+      firmId: firm === 'own' ? fx.t.seed.firmId! : fx.t.otherFirmId, name: `Matrix deck ${Date.now()}-${++fixtureCounter}`, slab: MATRIX_SLAB, userId: null, createdAt: now, updatedAt: now,
+    });
+    return `/api/deck-profiles/${row.getDataValue('id')}`;
+  };
+  return [
+    { method: 'GET', route: '/api/deck-profiles', allowed: readers, okStatus: 200 },
+    { method: 'POST', route: '/api/deck-profiles', allowed: writers, okStatus: 201, body: () => ({ name: `Matrix profile ${Date.now()}-${++fixtureCounter}`, slab: MATRIX_SLAB }) },
+    {
+      method: 'PUT', route: '/api/deck-profiles/:id', allowed: writers, okStatus: 200,
+      path: profile('own'), body: () => ({ name: `Matrix renamed ${Date.now()}-${++fixtureCounter}`, slab: MATRIX_SLAB }), foreignPath: profile('foreign'),
+    },
+    { method: 'DELETE', route: '/api/deck-profiles/:id', allowed: writers, okStatus: 204, path: profile('own'), foreignPath: profile('foreign') },
   ];
 }
 

@@ -14,7 +14,10 @@
  * equivalent in MPa is shown beside it, the value stays in ksi as steel grades are specified),
  * deflection limits as the denominators n of span/n (live, total; IBC Table 1604.3 floor
  * defaults 360 and 240; blank skips a check), live load reduction (ASCE 7-16 §4.7) on or off,
- * and what the total deflection includes. The caller re-designs the scheme after onSubmit.
+ * and what the total deflection includes. Composite beams (design-basis §6, §6a): on or off for
+ * members under a slab, stud diameter and Fu, the minimum percent composite, the steel weight a
+ * stud counts as in selection, the construction live load, shored construction and camber.
+ * Settings the form does not show (columns) are kept. The caller re-designs the scheme after onSubmit.
  */
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useEffect, useId } from 'react';
@@ -27,7 +30,8 @@ import { applyServerErrors } from '../../../lib/form-errors';
 import { formatQuantity, type UnitSystem } from '../../../lib/units';
 import { useUnits } from '../../../lib/units-context';
 import {
-  designBasisFormSchema, FY_DEFAULT_KSI, FY_MAX_KSI, FY_MIN_KSI, IBC_DEFLECTION_DEFAULTS, toFormValues,
+  designBasisFormSchema, FY_DEFAULT_KSI, FY_MAX_KSI, FY_MIN_KSI, IBC_DEFLECTION_DEFAULTS, MIN_COMPOSITE_PCT_RANGE, mergeDesignBasis,
+  STUD_EQUIVALENT_WEIGHT_DEFAULT_LB, STUD_FU_RANGE_KSI, toFormValues,
   type DesignBasisFormValues,
 } from './design-basis-form.schema';
 
@@ -38,7 +42,10 @@ export interface DesignBasisFormProps {
   units?: UnitSystem;
 }
 
-const FIELDS = ['method', 'Fy_ksi', 'liveLimit', 'totalLimit', 'liveLoadReduction', 'totalDeflectionIncludes'] as const;
+const FIELDS = [
+  'method', 'Fy_ksi', 'liveLimit', 'totalLimit', 'liveLoadReduction', 'totalDeflectionIncludes', 'compositeEnabled', 'studDiameter_in',
+  'studFu_ksi', 'minPercentComposite', 'studEquivalentWeight_lb', 'constructionLive_psf', 'shored', 'camber',
+] as const;
 
 export function DesignBasisForm({ value, onSubmit, canEdit, units }: DesignBasisFormProps) {
   const stored = useUnits().system;
@@ -70,7 +77,10 @@ export function DesignBasisForm({ value, onSubmit, canEdit, units }: DesignBasis
       ? `= ${formatQuantity('stress_ksi', fy, 'SI')}. ${FY_DEFAULT_KSI} ksi for ASTM A992 (common practice).`
       : `${FY_DEFAULT_KSI} ksi for ASTM A992 (common practice); ${FY_MIN_KSI}–${FY_MAX_KSI} ksi accepted.`;
 
-  const submit = handleSubmit(async (next) => {
+  const compositeOn = useWatch({ control, name: 'compositeEnabled' });
+
+  const submit = handleSubmit(async (formBasis) => {
+    const next = mergeDesignBasis(value, formBasis);
     try {
       await onSubmit(next);
       reset(toFormValues(next));
@@ -183,6 +193,83 @@ export function DesignBasisForm({ value, onSubmit, canEdit, units }: DesignBasis
             </span>
           </span>
         </label>
+      </fieldset>
+
+      <fieldset className="flex flex-col gap-3" disabled={readOnly} aria-describedby={`${ids}-composite-note`}>
+        <legend className="mb-1 text-sm font-medium text-ink">Composite beams (AISC 360-16 Chapter I)</legend>
+        <label className="inline-flex items-start gap-2 text-sm">
+          <input type="checkbox" className="mt-0.5 size-4 accent-[var(--color-accent)]" {...register('compositeEnabled')} />
+          <span>
+            <span className="font-medium text-ink">Design beams and girders under a slab composite</span>
+            <span className="block text-xs text-ink-faint">
+              Members under a deck with a slab build-up get studs; a member set to bare steel on its Member sheet stays bare steel.
+            </span>
+          </span>
+        </label>
+        <div className="grid gap-4 sm:grid-cols-2">
+          <div className="flex flex-col gap-1 text-sm">
+            <label htmlFor={`${ids}-stud-d`} className="font-medium text-ink">
+              Stud diameter
+            </label>
+            <select id={`${ids}-stud-d`} aria-describedby={`${ids}-stud-d-hint`} className="h-9 rounded-[3px] border border-line bg-paper-raised px-2 text-sm" {...register('studDiameter_in')}>
+              <option value="0.5">1/2 in</option>
+              <option value="0.625">5/8 in</option>
+              <option value="0.75">3/4 in</option>
+            </select>
+            <span id={`${ids}-stud-d-hint`} className="text-xs text-ink-faint">At most 3/4 in through formed deck (AISC 360-16 I3.2c).</span>
+          </div>
+          <TextField
+            label="Stud Fu (ksi)"
+            inputMode="decimal"
+            className="figures font-mono"
+            readOnly={readOnly}
+            error={errors.studFu_ksi?.message}
+            hint={`65 ksi for Type B headed studs (AWS D1.1); ${STUD_FU_RANGE_KSI.min}–${STUD_FU_RANGE_KSI.max} ksi accepted. Used in Eq. I8-1.`}
+            {...register('studFu_ksi')}
+          />
+          <TextField
+            label="Minimum composite (%)"
+            inputMode="decimal"
+            className="figures font-mono"
+            readOnly={readOnly}
+            error={errors.minPercentComposite?.message}
+            hint={`ΣQn at least this share of full composite; ${MIN_COMPOSITE_PCT_RANGE.min} % is the common-practice minimum.`}
+            {...register('minPercentComposite')}
+          />
+          <TextField
+            label="Steel-equivalent weight of a stud (lb)"
+            inputMode="decimal"
+            className="figures font-mono"
+            readOnly={readOnly}
+            error={errors.studEquivalentWeight_lb?.message}
+            hint={`Selection weighs each stud as this much steel (about ${STUD_EQUIVALENT_WEIGHT_DEFAULT_LB} lb, common practice).`}
+            {...register('studEquivalentWeight_lb')}
+          />
+          <TextField
+            label="Construction live load (psf)"
+            inputMode="decimal"
+            className="figures font-mono"
+            readOnly={readOnly}
+            error={errors.constructionLive_psf?.message}
+            hint="On the bare steel with the wet concrete (about 20 psf, common practice)."
+            {...register('constructionLive_psf')}
+          />
+        </div>
+        <div className="flex flex-wrap gap-6 text-sm">
+          <label className="inline-flex items-center gap-2">
+            <input type="checkbox" className="size-4 accent-[var(--color-accent)]" {...register('shored')} />
+            Shored construction (all loads on the composite section, no camber)
+          </label>
+          <label className="inline-flex items-center gap-2">
+            <input type="checkbox" className="size-4 accent-[var(--color-accent)]" {...register('camber')} />
+            Camber unshored members
+          </label>
+        </div>
+        <p id={`${ids}-composite-note`} className="text-xs text-ink-faint">
+          {compositeOn
+            ? 'Camber about 80 % of the wet-concrete deflection, rounded down to 1/4 in, none below 3/4 in (common practice).'
+            : 'Composite design is off: every member is sized as bare steel unless its Member sheet says composite.'}
+        </p>
       </fieldset>
 
       {readOnly ? (

@@ -12,7 +12,7 @@ import {
 } from './plan-edits';
 import { applyInfill, bayPolygon, findBay, infillBay, infillDirection } from '../../../../shared/engine/index';
 import { fitView, panBy, zoomAt } from '../canvas/view-transform';
-import type { Plan, PlanMember, PlanZone } from '../../../../shared/schemas/plan.schema';
+import type { Plan, PlanMember, PlanSlab, PlanZone } from '../../../../shared/schemas/plan.schema';
 
 /** 'record': one undo step when the plan changes. 'none': never in the undo history. */
 export type UndoMode = 'record' | 'none';
@@ -179,6 +179,20 @@ export const ACTIONS = {
     id: 'deck.set', label: 'Change deck', undo: 'record', edits: true,
     run: (s, a) => ({ plan: setDeck(s.plan, a.id, { ...(a.spanDirection ? { spanDirection: a.spanDirection } : {}), ...(a.zone ? { zone: a.zone } : {}) }) }),
   }),
+  'deck.setSlab': action<{ id: string; slab: PlanSlab | null }>({
+    id: 'deck.setSlab', label: 'Slab build-up', undo: 'record', edits: true,
+    run: (s, a) => ({
+      plan: {
+        ...s.plan,
+        decks: s.plan.decks.map((d) => {
+          if (d.id !== a.id) return d;
+          if (a.slab) return { ...d, slab: a.slab };
+          const { slab: _slab, ...rest } = d;
+          return rest;
+        }),
+      },
+    }),
+  }),
   'zone.add': action<{ zone: Omit<PlanZone, 'id'> }>({
     id: 'zone.add', label: 'Add load zone', undo: 'record', edits: true,
     run: (s, a) => {
@@ -246,6 +260,10 @@ export const ACTIONS = {
         }),
       },
     }),
+  }),
+  'member.setComposite': action<{ id: string; composite: boolean | null }>({
+    id: 'member.setComposite', label: 'Composite or bare steel', undo: 'record', edits: true,
+    run: (s, a) => ({ plan: { ...s.plan, members: s.plan.members.map((m) => (m.id === a.id ? { ...m, composite: a.composite } : m)) } }),
   }),
   'plan.setDesignBasis': action<{ designBasis: Plan['designBasis'] }>({
     id: 'plan.setDesignBasis', label: 'Design basis', undo: 'record', edits: true, run: (s, a) => ({ plan: { ...s.plan, designBasis: a.designBasis } }),

@@ -34,6 +34,8 @@ export interface MemberSheetSlotArgs {
   setMemberSettings: (s: { bracing: PlanMember['bracing'] | null; Lb_override_ft: number | null; deflectionLimits: PlanMember['deflectionLimits'] | null }) => void;
   /** Whether the plan on screen is the saved revision (exports are of the saved one). */
   saved: boolean;
+  /** null follows the design basis; true/false forces composite or bare steel (plan file members[].composite). */
+  setComposite: (composite: boolean | null) => void;
   close: () => void;
 }
 
@@ -354,6 +356,7 @@ export function PlanEditor(props: PlanEditorProps) {
                 setConstraints: (c) => dispatch(store, 'member.setConstraints', { id: selectedMember.id, ...c }),
                 setMemberSettings: (c) => dispatch(store, 'member.setBracing', { id: selectedMember.id, ...c }),
                 saved: saveState.status === 'saved' || saveState.status === 'readonly',
+                setComposite: (composite) => dispatch(store, 'member.setComposite', { id: selectedMember.id, composite }),
                 close: () => dispatch(store, 'selection.set', { ids: [] }),
               })}
             </div>

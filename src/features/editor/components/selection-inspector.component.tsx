@@ -6,6 +6,8 @@ import { unitLabel, type QuantityKind, type UnitSystem } from '../../../lib/unit
 import { useUnits } from '../../../lib/units-context';
 import { fieldText } from './field-text';
 import { readQuantityField, type FieldBound } from './field-input.validator';
+import { DeckSlabEditor } from './deck-slab-editor.component';
+import { useDeckProfiles, useSaveDeckProfile } from '../api/deck-profiles.api';
 
 const INPUT = 'h-8 w-20 rounded-[3px] border border-line bg-paper-raised px-2 text-xs figures font-mono text-ink focus:border-accent focus:outline-none';
 
@@ -38,6 +40,7 @@ export function SelectionInspector({ store, canEdit }: { store: EditorStore; can
             ))}
           </select>
         </label>
+        <DeckSlab store={store} deckId={deck.id} slab={deck.slab ?? null} canEdit={canEdit} />
       </section>
     );
   }
@@ -60,6 +63,23 @@ export function SelectionInspector({ store, canEdit }: { store: EditorStore; can
     );
   }
   return null;
+}
+
+/** The deck's slab build-up with the library from the server. */
+function DeckSlab({ store, deckId, slab, canEdit }: { store: EditorStore; deckId: string; slab: import('../../../../shared/schemas/plan.schema').PlanSlab | null; canEdit: boolean }) {
+  const profiles = useDeckProfiles();
+  const save = useSaveDeckProfile();
+  const { profile: _p, ...rest } = slab ?? ({} as NonNullable<typeof slab>);
+  return (
+    <DeckSlabEditor
+      key={deckId}
+      slab={slab}
+      profiles={profiles.data ?? []}
+      canEdit={canEdit}
+      onChange={(next) => dispatch(store, 'deck.setSlab', { id: deckId, slab: next })}
+      onSaveProfile={canEdit && slab ? (name) => save.mutateAsync({ name, slab: rest as Parameters<typeof save.mutateAsync>[0]['slab'] }) : undefined}
+    />
+  );
 }
 
 /**

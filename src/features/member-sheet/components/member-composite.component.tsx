@@ -70,3 +70,36 @@ export function MemberCompositePanel({ design, note }: { design: MemberDesignRes
     </div>
   );
 }
+
+const CHOICE_TEXT = { basis: 'Follow the design basis', on: 'Composite', off: 'Bare steel (non-composite)' } as const;
+
+/**
+ * Composite on or off for one member (plan file members[].composite): null follows the design
+ * basis, true designs it composite where it sits under a slab, false keeps it bare steel (e.g. at
+ * an opening edge, where the engineer says so). Roles that cannot edit read the choice.
+ */
+export function MemberCompositeChoice({ value, basisComposite, canEdit, onChange }: { value: boolean | null; basisComposite: boolean; canEdit: boolean; onChange: (v: boolean | null) => void }) {
+  const key = value === null ? 'basis' : value ? 'on' : 'off';
+  const basisText = `design basis: ${basisComposite ? 'composite' : 'bare steel'}`;
+  if (!canEdit) {
+    return (
+      <p className="mb-2 text-sm text-ink-soft" data-testid="member-composite-choice">
+        Composite design: {key === 'basis' ? `follows the ${basisText}` : CHOICE_TEXT[key].toLowerCase()}.
+      </p>
+    );
+  }
+  return (
+    <label className="mb-2 flex flex-wrap items-center gap-2 text-sm">
+      <span className="font-medium text-ink">Composite design</span>
+      <select
+        className="h-8 rounded-[3px] border border-line bg-paper-raised px-1 text-sm"
+        value={key}
+        onChange={(e) => onChange(e.target.value === 'basis' ? null : e.target.value === 'on')}
+      >
+        <option value="basis">{`${CHOICE_TEXT.basis} (${basisText})`}</option>
+        <option value="on">{CHOICE_TEXT.on}</option>
+        <option value="off">{CHOICE_TEXT.off}</option>
+      </select>
+    </label>
+  );
+}

@@ -38,7 +38,7 @@ import {
   attempt, bracePoints, sheetAlternatives, sheetDesignInput, sheetDiagrams, type MemberConstraints, type MemberPlanSettings,
 } from '../lib/member-sheet.model';
 import { MemberChecksTable, MemberSegmentsTable } from './member-checks.component';
-import { MemberCompositePanel } from './member-composite.component';
+import { MemberCompositeChoice, MemberCompositePanel } from './member-composite.component';
 import { MemberDiagramsPanel } from './member-diagrams.component';
 import { MemberLoadsTable, MemberReactionsTable } from './member-loads.component';
 import type { PlanNamer } from '../../../../shared/drafting/element-names.drafting';
@@ -60,6 +60,8 @@ export interface MemberSheetProps {
   calcSheetHref?: string;
   /** Whether the plan on screen is saved (the calc sheet is of the saved revision). */
   saved?: boolean;
+  /** Composite on/off for this member (null follows the design basis); absent hides the control. */
+  onComposite?: (composite: boolean | null) => void;
   onClose: () => void;
   problems?: string[];
   /** Names for the sheet's sentences (marks, grid locations, level and zone names), from the plan. */
@@ -112,7 +114,7 @@ function AlternativeRow({ label, alt, units, empty }: { label: string; alt: Alte
 }
 
 export function MemberSheet({
-  member, designBasis, planMember, units, canEdit, onLockShape, onConstraints, onMemberSettings, calcSheetHref, saved = true, onClose, problems = [], names,
+  member, designBasis, planMember, units, canEdit, onLockShape, onConstraints, onMemberSettings, calcSheetHref, saved = true, onComposite, onClose, problems = [], names,
 }: MemberSheetProps) {
   const design = member.design;
   const idBase = `member-sheet-${member.id}`;
@@ -240,6 +242,7 @@ export function MemberSheet({
           </Section>
 
           <Section title="Composite section" id={`${idBase}-composite`}>
+            <MemberCompositeChoice value={planMember?.composite ?? null} basisComposite={designBasis.composite?.enabled ?? false} canEdit={canEdit && !!onComposite} onChange={(v) => onComposite?.(v)} />
             <MemberCompositePanel design={design} note={member?.compositeNote ?? null} />
           </Section>
 

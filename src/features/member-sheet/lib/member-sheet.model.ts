@@ -23,6 +23,8 @@ export interface MemberPlanSettings extends MemberConstraints {
   bracing?: PlanBracing | null;
   /** Deflection limits set on the member (null: the design basis). */
   deflectionLimits?: PlanMemberDeflectionLimits | null;
+  /** null follows the design basis; true/false forces composite or bare steel. */
+  composite?: boolean | null;
 }
 
 export const SELF_WEIGHT_PREFIX = 'self weight';

@@ -18,6 +18,8 @@ const figures = z.object({
   cost_usd: z.number().nullable(),
   steel_usd: z.number().nullable(),
   connections_usd: z.number().nullable(),
+  studs_usd: z.number().nullable().default(null),
+  camber_usd: z.number().nullable().default(null),
 });
 export type TonnageFigures = z.infer<typeof figures>;
 
@@ -45,6 +47,8 @@ export const comparisonSchema = z.object({
       .object({
         steel_usd_per_ton: z.number(),
         connection_usd_each: z.number(),
+        stud_usd_each: z.number().nullable().default(null),
+        camber_usd_each: z.number().nullable().default(null),
         example: z.boolean(),
         setAt: z.string(),
         setBy: z.object({ id: z.string(), name: z.string() }).nullable(),

@@ -12,6 +12,7 @@ export const MAX_COMPARED = 4;
 
 const int = new Intl.NumberFormat('en-US', { maximumFractionDigits: 0 });
 const one = new Intl.NumberFormat('en-US', { minimumFractionDigits: 1, maximumFractionDigits: 1 });
+const two = new Intl.NumberFormat('en-US', { minimumFractionDigits: 2, maximumFractionDigits: 2 });
 const signed = (n: number, fmt: Intl.NumberFormat) => `${n > 0 ? '+' : n < 0 ? '−' : '±'}${fmt.format(Math.abs(n))}`;
 const signedUsd = (n: number) => `${n > 0 ? '+' : n < 0 ? '−' : '±'}${formatEstimateUsd(Math.abs(n))}`;
 
@@ -96,6 +97,14 @@ function SchemeCard({
           <Figure label="Connections">{int.format(t.connections)}</Figure>
           <Figure label="Shear studs">{int.format(t.studs)}</Figure>
           <Figure label="Cambered pieces">{int.format(t.camberedPieces)}</Figure>
+          {t.cost_usd !== null ? (
+            <>
+              <Figure label="Steel cost">{t.steel_usd === null ? '—' : formatEstimateUsd(t.steel_usd)}</Figure>
+              <Figure label="Connections cost">{t.connections_usd === null ? '—' : formatEstimateUsd(t.connections_usd)}</Figure>
+              <Figure label="Shear studs cost">{t.studs_usd === null ? 'not priced' : formatEstimateUsd(t.studs_usd)}</Figure>
+              <Figure label="Camber cost">{t.camber_usd === null ? 'not priced' : formatEstimateUsd(t.camber_usd)}</Figure>
+            </>
+          ) : null}
           <Figure label="Estimated cost" strong>
             {t.cost_usd === null ? 'not priced' : formatEstimateUsd(t.cost_usd)}
           </Figure>
@@ -249,10 +258,12 @@ export function ComparisonView({
         {prices ? (
           <>
             Costs at ${int.format(prices.steel_usd_per_ton)} per ton{system === 'SI' ? ` (short ton, ${one.format(KG_PER_SHORT_TON)} kg)` : ''} fabricated and erected and ${int.format(prices.connection_usd_each)} per connection
+            {prices.stud_usd_each != null ? `, $${two.format(prices.stud_usd_each)} per shear stud` : ''}
+            {prices.camber_usd_each != null ? `, $${int.format(prices.camber_usd_each)} per cambered piece` : ''}
             {prices.example ? (
               <strong className="font-semibold text-notice"> (invented example prices, not market prices)</strong>
             ) : null}
-            . Not yet priced: {comparison.prices.notYetPriced.join(', ').toLowerCase()}.{' '}
+            .{comparison.prices.notYetPriced.length ? ` Not yet priced: ${comparison.prices.notYetPriced.join(', ').toLowerCase()}.` : ''}{' '}
           </>
         ) : (
           <>No unit prices are set, so costs are not estimated. </>

@@ -8,6 +8,8 @@ export const pricesSchema = z.object({
   id: z.string(),
   steel_usd_per_ton: z.number(),
   connection_usd_each: z.number(),
+  stud_usd_each: z.number().nullable().default(null),
+  camber_usd_each: z.number().nullable().default(null),
   example: z.boolean(),
   note: z.string().nullable(),
   setBy: z.object({ id: z.string(), name: z.string() }).nullable(),
@@ -38,6 +40,9 @@ export function useUnitPriceHistory() {
 export interface UnitPricesInput {
   steel_usd_per_ton: number;
   connection_usd_each: number;
+  /** null = not priced. */
+  stud_usd_each: number | null;
+  camber_usd_each: number | null;
   note?: string;
 }
 

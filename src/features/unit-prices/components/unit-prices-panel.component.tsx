@@ -12,6 +12,8 @@ const when = new Intl.DateTimeFormat('en-US', { dateStyle: 'medium', timeStyle: 
 function PricesForm({ current, notYetPriced }: { current: UnitPrices | null; notYetPriced: string[] }) {
   const [steel, setSteel] = useState(current ? String(current.steel_usd_per_ton) : '');
   const [connection, setConnection] = useState(current ? String(current.connection_usd_each) : '');
+  const [stud, setStud] = useState(current?.stud_usd_each != null ? String(current.stud_usd_each) : '');
+  const [camber, setCamber] = useState(current?.camber_usd_each != null ? String(current.camber_usd_each) : '');
   const [note, setNote] = useState('');
   const [local, setLocal] = useState<Record<string, string>>({});
   const save = useSetUnitPrices();
@@ -24,9 +26,21 @@ function PricesForm({ current, notYetPriced }: { current: UnitPrices | null; not
     const c = Number(connection);
     if (steel.trim() === '' || !Number.isFinite(s) || s <= 0) errors.steel_usd_per_ton = 'Enter a price per ton in US dollars, more than zero';
     if (connection.trim() === '' || !Number.isFinite(c) || c < 0) errors.connection_usd_each = 'Enter a price per connection in US dollars, zero or more';
+    // Blank = not priced (estimates leave the item out); a number must be zero or more.
+    const optional = (text: string, field: string, message: string): number | null => {
+      if (text.trim() === '') return null;
+      const v = Number(text);
+      if (!Number.isFinite(v) || v < 0) errors[field] = message;
+      return v;
+    };
+    const st = optional(stud, 'stud_usd_each', 'Enter a price per shear stud in US dollars, zero or more, or leave it blank');
+    const cb = optional(camber, 'camber_usd_each', 'Enter a price per cambered piece in US dollars, zero or more, or leave it blank');
     setLocal(errors);
     if (Object.keys(errors).length > 0) return;
-    save.mutate({ steel_usd_per_ton: s, connection_usd_each: c, ...(note.trim() ? { note: note.trim() } : {}) }, { onSuccess: () => setNote('') });
+    save.mutate(
+      { steel_usd_per_ton: s, connection_usd_each: c, stud_usd_each: st, camber_usd_each: cb, ...(note.trim() ? { note: note.trim() } : {}) },
+      { onSuccess: () => setNote('') },
+    );
   };
 
   return (
@@ -47,10 +61,28 @@ function PricesForm({ current, notYetPriced }: { current: UnitPrices | null; not
         error={local.connection_usd_each ?? serverFields.connection_usd_each}
         hint="Per end connection, fabricated and erected."
       />
+      <TextField
+        label="Shear stud (US$ each)"
+        inputMode="decimal"
+        optional
+        value={stud}
+        onChange={(e) => setStud(e.target.value)}
+        error={local.stud_usd_each ?? serverFields.stud_usd_each}
+        hint="Per headed stud, welded through the deck. Blank leaves studs out of estimates."
+      />
+      <TextField
+        label="Camber (US$ per cambered piece)"
+        inputMode="decimal"
+        optional
+        value={camber}
+        onChange={(e) => setCamber(e.target.value)}
+        error={local.camber_usd_each ?? serverFields.camber_usd_each}
+        hint="Per beam or girder cambered in the shop. Blank leaves camber out of estimates."
+      />
       <div className="sm:col-span-2">
         <TextField label="Note" optional value={note} maxLength={500} onChange={(e) => setNote(e.target.value)} hint="Where the prices come from, e.g. a fabricator's budget figure." />
       </div>
-      <p className="text-xs text-ink-soft sm:col-span-2">Not yet priced: {notYetPriced.join(', ').toLowerCase()}. Estimates leave them out.</p>
+      {notYetPriced.length ? <p className="text-xs text-ink-soft sm:col-span-2">Not yet priced: {notYetPriced.join(', ').toLowerCase()}. Estimates leave them out.</p> : null}
       {save.isError && Object.keys(serverFields).length === 0 ? <FormAlert>{save.error.message}</FormAlert> : null}
       {save.isSuccess ? (
         <p role="status" className="text-sm text-ink sm:col-span-2">
@@ -92,6 +124,10 @@ export function UnitPricesPanel({ canEdit }: { canEdit: boolean }) {
               <dd className="figures font-mono">{usd.format(current.steel_usd_per_ton)} per ton</dd>
               <dt className="text-ink-soft">Connection</dt>
               <dd className="figures font-mono">{usd.format(current.connection_usd_each)} each</dd>
+              <dt className="text-ink-soft">Shear stud</dt>
+              <dd className="figures font-mono">{current.stud_usd_each == null ? 'not priced' : `${usd.format(current.stud_usd_each)} each`}</dd>
+              <dt className="text-ink-soft">Camber</dt>
+              <dd className="figures font-mono">{current.camber_usd_each == null ? 'not priced' : `${usd.format(current.camber_usd_each)} per cambered piece`}</dd>
               <dt className="text-ink-soft">Set</dt>
               <dd>
                 {when.format(new Date(current.setAt))}
@@ -104,7 +140,7 @@ export function UnitPricesPanel({ canEdit }: { canEdit: boolean }) {
           {canEdit ? (
             <PricesForm key={current?.id ?? 'none'} current={current} notYetPriced={prices.data.notYetPriced} />
           ) : (
-            <p className="text-xs text-ink-faint">Owners and managers set unit prices. Not yet priced: {prices.data.notYetPriced.join(', ').toLowerCase()}.</p>
+            <p className="text-xs text-ink-faint">Owners and managers set unit prices.{prices.data.notYetPriced.length ? ` Not yet priced: ${prices.data.notYetPriced.join(', ').toLowerCase()}.` : ''}</p>
           )}
         </div>
       </section>
@@ -124,6 +160,8 @@ export function UnitPricesPanel({ canEdit }: { canEdit: boolean }) {
                   <th className="label-caps px-4 py-2">By</th>
                   <th className="label-caps px-4 py-2 text-right">Steel per ton</th>
                   <th className="label-caps px-4 py-2 text-right">Per connection</th>
+                  <th className="label-caps px-4 py-2 text-right">Per stud</th>
+                  <th className="label-caps px-4 py-2 text-right">Per camber</th>
                   <th className="label-caps px-4 py-2">Note</th>
                 </tr>
               </thead>
@@ -137,6 +175,8 @@ export function UnitPricesPanel({ canEdit }: { canEdit: boolean }) {
                     <td className="px-4 py-2">{h.setBy?.name ?? '—'}</td>
                     <td className="px-4 py-2 text-right font-mono">{usd.format(h.steel_usd_per_ton)}</td>
                     <td className="px-4 py-2 text-right font-mono">{usd.format(h.connection_usd_each)}</td>
+                    <td className="px-4 py-2 text-right font-mono">{h.stud_usd_each == null ? '—' : usd.format(h.stud_usd_each)}</td>
+                    <td className="px-4 py-2 text-right font-mono">{h.camber_usd_each == null ? '—' : usd.format(h.camber_usd_each)}</td>
                     <td className="px-4 py-2 text-ink-soft">
                       {h.example ? 'Example. ' : ''}
                       {h.note ?? ''}

@@ -1,0 +1,80 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { BUILT_IN_DECK_PROFILES } from '../../shared/schemas/deck-profile.schema';
+import { createTestApp, type TestApp } from './helpers/test-app';
+
+// The deck profile library (issue 11): built-ins of Baywright's own naming plus the firm's own,
+// stored server-side, role rules on the server, zod messages naming the field.
+let t: TestApp;
+beforeAll(async () => {
+  t = await createTestApp();
+}, 120_000);
+afterAll(async () => {
+  expect(t.serverErrors).toEqual([]);
+  await t.close();
+});
+
+// Invented profile: normal-weight concrete (145 pcf, common practice) 4 in over a 2 in deck.
+const SLAB = { ribHeight_in: 2, toppingThickness_in: 4, ribAvgWidth_in: 6, ribSpacing_in: 12, concreteWeight_pcf: 145, fc_ksi: 4, deckWeight_psf: 2 };
+
+describe('deck profile library', () => {
+  it('when anyone of the firm reads the library, then the built-in profiles come first, read-only', async () => {
+    const res = await t.agents.drafter.get('/api/deck-profiles');
+    expect(res.status).toBe(200);
+    expect(res.body.profiles.slice(0, BUILT_IN_DECK_PROFILES.length).map((p: { name: string; builtIn: boolean }) => [p.name, p.builtIn])).toEqual(
+      BUILT_IN_DECK_PROFILES.map((p) => [p.name, true]),
+    );
+    expect(res.body.profiles[0].slab).toEqual({ ribHeight_in: 3, toppingThickness_in: 3.25, ribAvgWidth_in: 6, ribSpacing_in: 12, concreteWeight_pcf: 114, fc_ksi: 3.5, deckWeight_psf: 2.5 });
+  });
+
+  it('when an engineer adds and then changes a profile, then it is stored for the firm and listed; another firm does not see it', async () => {
+    const made = await t.agents.engineer.post('/api/deck-profiles').send({ name: '  2 in deck, 4 in normal-weight topping ', slab: SLAB });
+    expect(made.status).toBe(201);
+    expect(made.body.profile).toMatchObject({ name: '2 in deck, 4 in normal-weight topping', slab: SLAB, builtIn: false });
+    const id = made.body.profile.id as string;
+    const row = await t.ctx.db.models.DeckProfile.findByPk(id);
+    expect(row!.getDataValue('firmId')).toBe(t.seed.firmId);
+
+    const changed = await t.agents.owner.put(`/api/deck-profiles/${id}`).send({ name: '2 in deck, 4 in topping, f\'c 5', slab: { ...SLAB, fc_ksi: 5 } });
+    expect(changed.status).toBe(200);
+    expect(changed.body.profile.slab.fc_ksi).toBe(5);
+    const list = await t.agents.manager.get('/api/deck-profiles');
+    expect(list.body.profiles.filter((p: { builtIn: boolean }) => !p.builtIn).map((p: { name: string }) => p.name)).toEqual(["2 in deck, 4 in topping, f'c 5"]);
+    const other = await t.otherOwner.get('/api/deck-profiles');
+    expect(other.body.profiles.filter((p: { builtIn: boolean }) => !p.builtIn)).toEqual([]);
+    expect((await t.otherOwner.put(`/api/deck-profiles/${id}`).send({ name: 'Taken over', slab: SLAB })).status).toBe(404);
+  });
+
+  it('when a drafter or manager writes the library, then 403 and nothing is stored', async () => {
+    const before = await t.ctx.db.models.DeckProfile.count();
+    for (const role of ['drafter', 'manager'] as const) {
+      expect((await t.agents[role].post('/api/deck-profiles').send({ name: `By ${role}`, slab: SLAB })).status).toBe(403);
+    }
+    expect(await t.ctx.db.models.DeckProfile.count()).toBe(before);
+  });
+
+  it('when a value is out of range, not a number, or the ribs are wider than their spacing, then 400 naming each field', async () => {
+    const res = await t.agents.engineer.post('/api/deck-profiles').send({ name: '', slab: { ...SLAB, ribHeight_in: 30, fc_ksi: 'four', concreteWeight_pcf: 40 } });
+    expect(res.status).toBe(400);
+    expect(res.body.error.fields).toMatchObject({
+      name: 'Name is required',
+      'slab.ribHeight_in': 'Rib height must be between 0.5 and 8 in',
+      'slab.fc_ksi': "f'c must be a number in ksi",
+      'slab.concreteWeight_pcf': 'Concrete unit weight must be between 90 and 160 pcf',
+    });
+    const wide = await t.agents.engineer.post('/api/deck-profiles').send({ name: 'Wide ribs', slab: { ...SLAB, ribAvgWidth_in: 14 } });
+    expect(wide.status).toBe(400);
+    expect(wide.body.error.fields).toEqual({ 'slab.ribAvgWidth_in': 'Average rib width must not exceed the rib spacing' });
+  });
+
+  it('when a name is taken (by a built-in or the firm) or a built-in is changed, then it is refused naming the field, never a 500', async () => {
+    const dup = await t.agents.engineer.post('/api/deck-profiles').send({ name: BUILT_IN_DECK_PROFILES[0].name, slab: SLAB });
+    expect(dup.status).toBe(409);
+    expect(dup.body.error.fields).toEqual({ name: 'A deck profile with this name already exists' });
+    const builtIn = await t.agents.engineer.put(`/api/deck-profiles/${BUILT_IN_DECK_PROFILES[0].id}`).send({ name: 'Mine now', slab: SLAB });
+    expect(builtIn.status).toBe(400);
+    expect(builtIn.body.error.fields).toEqual({ id: 'Built-in deck profiles cannot be changed' });
+    const made = await t.agents.engineer.post('/api/deck-profiles').send({ name: 'To remove', slab: SLAB });
+    expect((await t.agents.engineer.delete(`/api/deck-profiles/${made.body.profile.id}`)).status).toBe(204);
+    expect(await t.ctx.db.models.DeckProfile.findByPk(made.body.profile.id)).toBeNull();
+  });
+});
