@@ -24,6 +24,8 @@ export default defineConfig({
           include: ['tests/unit/**/*.test.ts'],
           // PDF and whole-building tests take a few seconds alone, more beside a second worker.
           testTimeout: 15000,
+          // Pure modules: one import per worker instead of one per file (81 s → 26 s here).
+          isolate: false,
         },
       },
       {
@@ -44,6 +46,8 @@ export default defineConfig({
           include: ['tests/ui/**/*.test.tsx'],
           setupFiles: ['tests/ui/setup.ts'],
           testTimeout: 15000,
+          // One jsdom per worker, emptied by the setup file after each test (65 s → 21 s here).
+          isolate: false,
         },
       },
     ],
