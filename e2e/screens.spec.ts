@@ -39,7 +39,8 @@ test('when an owner walks through every screen, then each carries the caution', 
   await page.screenshot({ path: `${SCREENSHOT_DIR}/project-details.png`, fullPage: true });
 
   await page.getByRole('link', { name: 'Plan' }).click();
-  await expect(page.getByRole('heading', { name: 'No plan to show' })).toBeVisible();
+  await expect(page.getByRole('heading', { name: 'Open a scheme on the Plan' })).toBeVisible();
+  await expectCaution(page);
   await page.screenshot({ path: `${SCREENSHOT_DIR}/project-plan.png`, fullPage: true });
 
   await page.getByRole('link', { name: 'Settings' }).click();

@@ -15,7 +15,8 @@ test('when the manager compares the demo schemes and chooses one, then it stays 
   await expect(cardB).toBeVisible();
   await expect(cardA.getByText(/\d+\.\d tons/).first()).toBeVisible();
   await expect(cardB.getByText('Estimated cost')).toBeVisible();
-  await expect(page.getByTestId('price-basis')).toContainText('invented example prices');
+  // The firm's unit prices (the demo's, or those another spec saved) are named beside the costs.
+  await expect(page.getByTestId('price-basis')).toContainText(/Costs at \$[\d,]+ per ton fabricated and erected and \$[\d,]+ per connection/);
 
   // One sentence says which is lighter or heavier and cheaper or more expensive.
   const sentence = page.getByTestId('difference-sentences').getByRole('listitem').first();
