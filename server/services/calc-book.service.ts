@@ -32,6 +32,28 @@ async function schemeEngineer(ctx: SchemeServiceContext, schemeId: string): Prom
   return 'not recorded (the scheme has no engineer on record)';
 }
 
+/** The title block of the Calc book and of a one-member calc sheet: project, scheme, dates, people. */
+async function titleBlock(
+  ctx: SchemeServiceContext,
+  schemeId: string,
+  scheme: { projectId: string; name: string; revision: number },
+  design: { revision: number; designedAt: string },
+  options: { downloadedBy: string; date?: Date },
+) {
+  const project = await ctx.db.models.Project.findByPk(scheme.projectId);
+  const p = project?.get({ plain: true });
+  const date = options.date ?? new Date();
+  return {
+    project: { name: p?.name ?? '', number: p?.number ?? null, client: p?.client ?? null, address: p?.address ?? null },
+    scheme: { name: scheme.name, revision: scheme.revision },
+    designedRevision: design.revision,
+    designedAt: design.designedAt,
+    date: date.toISOString().slice(0, 10),
+    preparedBy: await schemeEngineer(ctx, schemeId),
+    downloadedBy: { name: options.downloadedBy, at: date.toISOString() },
+  };
+}
+
 export async function getCalcBook(
   ctx: SchemeServiceContext,
   schemeId: string,
@@ -41,22 +63,9 @@ export async function getCalcBook(
   if (options.levelId !== undefined && !plan.levels.some((l) => l.id === options.levelId)) {
     throw new AppError(404, 'not_found', `Level "${options.levelId}" is not a level of this scheme.`);
   }
-  const project = await ctx.db.models.Project.findByPk(scheme.projectId);
-  const p = project?.get({ plain: true });
-  const date = options.date ?? new Date();
-  const preparedBy = await schemeEngineer(ctx, schemeId);
-  const book = buildCalcBook({
-    plan,
-    design,
-    project: { name: p?.name ?? '', number: p?.number ?? null, client: p?.client ?? null, address: p?.address ?? null },
-    scheme: { name: scheme.name, revision: scheme.revision },
-    designedRevision: design.revision,
-    designedAt: design.designedAt,
-    date: date.toISOString().slice(0, 10),
-    preparedBy,
-    downloadedBy: { name: options.downloadedBy, at: date.toISOString() },
-    options: { members: options.members, levelId: options.levelId },
-  });
+  const head = await titleBlock(ctx, schemeId, scheme, design, options);
+  const preparedBy = head.preparedBy;
+  const book = buildCalcBook({ plan, design, ...head, options: { members: options.members, levelId: options.levelId } });
   return { scheme: { id: scheme.id, name: scheme.name, revision: scheme.revision }, book, preparedBy };
 }
 
@@ -83,23 +92,10 @@ export async function getMemberCalcSheetPdf(
   options: { downloadedBy: string; date?: Date },
 ): Promise<{ filename: string; pdf: Buffer; caution: string }> {
   const { scheme, plan, design } = await loadSchemeDrafting(ctx, schemeId);
-  const date = options.date ?? new Date();
   // As the Calc book: prepared by the scheme's engineer; who downloaded it is printed apart.
-  const preparedBy = await schemeEngineer(ctx, schemeId);
-  const project = await ctx.db.models.Project.findByPk(scheme.projectId);
-  const p = project?.get({ plain: true });
-  const sheet = buildMemberCalcSheet({
-    plan,
-    design,
-    project: { name: p?.name ?? '', number: p?.number ?? null, client: p?.client ?? null, address: p?.address ?? null },
-    scheme: { name: scheme.name, revision: scheme.revision },
-    designedRevision: design.revision,
-    designedAt: design.designedAt,
-    date: date.toISOString().slice(0, 10),
-    preparedBy,
-    downloadedBy: { name: options.downloadedBy, at: date.toISOString() },
-    memberId,
-  });
+  const head = await titleBlock(ctx, schemeId, scheme, design, options);
+  const preparedBy = head.preparedBy;
+  const sheet = buildMemberCalcSheet({ plan, design, ...head, memberId });
   if (!sheet) throw new AppError(404, 'not_found', `Member "${memberId.slice(0, 60)}" is not a designed member of this scheme.`);
   const mark = sheet.marks[0] || memberId;
   const pdf = await renderCalcBookPdf(sheet, { author: preparedBy });
