@@ -266,7 +266,7 @@ export function buildFramingTopology(plan: Plan): FramingTopology {
 }
 
 /** Kahn's algorithm on "carries": a member comes after every member that bears on it. Ties by id. */
-export function orderBySupport(members: Map<string, FramingMember>): { order: string[]; cyclic: Set<string> } {
+export function orderBySupport(members: Map<string, Pick<FramingMember, 'id' | 'carries' | 'supports'>>): { order: string[]; cyclic: Set<string> } {
   const pending = new Map<string, number>();
   const ready: string[] = [];
   for (const fm of members.values()) {

@@ -20,7 +20,13 @@ import type { LoadCase, TakedownLoad } from '../takedown/member-load.takedown';
 
 export interface PlacedLoadSinks {
   member(memberId: string, load: TakedownLoad): void;
-  column(columnId: string, level: string, loadCase: LoadCase, kip: number, source: string): void;
+  /** `loadIndex`: the point load's index in plan.pointLoads. */
+  column(columnId: string, level: string, loadCase: LoadCase, kip: number, source: string, loadIndex: number): void;
+  /**
+   * Optional: told of every addition to the applied totals, in order, with the load's index in
+   * plan.pointLoads / plan.lineLoads (the typical-level reuse replays them in file order).
+   */
+  applied?(loadIndex: number, loadCase: LoadCase, kip: number): void;
 }
 
 export type CaseTotals = Record<LoadCase, number>;
@@ -99,6 +105,11 @@ function decksByLevel(decks: readonly DeckContext[]): Map<string, DeckContext[]>
 /** Place every point load; returns the applied totals (loads off the floor included, see above). */
 export function placePointLoads(plan: Plan, topology: FramingTopology, decks: readonly DeckContext[], sinks: PlacedLoadSinks): { applied: CaseTotals; problems: PlanProblem[] } {
   const applied = zeroCaseTotals();
+  const log = sinks.applied;
+  const add = (i: number, c: LoadCase, kip: number) => {
+    applied[c] += kip;
+    if (log) log(i, c, kip);
+  };
   const problems: PlanProblem[] = [];
   const openings = openingsByLevel(plan);
   const levelDecks = decksByLevel(decks);
@@ -108,8 +119,8 @@ export function placePointLoads(plan: Plan, topology: FramingTopology, decks: re
     const column = (topology.columnIndex.get(pl.level)?.near(p) ?? []).find((c) => distanceFt(c.at, p) <= SUPPORT_TOLERANCE_FT);
     if (column) {
       for (const [c, kip] of cases) {
-        sinks.column(column.id, pl.level, c, kip, `point load ${pl.id}`);
-        applied[c] += kip;
+        sinks.column(column.id, pl.level, c, kip, `point load ${pl.id}`, i);
+        add(i, c, kip);
       }
       return;
     }
@@ -117,7 +128,7 @@ export function placePointLoads(plan: Plan, topology: FramingTopology, decks: re
     if (onMember) {
       for (const [c, kip] of cases) {
         sinks.member(onMember.member.id, { case: c, kind: 'point', P_kip: kip, x_ft: onMember.position_ft, source: `point load ${pl.id}` });
-        applied[c] += kip;
+        add(i, c, kip);
       }
       return;
     }
@@ -131,7 +142,7 @@ export function placePointLoads(plan: Plan, topology: FramingTopology, decks: re
           path: `pointLoads[${i}]`,
         }),
       );
-      for (const [c, kip] of cases) applied[c] += kip;
+      for (const [c, kip] of cases) add(i, c, kip);
       return;
     }
     for (const share of shares) {
@@ -141,7 +152,7 @@ export function placePointLoads(plan: Plan, topology: FramingTopology, decks: re
         sinks.member(share.id, { case: c, kind: 'point', P_kip: kip * share.fraction, x_ft, source: `point load ${pl.id} (deck ${ctx.deck.id}, lever rule ${(share.fraction * 100).toFixed(0)} %)` });
       }
     }
-    for (const [c, kip] of cases) applied[c] += kip;
+    for (const [c, kip] of cases) add(i, c, kip);
   });
   return { applied, problems };
 }
@@ -168,6 +179,12 @@ function crossingsWithPolygon(p0: Point, p1: Point, polygon: readonly Point[]): 
 /** Place every line load; returns the applied totals (parts off the floor included, see above). */
 export function placeLineLoads(plan: Plan, topology: FramingTopology, decks: readonly DeckContext[], sinks: PlacedLoadSinks): { applied: CaseTotals; problems: PlanProblem[] } {
   const applied = zeroCaseTotals();
+  const log = sinks.applied;
+  const add = (i: number, c: LoadCase, klf: number, ft: number) => {
+    const kip = klf * ft;
+    applied[c] += kip;
+    if (log) log(i, c, kip);
+  };
   const problems: PlanProblem[] = [];
   const openings = openingsByLevel(plan);
   const levelDecks = decksByLevel(decks);
@@ -191,7 +208,7 @@ export function placeLineLoads(plan: Plan, topology: FramingTopology, decks: rea
       const s1 = projectPointOnSegment(p1, host.start, host.end).t * host.span_ft;
       for (const [c, w] of cases) {
         sinks.member(host.id, { case: c, kind: 'partial', w_klf: w, from_ft: Math.min(s0, s1), to_ft: Math.max(s0, s1), source: `line load ${ll.id}` });
-        applied[c] += w * Math.abs(s1 - s0);
+        add(i, c, w, Math.abs(s1 - s0));
       }
       return;
     }
@@ -228,7 +245,7 @@ export function placeLineLoads(plan: Plan, topology: FramingTopology, decks: rea
       const sharesMid = leverFractions(sides.left, sides.right, um);
       if (!ctx || sharesMid.length === 0) {
         offFloor_ft += pieceLength;
-        for (const [c, w] of cases) applied[c] += w * pieceLength;
+        for (const [c, w] of cases) add(i, c, w, pieceLength);
         continue;
       }
       const f0 = leverFractions(sides.left, sides.right, u0);
@@ -257,7 +274,7 @@ export function placeLineLoads(plan: Plan, topology: FramingTopology, decks: rea
           }
         }
       });
-      for (const [c, w] of cases) applied[c] += w * pieceLength;
+      for (const [c, w] of cases) add(i, c, w, pieceLength);
     }
     if (offFloor_ft > 1e-6) {
       problems.push(

@@ -24,6 +24,13 @@ import { compositeMemberInput, compositeSites, planNeedsWetStage, wetStagePlan, 
 import type { CompositeMemberInput } from '../sizing/member-design.types';
 import { schemeColumns, type SchemeColumn } from './column-design.scheme';
 import { memberDeflectionLimits } from './member-settings.scheme';
+import { LevelRenamer, typicalLevelTemplates, type LevelTemplate } from './typical-levels.scheme';
+import { deckAppliedLoads, emptyTakedownTrace, type TakedownTrace } from '../takedown/gravity-takedown.takedown';
+import { orderBySupport, type EndSupport, type FramingMember } from '../geometry/framing-topology.geometry';
+import { stackColumns, type ColumnReceipt } from '../takedown/column-stack.takedown';
+import { LOAD_CASES, type LoadCase } from '../takedown/member-load.takedown';
+import { zeroCaseTotals } from '../loads/placed-loads.loads';
+import type { DeckContext } from '../loads/deck-loads.loads';
 
 export interface SchemeOptions {
   /** Members of the same level, kind, span, load layout and bracing get one size: the heaviest demand governs. */
@@ -32,6 +39,8 @@ export interface SchemeOptions {
   previous?: SchemeResult;
   /** Ids of the elements the caller changed (a hint; see the file comment). */
   changedIds?: string[];
+  /** Design levels alike once and place the result on each (typical-levels.scheme; same figures). Default true. */
+  typicalLevels?: boolean;
 }
 
 export interface SchemeReactionEnd {
@@ -367,10 +376,19 @@ class DesignTable {
 const CACHE = Symbol('baywright.designCache');
 interface SchemeMemo {
   designs: DesignTable;
-  geometry: PlanGeometryMemo;
+  /** The whole plan's geometry, or null when the run was made from level templates. */
+  geometry: PlanGeometryMemo | null;
+  /** Each level template's geometry, by template signature. */
+  templates: Map<string, PlanGeometryMemo> | null;
 }
 function cacheOf(result: SchemeResult | undefined): SchemeMemo | null {
   return (result as unknown as { [CACHE]?: SchemeMemo } | undefined)?.[CACHE] ?? null;
+}
+
+/** Whether a result was made from level templates (typical-levels.scheme), for tests and benchmarks. */
+export function designedFromLevelTemplates(result: SchemeResult): boolean {
+  const memo = cacheOf(result);
+  return memo !== null && memo.templates !== null;
 }
 
 /** Group key: level, kind, span, bracing and the layout (case, kind, position) of the loads. */
@@ -442,18 +460,53 @@ class DesignPass {
     return 'error' in result ? lockedShapeWeightPlf(mt.member) : result.weight_plf;
   };
 
-  run(geometry: PlanGeometry): TakedownResult {
-    return runTakedown(this.plan, { topology: geometry.topology, deckLoads: geometry.deckLoads, selfWeight: this.selfWeight });
+  /** The trace of the last run (when traced). */
+  trace: TakedownTrace | null = null;
+
+  run(geometry: PlanGeometry, traced = false): TakedownResult {
+    this.trace = traced ? emptyTakedownTrace() : null;
+    return runTakedown(this.plan, { topology: geometry.topology, deckLoads: geometry.deckLoads, selfWeight: this.selfWeight, ...(this.trace ? { trace: this.trace } : {}) });
   }
+}
+
+/**
+ * What buildSchemeResult reads of a takedown. From level templates, `members` holds each
+ * member's template takedown (placeholder ids) and `renamers` the member's level, by which
+ * the ids it reports are made real.
+ */
+type SchemeTakedown = Pick<TakedownResult, 'members' | 'columns' | 'equilibrium' | 'floorArea_ft2' | 'byLevelFloorArea_ft2' | 'problems'> & { renamers?: Map<string, LevelRenamer> };
+
+/** A plan's takedown with every member designed: what the scheme result is built from. */
+interface DesignCore {
+  takedown: TakedownResult;
+  designs: Map<string, DesignEntry>;
+  loadsOf: Map<string, MemberLoad[]>;
+  extrasOf: Map<string, MemberDesignExtras>;
+  sites: Map<string, MemberCompositeStatus> | null;
+  /** The final takedown's trace (when traced). */
+  trace: TakedownTrace | null;
 }
 
 export function designScheme(plan: Plan, options: SchemeOptions = {}): SchemeResult {
   const memo = cacheOf(options.previous);
-  const geometry = planGeometry(plan, memo?.geometry ?? null);
   // Read from this run's memo, then the previous one; keep only designs this run used.
   const table = new DesignTable();
   const previous = memo?.designs ?? null;
+  const templates = options.typicalLevels === false ? null : typicalLevelTemplates(plan);
+  if (templates) {
+    const fromTemplates = designFromTemplates(plan, templates, options, table, previous, memo?.templates ?? null);
+    if (fromTemplates) return fromTemplates;
+  }
+  const geometry = planGeometry(plan, memo?.geometry ?? null);
+  const core = designCore(plan, geometry, options, table, previous, false);
+  const result = buildSchemeResult(plan, core.takedown, core.designs, core.loadsOf, core.extrasOf, core.sites);
+  const next: SchemeMemo = { designs: table, geometry, templates: null };
+  Object.defineProperty(result, CACHE, { value: next, enumerable: false });
+  return result;
+}
 
+/** The takedown of a plan with each member sized as it is reached (wet stage and grouping included). */
+function designCore(plan: Plan, geometry: PlanGeometry, options: SchemeOptions, table: DesignTable, previous: DesignTable | null, traced: boolean): DesignCore {
   const forced = new Map<string, string>();
   // Composite plans (and the superimposed-dead total deflection setting) need the wet-concrete
   // stage: a takedown of the wet slab and construction live on the same framing. Its girders
@@ -465,12 +518,12 @@ export function designScheme(plan: Plan, options: SchemeOptions = {}): SchemeRes
   const wetTakedown = (weight: (mt: MemberTakedown) => number) => runTakedown(wetPlan!, { topology: geometry.topology, selfWeight: weight });
   if (wetPlan) wet = { sites: sites!, takedown: wetTakedown((mt) => lockedShapeWeightPlf(mt.member)) };
   let pass = new DesignPass(plan, table, previous, forced, wet);
-  let takedown = pass.run(geometry);
+  let takedown = pass.run(geometry, traced);
   if (wetPlan) {
     const first = pass.designs;
     wet = { sites: sites!, takedown: wetTakedown((mt) => { const d = first.get(mt.id); return d && !('error' in d) ? d.weight_plf : lockedShapeWeightPlf(mt.member); }) };
     pass = new DesignPass(plan, table, previous, forced, wet);
-    takedown = pass.run(geometry);
+    takedown = pass.run(geometry, traced);
   }
 
   if (options.groupIdentical) {
@@ -507,31 +560,168 @@ export function designScheme(plan: Plan, options: SchemeOptions = {}): SchemeRes
       forced.clear();
       nextForced.forEach((v, k) => forced.set(k, v));
       pass = new DesignPass(plan, table, previous, forced, wet);
-      takedown = pass.run(geometry);
+      takedown = pass.run(geometry, traced);
     }
   }
+  return { takedown, designs: pass.designs, loadsOf: pass.loadsOf, extrasOf: pass.extrasOf, sites, trace: pass.trace };
+}
 
-  const result = buildSchemeResult(plan, takedown, pass.designs, pass.loadsOf, pass.extrasOf, sites);
-  const next: SchemeMemo = { designs: table, geometry };
+/**
+ * The scheme designed level template by level template (typical-levels.scheme), each
+ * template's takedown and designs placed on its levels under their ids, and the whole-plan
+ * sums made again in the whole plan's order (as runTakedown makes them): the same result as
+ * designing the plan at once. Null where a template has a problem (the plan is then designed
+ * at once, so every problem is reported as it always is).
+ */
+function designFromTemplates(
+  plan: Plan, templates: LevelTemplate[], options: SchemeOptions, table: DesignTable, previous: DesignTable | null, previousGeometry: Map<string, PlanGeometryMemo> | null,
+): SchemeResult | null {
+  const wetWhole = planNeedsWetStage(plan);
+  for (const t of templates) if (planNeedsWetStage(t.plan) !== wetWhole) return null;
+  const geometries = new Map<string, PlanGeometryMemo>();
+  const cores: DesignCore[] = [];
+  for (const t of templates) {
+    const geometry = planGeometry(t.plan, previousGeometry?.get(t.signature) ?? null);
+    const core = designCore(t.plan, geometry, options, table, previous, true);
+    if (core.takedown.problems.length > 0 || !core.trace) return null;
+    geometries.set(t.signature, geometry);
+    cores.push(core);
+  }
+  const planMember = new Map(plan.members.map((m) => [m.id, m]));
+  const pointIndex = new Map(plan.pointLoads.map((l, i) => [l.id!, i]));
+  const lineIndex = new Map(plan.lineLoads.map((l, i) => [l.id!, i]));
+  const deckIndex = new Map(plan.decks.map((d, i) => [d.id, i]));
+  const members = new Map<string, MemberTakedown>();
+  const renamers = new Map<string, LevelRenamer>();
+  const designs = new Map<string, DesignEntry>();
+  const loadsOf = new Map<string, MemberLoad[]>();
+  const extrasOf = new Map<string, MemberDesignExtras>();
+  const sites = wetWhole ? new Map<string, MemberCompositeStatus>() : null;
+  const ordering = new Map<string, Pick<FramingMember, 'id' | 'carries' | 'supports'>>();
+  const pointReceipts = new Map<number, ColumnReceipt[]>();
+  const memberReceipts = new Map<string, ColumnReceipt[]>();
+  const pointApplied = new Map<number, { case: LoadCase; kip: number }[]>();
+  const lineApplied = new Map<number, { case: LoadCase; kip: number }[]>();
+  const deckEntries: { index: number; ctx: DeckContext; level: string }[] = [];
+  const realSupport = (s: EndSupport, at: LevelRenamer): EndSupport => (s.kind === 'member' ? { kind: 'member', id: at.text(s.id), position_ft: s.position_ft } : s);
+
+  templates.forEach((t, k) => {
+    const core = cores[k];
+    const trace = core.trace!;
+    const geometry = geometries.get(t.signature)!;
+    for (const level of t.levels) {
+      const at = new LevelRenamer(level);
+      for (const [pid, mt] of core.takedown.members) {
+        const id = at.text(pid);
+        // The template's takedown stands for this member; its ids are made real where reported (buildSchemeResult).
+        members.set(id, mt);
+        renamers.set(id, at);
+        const entry = core.designs.get(pid);
+        if (entry) designs.set(id, 'error' in entry ? at.data(entry) : entry);
+        const loads = core.loadsOf.get(pid);
+        if (loads) loadsOf.set(id, at.loads(loads));
+        const extras = core.extrasOf.get(pid);
+        if (extras) extrasOf.set(id, at.data(extras));
+        const site = core.sites?.get(pid);
+        if (sites && site) sites.set(id, at.data(site));
+      }
+      for (const [pid, fm] of geometry.topology.members) {
+        const id = at.text(pid);
+        ordering.set(id, { id, carries: fm.carries, supports: { start: realSupport(fm.supports.start, at), end: realSupport(fm.supports.end, at) } });
+      }
+      trace.receipts.forEach((r, i) => {
+        const from = trace.receiptFrom[i];
+        const receipt: ColumnReceipt = { ...r, level: level.levelId, source: at.text(r.source) };
+        if (typeof from === 'number') {
+          const gi = pointIndex.get(at.text(t.plan.pointLoads[from].id!))!;
+          let list = pointReceipts.get(gi);
+          if (!list) pointReceipts.set(gi, (list = []));
+          list.push(receipt);
+        } else {
+          const id = at.text(from);
+          let list = memberReceipts.get(id);
+          if (!list) memberReceipts.set(id, (list = []));
+          list.push(receipt);
+        }
+      });
+      for (const [log, into, index, loads] of [
+        [trace.pointApplied, pointApplied, pointIndex, t.plan.pointLoads],
+        [trace.lineApplied, lineApplied, lineIndex, t.plan.lineLoads],
+      ] as const) {
+        for (const e of log) {
+          const gi = index.get(at.text(loads[e.index].id!))!;
+          let list = into.get(gi);
+          if (!list) into.set(gi, (list = []));
+          list.push({ case: e.case, kip: e.kip });
+        }
+      }
+      for (const ctx of geometry.deckLoads.decks) deckEntries.push({ index: deckIndex.get(at.text(ctx.deck.id))!, ctx, level: level.levelId });
+    }
+  });
+  // The whole plan's order of takedown (as buildFramingTopology would order it), then its sums in that order.
+  const byFile = new Map<string, Pick<FramingMember, 'id' | 'carries' | 'supports'>>();
+  for (const m of plan.members) {
+    const o = ordering.get(m.id);
+    if (o && !byFile.has(m.id)) byFile.set(m.id, o);
+  }
+  const { order, cyclic } = orderBySupport(byFile);
+  if (cyclic.size > 0 || order.length !== members.size) return null;
+  deckEntries.sort((a, b) => a.index - b.index);
+  const deckApplied = deckAppliedLoads(deckEntries.map((e) => e.ctx), (_, k) => deckEntries[k].level);
+  const sumInFileOrder = (logs: Map<number, { case: LoadCase; kip: number }[]>) => {
+    const totals = zeroCaseTotals();
+    for (const gi of [...logs.keys()].sort((a, b) => a - b)) for (const e of logs.get(gi)!) totals[e.case] += e.kip;
+    return totals;
+  };
+  const points = sumInFileOrder(pointApplied);
+  const lines = sumInFileOrder(lineApplied);
+  const applied = zeroCaseTotals();
+  for (const c of LOAD_CASES) applied[c] = deckApplied.applied[c] + points[c] + lines[c];
+  const receipts: ColumnReceipt[] = [];
+  for (const gi of [...pointReceipts.keys()].sort((a, b) => a - b)) receipts.push(...pointReceipts.get(gi)!);
+  for (const id of order) {
+    const mt = members.get(id)!;
+    applied.D += (mt.selfWeight_plf / 1000) * mt.span_ft;
+    const mine = memberReceipts.get(id);
+    if (mine) receipts.push(...mine);
+  }
+  const reactionsByCase = zeroCaseTotals();
+  for (const r of receipts) {
+    reactionsByCase.D += r.D_kip;
+    reactionsByCase.L += r.L_kip;
+    reactionsByCase.Lr += r.Lr_kip;
+    reactionsByCase.S += r.S_kip;
+  }
+  const takedown: SchemeTakedown = {
+    members,
+    renamers,
+    columns: stackColumns(plan, receipts, plan.designBasis.liveLoadReduction),
+    equilibrium: Object.fromEntries(LOAD_CASES.map((c) => [c, { applied_kip: applied[c], reactions_kip: reactionsByCase[c] }])) as SchemeTakedown['equilibrium'],
+    floorArea_ft2: deckApplied.total,
+    byLevelFloorArea_ft2: deckApplied.byLevel,
+    problems: [],
+  };
+  const result = buildSchemeResult(plan, takedown, designs, loadsOf, extrasOf, sites);
+  const next: SchemeMemo = { designs: table, geometry: null, templates: geometries };
   Object.defineProperty(result, CACHE, { value: next, enumerable: false });
   return result;
 }
 
 /** A reaction as the scheme reports it: live reduced by the member's own factor. */
-function schemeReactionEnd(r: EndReaction, factor: number): SchemeReactionEnd {
+function schemeReactionEnd(r: EndReaction, factor: number, at: LevelRenamer | undefined): SchemeReactionEnd {
   return {
     D_kip: r.D_kip,
     L_kip: reducedLiveKip(r, factor),
     Lr_kip: r.Lr_kip,
     S_kip: r.S_kip,
     Lunreduced_kip: r.L_kip,
-    supportedBy: r.supportedBy,
+    supportedBy: at && r.supportedBy !== null ? at.text(r.supportedBy) : r.supportedBy,
   };
 }
 
 /** The loads reported for a member: its design loads, then its self weight. */
-function reportedLoads(mt: MemberTakedown, designed: MemberLoad[] | undefined): MemberLoad[] {
-  const out = designed ? designed.slice() : designLoads(mt);
+function reportedLoads(mt: MemberTakedown, designed: MemberLoad[] | undefined, at: LevelRenamer | undefined): MemberLoad[] {
+  const out = designed ? designed.slice() : at ? at.loads(designLoads(mt)) : designLoads(mt);
   for (const l of mt.loads) {
     if (!isSelfWeight(l)) continue;
     if (l.reducible === undefined) out.push(l as MemberLoad);
@@ -544,7 +734,7 @@ function reportedLoads(mt: MemberTakedown, designed: MemberLoad[] | undefined): 
 }
 
 function buildSchemeResult(
-  plan: Plan, takedown: TakedownResult, designs: Map<string, DesignEntry>, loadsOf: Map<string, MemberLoad[]>,
+  plan: Plan, takedown: SchemeTakedown, designs: Map<string, DesignEntry>, loadsOf: Map<string, MemberLoad[]>,
   extrasOf: Map<string, MemberDesignExtras> = new Map(), sites: Map<string, MemberCompositeStatus> | null = null,
 ): SchemeResult {
   const problems: PlanProblem[] = [...takedown.problems];
@@ -580,6 +770,7 @@ function buildSchemeResult(
 
   const members: SchemeMember[] = fileOrder.map((m) => {
     const mt = takedown.members.get(m.id)!;
+    const at = takedown.renamers?.get(m.id);
     const entry = designs.get(m.id);
     const design = entry && !('error' in entry) ? entry : null;
     if (entry && 'error' in entry) {
@@ -607,8 +798,8 @@ function buildSchemeResult(
       Mr_kipft: design ? design.Mr_kipft : null,
       Mc_kipft: design ? design.Mc_kipft : null,
       weight_plf: mt.selfWeight_plf,
-      reactions: { start: schemeReactionEnd(mt.reactions.start, mt.liveReductionFactor), end: schemeReactionEnd(mt.reactions.end, mt.liveReductionFactor) },
-      loads: reportedLoads(mt, loadsOf.get(m.id)),
+      reactions: { start: schemeReactionEnd(mt.reactions.start, mt.liveReductionFactor, at), end: schemeReactionEnd(mt.reactions.end, mt.liveReductionFactor, at) },
+      loads: reportedLoads(mt, loadsOf.get(m.id), at),
       bracing: mt.bracing,
       connections: 2 + mt.framingPoints_ft.length,
       design,

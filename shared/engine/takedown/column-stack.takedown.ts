@@ -78,13 +78,17 @@ export function columnRequiredAxialKip(method: 'LRFD' | 'ASD', D: number, L: num
   return { Pr_kip: bestPr, combination: bestName };
 }
 
+const NO_RECEIPTS: readonly ColumnReceipt[] = [];
+
 export function stackColumns(plan: Plan, receipts: readonly ColumnReceipt[], liveLoadReduction: boolean): ColumnTakedown[] {
   const elevation = new Map(plan.levels.map((l) => [l.id, l.elevation_ft]));
-  const byColumnLevel = new Map<string, ColumnReceipt[]>();
+  // Receipts by column, then by level, each list in the order received.
+  const byColumnLevel = new Map<string, Map<string, ColumnReceipt[]>>();
   for (const r of receipts) {
-    const key = `${r.columnId}\u0000${r.level}`;
-    let list = byColumnLevel.get(key);
-    if (!list) byColumnLevel.set(key, (list = []));
+    let levels = byColumnLevel.get(r.columnId);
+    if (!levels) byColumnLevel.set(r.columnId, (levels = new Map()));
+    let list = levels.get(r.level);
+    if (!list) levels.set(r.level, (list = []));
     list.push(r);
   }
   return plan.columns.map((column) => {
@@ -92,7 +96,7 @@ export function stackColumns(plan: Plan, receipts: readonly ColumnReceipt[], liv
     let D = 0, Lred = 0, Lall = 0, Lr = 0, S = 0, area = 0, redArea = 0, floors = 0;
     let cantilever = false;
     const out: ColumnLevelTakedown[] = levels.map((level) => {
-      const here = byColumnLevel.get(`${column.id}\u0000${level}`) ?? [];
+      const here = byColumnLevel.get(column.id)?.get(level) ?? NO_RECEIPTS;
       let levelRedArea = 0;
       for (const r of here) {
         D += r.D_kip;

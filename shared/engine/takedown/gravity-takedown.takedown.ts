@@ -15,7 +15,7 @@ import type { PlanProblem } from '../../schemas/plan-problem.schema';
 import { findWShape } from '../../catalog/w-shapes.catalog';
 import { buildFramingTopology, type EndSupport, type FramingMember, type FramingTopology, type MemberEnd } from '../geometry/framing-topology.geometry';
 import { buildDeckContexts, deckStripLoads, zonePressures, type DeckContext } from '../loads/deck-loads.loads';
-import { placeLineLoads, placePointLoads, zeroCaseTotals, type CaseTotals } from '../loads/placed-loads.loads';
+import { placeLineLoads, placePointLoads, zeroCaseTotals, type CaseTotals, type PlacedLoadSinks } from '../loads/placed-loads.loads';
 import { kllTable4_7_1, liveLoadReductionFactor } from '../loads/live-load-reduction.loads';
 import { LOAD_CASES, mergeContiguousLoads, type AreaLoad, type LoadCase, type TakedownLoad } from './member-load.takedown';
 import { lastResultant, resultantKip, simpleSpanReactions } from './simple-span-statics.takedown';
@@ -75,7 +75,25 @@ export interface TakedownOptions {
   topology?: FramingTopology;
   /** Reuse deck loads already prepared for this plan and topology (see prepareDeckLoads). */
   deckLoads?: PreparedDeckLoads;
+  /** Filled with what the whole-plan sums are made of, in the order they are made (see TakedownTrace). */
+  trace?: TakedownTrace;
 }
+
+/**
+ * The parts of a takedown's whole-plan sums (equilibrium, column receipts) in the order they
+ * were added, each with the element it came from, so a takedown of one level can be placed in
+ * a larger plan and its sums re-made in that plan's order (typical-levels.scheme).
+ */
+export interface TakedownTrace {
+  /** Column receipts as pushed; `receiptFrom[i]` is the point load's index in plan.pointLoads, or the member id. */
+  receipts: ColumnReceipt[];
+  receiptFrom: (number | string)[];
+  /** Additions to the applied totals by point loads and line loads: load index, case, kip. */
+  pointApplied: { index: number; case: LoadCase; kip: number }[];
+  lineApplied: { index: number; case: LoadCase; kip: number }[];
+}
+
+export const emptyTakedownTrace = (): TakedownTrace => ({ receipts: [], receiptFrom: [], pointApplied: [], lineApplied: [] });
 
 /**
  * Everything the takedown draws from the decks alone: their contexts and problems, and each
@@ -243,14 +261,16 @@ export function memberKll(carriesOverhang: boolean): number {
 }
 
 /** Net deck area per level and the applied deck load per case. */
-function deckAppliedLoads(decks: readonly DeckContext[]): { applied: CaseTotals; byLevel: Map<string, number>; total: number } {
+export function deckAppliedLoads(decks: readonly DeckContext[], levelOf: (ctx: DeckContext, k: number) => string = (ctx) => ctx.deck.level): { applied: CaseTotals; byLevel: Map<string, number>; total: number } {
   const applied = zeroCaseTotals();
   const byLevel = new Map<string, number>();
   let total = 0;
-  for (const ctx of decks) {
+  for (let k = 0; k < decks.length; k++) {
+    const ctx = decks[k];
+    const level = levelOf(ctx, k);
     const area = ctx.tributary.netArea_ft2;
     total += area;
-    byLevel.set(ctx.deck.level, (byLevel.get(ctx.deck.level) ?? 0) + area);
+    byLevel.set(level, (byLevel.get(level) ?? 0) + area);
     for (const p of zonePressures(ctx.zone, ctx.roof, ctx.deck.slab)) applied[p.case] += (p.psf * area) / 1000;
   }
   return { applied, byLevel, total };
@@ -289,13 +309,19 @@ export function runTakedown(plan: Plan, options: TakedownOptions = {}): Takedown
   const gathered = new Map<string, Gathered>();
   for (const [id, strip] of prepared.strips) gathered.set(id, { loads: strip.loads.slice(), areas: strip.areas.slice(), deckAreaCount: strip.areas.length });
   const receipts: ColumnReceipt[] = [];
-  const sinks = {
+  const trace = options.trace ?? null;
+  let appliedLog: TakedownTrace['pointApplied'] | null = trace ? trace.pointApplied : null;
+  const sinks: PlacedLoadSinks = {
     member: (id: string, load: TakedownLoad) => void gathered.get(id)!.loads.push(load),
-    column: (columnId: string, level: string, c: LoadCase, kip: number, source: string) =>
-      receipts.push({ columnId, level, D_kip: c === 'D' ? kip : 0, L_kip: c === 'L' ? kip : 0, Lreducible_kip: 0, Lr_kip: c === 'Lr' ? kip : 0, S_kip: c === 'S' ? kip : 0, reducibleArea_ft2: 0, area_ft2: 0, cantileverSlab: false, source }),
+    column: (columnId: string, level: string, c: LoadCase, kip: number, source: string, loadIndex: number) => {
+      receipts.push({ columnId, level, D_kip: c === 'D' ? kip : 0, L_kip: c === 'L' ? kip : 0, Lreducible_kip: 0, Lr_kip: c === 'Lr' ? kip : 0, S_kip: c === 'S' ? kip : 0, reducibleArea_ft2: 0, area_ft2: 0, cantileverSlab: false, source });
+      if (trace) trace.receiptFrom.push(loadIndex);
+    },
+    ...(trace ? { applied: (index: number, c: LoadCase, kip: number) => void appliedLog!.push({ index, case: c, kip }) } : {}),
   };
 
   const points = placePointLoads(plan, topology, decks, sinks);
+  if (trace) appliedLog = trace.lineApplied;
   const lines = placeLineLoads(plan, topology, decks, sinks);
   problems.push(...points.problems, ...lines.problems);
 
@@ -391,10 +417,12 @@ export function runTakedown(plan: Plan, options: TakedownOptions = {}): Takedown
           cantileverSlab: carriesOverhang,
           source: `${mt.kind} ${id} ${end}`,
         });
+        if (trace) trace.receiptFrom.push(id);
       }
     }
   }
 
+  if (trace) trace.receipts = receipts;
   const columns = stackColumns(plan, receipts, llrOn);
   const reactionsByCase = zeroCaseTotals();
   for (const r of receipts) {
