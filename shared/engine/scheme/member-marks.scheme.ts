@@ -133,7 +133,10 @@ export function sharedMarkConflicts(members: readonly MarkInput[], marks: Readon
   const out: SharedMarkConflict[] = [];
   for (const list of byMark.values()) {
     const keys = new Map<string, MarkInput>();
-    for (const m of list) if (!keys.has(designKey(m))) keys.set(designKey(m), m);
+    for (const m of list) {
+      const key = designKey(m);
+      if (!keys.has(key)) keys.set(key, m);
+    }
     if (keys.size < 2) continue;
     out.push({
       mark: marks.get(list[0].id)!,
