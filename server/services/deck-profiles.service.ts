@@ -1,5 +1,5 @@
 import { Op, UniqueConstraintError, col, fn, where } from 'sequelize';
-import { BUILT_IN_DECK_PROFILES, type DeckProfile, type DeckProfileInput } from '../../shared/schemas/deck-profile.schema';
+import { BUILT_IN_DECK_PROFILES, type DeckProfile, type DeckProfileInput, type DeckProfileRename } from '../../shared/schemas/deck-profile.schema';
 import { AppError } from '../errors/app-error';
 import type { Db } from '../models/models';
 import type { DeckProfileAttributes } from '../models/deck-profile.model';
@@ -60,11 +60,12 @@ async function ownProfile(ctx: ProfilesCtx, firmId: string, id: string, action: 
   return row;
 }
 
-export async function updateDeckProfile(ctx: ProfilesCtx, actor: { firmId: string; userId: string | null }, id: string, input: DeckProfileInput): Promise<DeckProfile> {
+export async function updateDeckProfile(ctx: ProfilesCtx, actor: { firmId: string; userId: string | null }, id: string, input: DeckProfileInput | DeckProfileRename): Promise<DeckProfile> {
   const row = await ownProfile(ctx, actor.firmId, id, 'change');
   await ensureNameFree(ctx, actor.firmId, input.name, id);
   try {
-    await row.update({ name: input.name, slab: input.slab, userId: actor.userId, updatedAt: new Date() });
+    // A rename (no slab given) leaves the stored build-up as it is.
+    await row.update({ name: input.name, ...('slab' in input ? { slab: input.slab } : {}), userId: actor.userId, updatedAt: new Date() });
   } catch (error) {
     // Another write took the name between the check and this one.
     if (error instanceof UniqueConstraintError) throw AppError.conflict('deck_profile_name_taken', 'A deck profile with this name already exists.', { name: 'A deck profile with this name already exists' });

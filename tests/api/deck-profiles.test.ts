@@ -101,15 +101,30 @@ describe('deck profile library: rename and delete', () => {
       [BUILT_IN_DECK_PROFILES[1].name.toUpperCase(), 409, 'A deck profile with this name already exists'],
     ];
     for (const [name, status, message] of refusals) {
-      const res = await t.agents.owner.put(`/api/deck-profiles/${id}`).send({ name, slab: SLAB });
+      const res = await t.agents.owner.patch(`/api/deck-profiles/${id}`).send({ name });
       expect([res.status, res.body.error.fields]).toEqual([status, { name: message }]);
     }
+    const missing = await t.agents.owner.patch(`/api/deck-profiles/${id}`).send({});
+    expect([missing.status, missing.body.error.fields]).toEqual([400, { name: 'Name is required' }]);
+    // The same rules on a full change (PUT).
+    const putDup = await t.agents.owner.put(`/api/deck-profiles/${id}`).send({ name: 'level 3 office slab', slab: SLAB });
+    expect([putDup.status, putDup.body.error.fields]).toEqual([409, { name: 'A deck profile with this name already exists' }]);
     expect(await nameOf(id)).toBe('Rename me');
     // Its own name in another case, and the longest name allowed, are fine.
-    expect((await t.agents.engineer.put(`/api/deck-profiles/${id}`).send({ name: 'RENAME ME', slab: SLAB })).status).toBe(200);
+    expect((await t.agents.engineer.patch(`/api/deck-profiles/${id}`).send({ name: 'RENAME ME' })).status).toBe(200);
     expect(await nameOf(id)).toBe('RENAME ME');
     const longest = 'y'.repeat(120);
-    expect((await t.agents.engineer.put(`/api/deck-profiles/${id}`).send({ name: longest, slab: SLAB })).body.profile.name).toBe(longest);
+    expect((await t.agents.engineer.patch(`/api/deck-profiles/${id}`).send({ name: ` ${longest} ` })).body.profile.name).toBe(longest);
+  });
+
+  it('when a profile is renamed (PATCH), then only its name changes: a build-up another engineer saved meanwhile is kept', async () => {
+    const id = await make('Renamed, build-up kept');
+    expect((await t.agents.owner.put(`/api/deck-profiles/${id}`).send({ name: 'Renamed, build-up kept', slab: { ...SLAB, fc_ksi: 5 } })).status).toBe(200);
+    const res = await t.agents.engineer.patch(`/api/deck-profiles/${id}`).send({ name: 'Renamed on the Plan', slab: SLAB });
+    expect(res.status).toBe(200);
+    expect(res.body.profile).toEqual({ id, name: 'Renamed on the Plan', slab: { ...SLAB, fc_ksi: 5 }, builtIn: false });
+    const builtIn = await t.agents.engineer.patch(`/api/deck-profiles/${BUILT_IN_DECK_PROFILES[2].id}`).send({ name: 'Mine now' });
+    expect([builtIn.status, builtIn.body.error.fields]).toEqual([400, { id: 'Built-in deck profiles cannot be changed' }]);
   });
 
   it('when a new profile takes a firm name in another letter case, then 409 naming "name"', async () => {
@@ -136,8 +151,8 @@ describe('deck profile library: rename and delete', () => {
     for (const role of ['drafter', 'manager'] as const) {
       const del = await t.agents[role].delete(`/api/deck-profiles/${id}`);
       expect([del.status, del.body.error.code]).toEqual([403, 'forbidden']);
-      const put = await t.agents[role].put(`/api/deck-profiles/${id}`).send({ name: `Renamed by ${role}`, slab: SLAB });
-      expect([put.status, put.body.error.code]).toEqual([403, 'forbidden']);
+      const patch = await t.agents[role].patch(`/api/deck-profiles/${id}`).send({ name: `Renamed by ${role}` });
+      expect([patch.status, patch.body.error.code]).toEqual([403, 'forbidden']);
     }
     expect(await nameOf(id)).toBe('Not theirs to change');
   });
@@ -161,6 +176,8 @@ describe('deck profile library: rename and delete', () => {
     expect(before.plan).toEqual(deckSlab);
 
     expect((await t.agents.engineer.put(`/api/deck-profiles/${id}`).send({ name: 'Clinic floor slab, old', slab: { ...SLAB, fc_ksi: 5 } })).status).toBe(200);
+    expect(await stored()).toEqual(before);
+    expect((await t.agents.owner.patch(`/api/deck-profiles/${id}`).send({ name: 'Clinic floor slab, retired' })).status).toBe(200);
     expect(await stored()).toEqual(before);
     expect((await t.agents.owner.delete(`/api/deck-profiles/${id}`)).status).toBe(204);
     expect(await t.ctx.db.models.DeckProfile.findByPk(id)).toBeNull();
