@@ -3,7 +3,7 @@ import { z } from 'zod';
 import type { AppContext } from '../app-context';
 import { authOf, requireRole } from '../auth/auth.middleware';
 import { validate } from '../middleware/validate.middleware';
-import { deckProfileBody } from '../../shared/schemas/deck-profile.schema';
+import { deckProfileBody, deckProfileRenameBody } from '../../shared/schemas/deck-profile.schema';
 import { createDeckProfile, deleteDeckProfile, listDeckProfiles, updateDeckProfile } from '../services/deck-profiles.service';
 
 // A built-in id ("builtin:…") or a UUID; anything else is bad input naming the id.
@@ -27,6 +27,13 @@ export function deckProfilesRoutes(ctx: AppContext): Router {
 
   router.put('/:id', requireRole('plan:write'), async (req, res) => {
     const { params, body } = validate(req, { params: profileParams, body: deckProfileBody });
+    const auth = authOf(res);
+    res.json({ profile: await updateDeckProfile(ctx, { firmId: auth.firmId, userId: auth.userId }, params.id, body) });
+  });
+
+  // Rename only: the build-up stays as stored.
+  router.patch('/:id', requireRole('plan:write'), async (req, res) => {
+    const { params, body } = validate(req, { params: profileParams, body: deckProfileRenameBody });
     const auth = authOf(res);
     res.json({ profile: await updateDeckProfile(ctx, { firmId: auth.firmId, userId: auth.userId }, params.id, body) });
   });

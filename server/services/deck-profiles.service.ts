@@ -1,5 +1,5 @@
-import { UniqueConstraintError } from 'sequelize';
-import { BUILT_IN_DECK_PROFILES, type DeckProfile, type DeckProfileInput } from '../../shared/schemas/deck-profile.schema';
+import { Op, UniqueConstraintError, col, fn, where } from 'sequelize';
+import { BUILT_IN_DECK_PROFILES, type DeckProfile, type DeckProfileInput, type DeckProfileRename } from '../../shared/schemas/deck-profile.schema';
 import { AppError } from '../errors/app-error';
 import type { Db } from '../models/models';
 import type { DeckProfileAttributes } from '../models/deck-profile.model';
@@ -23,10 +23,16 @@ export async function listDeckProfiles(ctx: ProfilesCtx, firmId: string): Promis
   return [...BUILT_IN_DECK_PROFILES, ...rows.map((r) => view(r.get({ plain: true })))];
 }
 
+/**
+ * A name is free when no built-in and no other profile of the firm has it, letter case aside
+ * (two entries in the picker differing only in case would read as one). The unique index on
+ * (firm_id, name) still catches an exact clash between two concurrent writes.
+ */
 async function ensureNameFree(ctx: ProfilesCtx, firmId: string, name: string, exceptId?: string): Promise<void> {
-  const builtIn = BUILT_IN_DECK_PROFILES.some((p) => p.name.toLowerCase() === name.toLowerCase());
-  const taken = await ctx.db.models.DeckProfile.findOne({ where: { firmId, name } });
-  if (builtIn || (taken && taken.getDataValue('id') !== exceptId)) {
+  const lower = name.toLowerCase();
+  const builtIn = BUILT_IN_DECK_PROFILES.some((p) => p.name.toLowerCase() === lower);
+  const taken = await ctx.db.models.DeckProfile.findAll({ where: { [Op.and]: [{ firmId }, where(fn('lower', col('name')), lower)] }, attributes: ['id'] });
+  if (builtIn || taken.some((r) => r.getDataValue('id') !== exceptId)) {
     throw AppError.conflict('deck_profile_name_taken', 'A deck profile with this name already exists.', { name: 'A deck profile with this name already exists' });
   }
 }
@@ -43,21 +49,32 @@ export async function createDeckProfile(ctx: ProfilesCtx, actor: { firmId: strin
   }
 }
 
-async function ownProfile(ctx: ProfilesCtx, firmId: string, id: string) {
-  if (id.startsWith('builtin:')) throw AppError.badRequest('Built-in deck profiles cannot be changed; save a copy under a new name.', { id: 'Built-in deck profiles cannot be changed' });
+async function ownProfile(ctx: ProfilesCtx, firmId: string, id: string, action: 'change' | 'delete') {
+  if (id.startsWith('builtin:')) {
+    throw action === 'change'
+      ? AppError.badRequest('Built-in deck profiles cannot be changed; save a copy under a new name.', { id: 'Built-in deck profiles cannot be changed' })
+      : AppError.badRequest('Built-in deck profiles cannot be deleted.', { id: 'Built-in deck profiles cannot be deleted' });
+  }
   const row = await ctx.db.models.DeckProfile.findOne({ where: { id, firmId } });
   if (!row) throw AppError.notFound('Deck profile');
   return row;
 }
 
-export async function updateDeckProfile(ctx: ProfilesCtx, actor: { firmId: string; userId: string | null }, id: string, input: DeckProfileInput): Promise<DeckProfile> {
-  const row = await ownProfile(ctx, actor.firmId, id);
+export async function updateDeckProfile(ctx: ProfilesCtx, actor: { firmId: string; userId: string | null }, id: string, input: DeckProfileInput | DeckProfileRename): Promise<DeckProfile> {
+  const row = await ownProfile(ctx, actor.firmId, id, 'change');
   await ensureNameFree(ctx, actor.firmId, input.name, id);
-  await row.update({ name: input.name, slab: input.slab, userId: actor.userId, updatedAt: new Date() });
+  try {
+    // A rename (no slab given) leaves the stored build-up as it is.
+    await row.update({ name: input.name, ...('slab' in input ? { slab: input.slab } : {}), userId: actor.userId, updatedAt: new Date() });
+  } catch (error) {
+    // Another write took the name between the check and this one.
+    if (error instanceof UniqueConstraintError) throw AppError.conflict('deck_profile_name_taken', 'A deck profile with this name already exists.', { name: 'A deck profile with this name already exists' });
+    throw error;
+  }
   return view(row.get({ plain: true }));
 }
 
 export async function deleteDeckProfile(ctx: ProfilesCtx, firmId: string, id: string): Promise<void> {
-  const row = await ownProfile(ctx, firmId, id);
+  const row = await ownProfile(ctx, firmId, id, 'delete');
   await row.destroy();
 }

@@ -51,6 +51,10 @@ export const deckProfileBody = z.object({
 });
 export type DeckProfileInput = z.infer<typeof deckProfileBody>;
 
+/** A rename only: the profile's build-up stays as stored, whatever the renaming client last read. */
+export const deckProfileRenameBody = deckProfileBody.pick({ name: true });
+export type DeckProfileRename = z.infer<typeof deckProfileRenameBody>;
+
 export interface DeckProfile {
   /** "builtin:…" for the built-in library, a UUID for the firm's own. */
   id: string;

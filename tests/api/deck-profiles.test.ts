@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { BUILT_IN_DECK_PROFILES } from '../../shared/schemas/deck-profile.schema';
+import { twoBayPlan } from './helpers/schemes-fixture';
 import { createTestApp, type TestApp } from './helpers/test-app';
 
 // The deck profile library (issue 11): built-ins of Baywright's own naming plus the firm's own,
@@ -76,5 +77,110 @@ describe('deck profile library', () => {
     const made = await t.agents.engineer.post('/api/deck-profiles').send({ name: 'To remove', slab: SLAB });
     expect((await t.agents.engineer.delete(`/api/deck-profiles/${made.body.profile.id}`)).status).toBe(204);
     expect(await t.ctx.db.models.DeckProfile.findByPk(made.body.profile.id)).toBeNull();
+  });
+});
+
+// Renaming and deleting from the Plan's library (issue 11): the server enforces each rule, the
+// refusal names the field, and a deck keeps the build-up it was set from.
+describe('deck profile library: rename and delete', () => {
+  const make = async (name: string) => {
+    const res = await t.agents.engineer.post('/api/deck-profiles').send({ name, slab: SLAB });
+    expect(res.status).toBe(201);
+    return res.body.profile.id as string;
+  };
+  const nameOf = async (id: string) => (await t.ctx.db.models.DeckProfile.findByPk(id))?.getDataValue('name');
+
+  it('when a profile is renamed to a blank, overlong or taken name (any letter case), then 400/409 naming "name" and the name is kept', async () => {
+    const id = await make('Rename me');
+    await make('Level 3 office slab');
+    const refusals: [string, number, string][] = [
+      ['   ', 400, 'Name is required'],
+      ['x'.repeat(121), 400, 'Name is at most 120 characters'],
+      ['Level 3 office slab', 409, 'A deck profile with this name already exists'],
+      ['LEVEL 3 OFFICE SLAB', 409, 'A deck profile with this name already exists'],
+      [BUILT_IN_DECK_PROFILES[1].name.toUpperCase(), 409, 'A deck profile with this name already exists'],
+    ];
+    for (const [name, status, message] of refusals) {
+      const res = await t.agents.owner.patch(`/api/deck-profiles/${id}`).send({ name });
+      expect([res.status, res.body.error.fields]).toEqual([status, { name: message }]);
+    }
+    const missing = await t.agents.owner.patch(`/api/deck-profiles/${id}`).send({});
+    expect([missing.status, missing.body.error.fields]).toEqual([400, { name: 'Name is required' }]);
+    // The same rules on a full change (PUT).
+    const putDup = await t.agents.owner.put(`/api/deck-profiles/${id}`).send({ name: 'level 3 office slab', slab: SLAB });
+    expect([putDup.status, putDup.body.error.fields]).toEqual([409, { name: 'A deck profile with this name already exists' }]);
+    expect(await nameOf(id)).toBe('Rename me');
+    // Its own name in another case, and the longest name allowed, are fine.
+    expect((await t.agents.engineer.patch(`/api/deck-profiles/${id}`).send({ name: 'RENAME ME' })).status).toBe(200);
+    expect(await nameOf(id)).toBe('RENAME ME');
+    const longest = 'y'.repeat(120);
+    expect((await t.agents.engineer.patch(`/api/deck-profiles/${id}`).send({ name: ` ${longest} ` })).body.profile.name).toBe(longest);
+  });
+
+  it('when a profile is renamed (PATCH), then only its name changes: a build-up another engineer saved meanwhile is kept', async () => {
+    const id = await make('Renamed, build-up kept');
+    expect((await t.agents.owner.put(`/api/deck-profiles/${id}`).send({ name: 'Renamed, build-up kept', slab: { ...SLAB, fc_ksi: 5 } })).status).toBe(200);
+    const res = await t.agents.engineer.patch(`/api/deck-profiles/${id}`).send({ name: 'Renamed on the Plan', slab: SLAB });
+    expect(res.status).toBe(200);
+    expect(res.body.profile).toEqual({ id, name: 'Renamed on the Plan', slab: { ...SLAB, fc_ksi: 5 }, builtIn: false });
+    const builtIn = await t.agents.engineer.patch(`/api/deck-profiles/${BUILT_IN_DECK_PROFILES[2].id}`).send({ name: 'Mine now' });
+    expect([builtIn.status, builtIn.body.error.fields]).toEqual([400, { id: 'Built-in deck profiles cannot be changed' }]);
+  });
+
+  it('when a new profile takes a firm name in another letter case, then 409 naming "name"', async () => {
+    await make('Roof slab, lightweight');
+    const res = await t.agents.engineer.post('/api/deck-profiles').send({ name: 'roof slab, LIGHTWEIGHT', slab: SLAB });
+    expect([res.status, res.body.error.fields]).toEqual([409, { name: 'A deck profile with this name already exists' }]);
+  });
+
+  it('when a built-in is deleted, the id is not a profile id, or the profile is unknown or another firm\'s, then a 4xx naming the id and nothing is removed', async () => {
+    const builtIn = await t.agents.owner.delete(`/api/deck-profiles/${BUILT_IN_DECK_PROFILES[0].id}`);
+    expect([builtIn.status, builtIn.body.error.fields]).toEqual([400, { id: 'Built-in deck profiles cannot be deleted' }]);
+    const bad = await t.agents.owner.delete('/api/deck-profiles/not-an-id');
+    expect([bad.status, bad.body.error.fields]).toEqual([400, { id: 'Not a deck profile id' }]);
+    expect((await t.agents.owner.delete('/api/deck-profiles/00000000-0000-4000-8000-000000000000')).status).toBe(404);
+    const id = await make('Kept from the other firm');
+    expect((await t.otherOwner.delete(`/api/deck-profiles/${id}`)).status).toBe(404);
+    expect(await nameOf(id)).toBe('Kept from the other firm');
+    const list = await t.agents.drafter.get('/api/deck-profiles');
+    expect(list.body.profiles.filter((p: { builtIn: boolean }) => p.builtIn).length).toBe(BUILT_IN_DECK_PROFILES.length);
+  });
+
+  it('when a drafter or manager renames or deletes a firm profile, then 403 forbidden and the profile stays as it was', async () => {
+    const id = await make('Not theirs to change');
+    for (const role of ['drafter', 'manager'] as const) {
+      const del = await t.agents[role].delete(`/api/deck-profiles/${id}`);
+      expect([del.status, del.body.error.code]).toEqual([403, 'forbidden']);
+      const patch = await t.agents[role].patch(`/api/deck-profiles/${id}`).send({ name: `Renamed by ${role}` });
+      expect([patch.status, patch.body.error.code]).toEqual([403, 'forbidden']);
+    }
+    expect(await nameOf(id)).toBe('Not theirs to change');
+  });
+
+  it('when the profile a deck was set from is renamed and then deleted, then the deck keeps its own slab build-up and profile name', async () => {
+    const name = 'Clinic floor slab';
+    const id = await make(name);
+    const raw = twoBayPlan() as { decks: Record<string, unknown>[] };
+    const deckSlab = { ...SLAB, profile: name };
+    raw.decks[0].slab = deckSlab;
+    const created = await t.agents.engineer.post(`/api/projects/${t.seed.projectId}/schemes`).send({ name: 'Deck keeps its slab', plan: raw });
+    expect(created.status, JSON.stringify(created.body)).toBe(201);
+    const schemeId = created.body.scheme.id as string;
+    const deckId = raw.decks[0].id as string;
+    const stored = async () => {
+      const got = await t.agents.drafter.get(`/api/schemes/${schemeId}`);
+      const row = await t.ctx.db.models.Deck.findOne({ where: { schemeId, elementId: deckId } });
+      return { revision: got.body.scheme.revision, plan: got.body.scheme.plan.decks[0].slab, row: JSON.parse(JSON.stringify(row?.getDataValue('slab'))) };
+    };
+    const before = await stored();
+    expect(before.plan).toEqual(deckSlab);
+
+    expect((await t.agents.engineer.put(`/api/deck-profiles/${id}`).send({ name: 'Clinic floor slab, old', slab: { ...SLAB, fc_ksi: 5 } })).status).toBe(200);
+    expect(await stored()).toEqual(before);
+    expect((await t.agents.owner.patch(`/api/deck-profiles/${id}`).send({ name: 'Clinic floor slab, retired' })).status).toBe(200);
+    expect(await stored()).toEqual(before);
+    expect((await t.agents.owner.delete(`/api/deck-profiles/${id}`)).status).toBe(204);
+    expect(await t.ctx.db.models.DeckProfile.findByPk(id)).toBeNull();
+    expect(await stored()).toEqual(before);
   });
 });

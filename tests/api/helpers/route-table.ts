@@ -319,6 +319,10 @@ function deckProfileRows(): RouteCase[] {
       method: 'PUT', route: '/api/deck-profiles/:id', allowed: writers, okStatus: 200,
       path: profile('own'), body: () => ({ name: `Matrix renamed ${Date.now()}-${++fixtureCounter}`, slab: MATRIX_SLAB }), foreignPath: profile('foreign'),
     },
+    {
+      method: 'PATCH', route: '/api/deck-profiles/:id', allowed: writers, okStatus: 200,
+      path: profile('own'), body: () => ({ name: `Matrix rename only ${Date.now()}-${++fixtureCounter}` }), foreignPath: profile('foreign'),
+    },
     { method: 'DELETE', route: '/api/deck-profiles/:id', allowed: writers, okStatus: 204, path: profile('own'), foreignPath: profile('foreign') },
   ];
 }

@@ -3,8 +3,9 @@ import { z } from 'zod';
 import { api } from '../../../lib/api-client';
 import type { DeckProfile, DeckProfileInput } from '../../../../shared/schemas/deck-profile.schema';
 
-// GET/POST /api/deck-profiles: the built-in slab build-ups and the firm's own, picked from when
-// editing a deck on the Plan.
+// /api/deck-profiles: the built-in slab build-ups and the firm's own, picked from when editing a
+// deck on the Plan. Owners and engineers save, rename (PATCH: the name only) and delete the
+// firm's own; the server refuses the rest. Every write refreshes the one library list.
 
 const slab = z.object({
   ribHeight_in: z.number(), toppingThickness_in: z.number(), ribAvgWidth_in: z.number(), ribSpacing_in: z.number(),
@@ -26,5 +27,23 @@ export function useSaveDeckProfile() {
   return useMutation({
     mutationFn: async (input: DeckProfileInput): Promise<DeckProfile> => z.object({ profile }).parse(await api.post<unknown>('/api/deck-profiles', input)).profile,
     onSuccess: () => queryClient.invalidateQueries({ queryKey: deckProfilesQueryKey }),
+  });
+}
+
+export function useRenameDeckProfile() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: async ({ id, name }: { id: string; name: string }): Promise<DeckProfile> =>
+      z.object({ profile }).parse(await api.patch<unknown>(`/api/deck-profiles/${encodeURIComponent(id)}`, { name })).profile,
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: deckProfilesQueryKey }),
+  });
+}
+
+export function useDeleteDeckProfile() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: async (id: string): Promise<void> => api.delete(`/api/deck-profiles/${encodeURIComponent(id)}`),
+    // A 404 means someone else removed it first: the list is stale either way.
+    onSettled: () => queryClient.invalidateQueries({ queryKey: deckProfilesQueryKey }),
   });
 }
