@@ -53,4 +53,10 @@ describe('DeckSlabEditor', () => {
     expect(screen.getByLabelText('Topping above the ribs, in')).toHaveAttribute('readonly');
     expect(screen.queryByRole('button', { name: 'Save to library' })).toBeNull();
   });
+  it('when the profile a deck was set from has been renamed or deleted in the library, then the picker says so and the build-up stays', () => {
+    render(<DeckSlabEditor slab={{ ...SLAB, profile: 'Gone from the library' }} profiles={BUILT_IN_DECK_PROFILES} canEdit onChange={vi.fn()} />);
+    expect(screen.getByLabelText('Slab')).toHaveValue('custom');
+    expect(screen.getByRole('option', { name: 'Gone from the library (no longer in the library; the deck keeps its build-up)' })).toBeInTheDocument();
+    expect(screen.getByTestId('slab-dead-load')).toHaveTextContent('Slab dead load 47.6 psf');
+  });
 });

@@ -66,7 +66,7 @@ export function DeckSlabEditor({ slab, profiles, canEdit, onChange, onSaveProfil
           }}
         >
           <option value="none">No slab (zone dead load, bare steel)</option>
-          {slab && !profiles.some((p) => p.name === slab.profile) ? <option value="custom">{slab.profile ? `${slab.profile} (edited)` : 'Own build-up'}</option> : null}
+          {slab && !profiles.some((p) => p.name === slab.profile) ? <option value="custom">{slab.profile ? `${slab.profile} (no longer in the library; the deck keeps its build-up)` : 'Own build-up'}</option> : null}
           {profiles.map((p) => (
             <option key={p.id} value={p.id}>
               {p.builtIn ? p.name : `${p.name} (firm)`}

@@ -7,7 +7,8 @@ import { useUnits } from '../../../lib/units-context';
 import { fieldText } from './field-text';
 import { readQuantityField, type FieldBound } from './field-input.validator';
 import { DeckSlabEditor } from './deck-slab-editor.component';
-import { useDeckProfiles, useSaveDeckProfile } from '../api/deck-profiles.api';
+import { useDeckProfiles, useDeleteDeckProfile, useRenameDeckProfile, useSaveDeckProfile } from '../api/deck-profiles.api';
+import { DeckProfileLibrary } from './deck-profile-library.component';
 
 const INPUT = 'h-8 w-20 rounded-[3px] border border-line bg-paper-raised px-2 text-xs figures font-mono text-ink focus:border-accent focus:outline-none';
 
@@ -69,8 +70,11 @@ export function SelectionInspector({ store, canEdit }: { store: EditorStore; can
 function DeckSlab({ store, deckId, slab, canEdit }: { store: EditorStore; deckId: string; slab: import('../../../../shared/schemas/plan.schema').PlanSlab | null; canEdit: boolean }) {
   const profiles = useDeckProfiles();
   const save = useSaveDeckProfile();
+  const rename = useRenameDeckProfile();
+  const remove = useDeleteDeckProfile();
   const { profile: _p, ...rest } = slab ?? ({} as NonNullable<typeof slab>);
   return (
+    <>
     <DeckSlabEditor
       key={deckId}
       slab={slab}
@@ -79,6 +83,8 @@ function DeckSlab({ store, deckId, slab, canEdit }: { store: EditorStore; deckId
       onChange={(next) => dispatch(store, 'deck.setSlab', { id: deckId, slab: next })}
       onSaveProfile={canEdit && slab ? (name) => save.mutateAsync({ name, slab: rest as Parameters<typeof save.mutateAsync>[0]['slab'] }) : undefined}
     />
+    <DeckProfileLibrary profiles={profiles.data ?? []} canEdit={canEdit} onRename={(id, name) => rename.mutateAsync({ id, name })} onDelete={(id) => remove.mutateAsync(id)} />
+    </>
   );
 }
 
