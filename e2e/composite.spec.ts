@@ -30,6 +30,27 @@ test('when the engineer changes the slab and opens a beam, then studs, camber an
   const slab = page.getByRole('group', { name: 'Slab build-up' });
   await expect(slab).toBeVisible({ timeout: 15_000 });
   await expect(page.getByTestId('slab-dead-load')).toContainText('47.6 psf'); // 114 × (3.25 + 3 × 6/12) / 12 + 2.5 (demo slab)
+
+  // The firm's library: this build-up saved under a name of our own, renamed, then deleted; the deck keeps its slab.
+  const profileName = `Quay slab ${Date.now()}`;
+  await slab.getByLabel('Profile name').fill(profileName);
+  await slab.getByRole('button', { name: 'Save to library' }).click();
+  await expect(slab.getByRole('status')).toContainText(`Saved “${profileName}”`);
+  const library = page.getByTestId('deck-profile-library');
+  await library.getByText(/^Deck profile library/).click();
+  const saved = library.getByRole('listitem', { name: `Deck profile ${profileName}` });
+  await saved.getByRole('button', { name: 'Rename' }).click();
+  await saved.getByLabel('New name').fill(`${profileName} (typical floor)`);
+  await saved.getByRole('button', { name: 'Save name' }).click();
+  const renamed = library.getByRole('listitem', { name: `Deck profile ${profileName} (typical floor)` });
+  await expect(renamed).toBeVisible();
+  await renamed.scrollIntoViewIfNeeded();
+  await page.screenshot({ path: `${SCREENSHOT_DIR}/deck-profile-library.png` });
+  await renamed.getByRole('button', { name: 'Delete' }).click();
+  await renamed.getByRole('button', { name: `Delete “${profileName} (typical floor)”` }).click();
+  await expect(library.getByRole('status')).toContainText(`Deleted “${profileName} (typical floor)” from the library.`);
+  await expect(library.getByRole('listitem', { name: new RegExp(`^Deck profile ${profileName}`) })).toHaveCount(0);
+  await expect(page.getByTestId('slab-dead-load')).toContainText('47.6 psf');
   const fc = slab.getByLabel("f'c, ksi");
   await fc.fill('4');
   await fc.press('Enter');

@@ -24,7 +24,7 @@ export function SelectionInspector({ store, canEdit }: { store: EditorStore; can
   const grid = (plan.grids ?? []).find((g) => g.id === id);
   if (deck) {
     return (
-      <section aria-label="Deck area" className="flex flex-wrap items-center gap-3 border-t border-ink px-3 py-2 text-xs">
+      <section aria-label="Deck area" className="flex max-h-[60%] shrink-0 flex-wrap items-center gap-3 overflow-y-auto border-t border-ink px-3 py-2 text-xs">
         <span className="label-caps">Deck {deck.id}</span>
         <label className="flex items-center gap-1">
           Spans
