@@ -25,7 +25,7 @@ import type { CompositeMemberInput } from '../sizing/member-design.types';
 import { schemeColumns, type SchemeColumn } from './column-design.scheme';
 import { memberDeflectionLimits } from './member-settings.scheme';
 import { LevelRenamer, typicalLevelTemplates, type LevelTemplate } from './typical-levels.scheme';
-import { deckAppliedLoads, emptyTakedownTrace, type TakedownTrace } from '../takedown/gravity-takedown.takedown';
+import { deckAppliedLoads, emptyTakedownTrace, equilibriumOf, type TakedownTrace } from '../takedown/gravity-takedown.takedown';
 import { orderBySupport, type EndSupport, type FramingMember } from '../geometry/framing-topology.geometry';
 import { stackColumns, type ColumnReceipt } from '../takedown/column-stack.takedown';
 import { LOAD_CASES, type LoadCase } from '../takedown/member-load.takedown';
@@ -685,18 +685,11 @@ function designFromTemplates(
     const mine = memberReceipts.get(id);
     if (mine) receipts.push(...mine);
   }
-  const reactionsByCase = zeroCaseTotals();
-  for (const r of receipts) {
-    reactionsByCase.D += r.D_kip;
-    reactionsByCase.L += r.L_kip;
-    reactionsByCase.Lr += r.Lr_kip;
-    reactionsByCase.S += r.S_kip;
-  }
   const takedown: SchemeTakedown = {
     members,
     renamers,
     columns: stackColumns(plan, receipts, plan.designBasis.liveLoadReduction),
-    equilibrium: Object.fromEntries(LOAD_CASES.map((c) => [c, { applied_kip: applied[c], reactions_kip: reactionsByCase[c] }])) as SchemeTakedown['equilibrium'],
+    equilibrium: equilibriumOf(applied, receipts),
     floorArea_ft2: deckApplied.total,
     byLevelFloorArea_ft2: deckApplied.byLevel,
     problems: [],

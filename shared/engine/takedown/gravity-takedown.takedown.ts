@@ -424,14 +424,7 @@ export function runTakedown(plan: Plan, options: TakedownOptions = {}): Takedown
 
   if (trace) trace.receipts = receipts;
   const columns = stackColumns(plan, receipts, llrOn);
-  const reactionsByCase = zeroCaseTotals();
-  for (const r of receipts) {
-    reactionsByCase.D += r.D_kip;
-    reactionsByCase.L += r.L_kip;
-    reactionsByCase.Lr += r.Lr_kip;
-    reactionsByCase.S += r.S_kip;
-  }
-  const equilibrium = Object.fromEntries(LOAD_CASES.map((c) => [c, { applied_kip: applied[c], reactions_kip: reactionsByCase[c] }])) as Record<LoadCase, EquilibriumCase>;
+  const equilibrium = equilibriumOf(applied, receipts);
 
   return {
     topology,
@@ -443,6 +436,18 @@ export function runTakedown(plan: Plan, options: TakedownOptions = {}): Takedown
     byLevelFloorArea_ft2: deckApplied.byLevel,
     problems,
   };
+}
+
+/** Equilibrium per case: the applied totals beside the sum of the column receipts (in their order). */
+export function equilibriumOf(applied: CaseTotals, receipts: readonly ColumnReceipt[]): Record<LoadCase, EquilibriumCase> {
+  const reactionsByCase = zeroCaseTotals();
+  for (const r of receipts) {
+    reactionsByCase.D += r.D_kip;
+    reactionsByCase.L += r.L_kip;
+    reactionsByCase.Lr += r.Lr_kip;
+    reactionsByCase.S += r.S_kip;
+  }
+  return Object.fromEntries(LOAD_CASES.map((c) => [c, { applied_kip: applied[c], reactions_kip: reactionsByCase[c] }])) as Record<LoadCase, EquilibriumCase>;
 }
 
 /** L this member passes on after its own reduction: reducible part × factor + the rest. */
