@@ -1,4 +1,4 @@
-import { Op, UniqueConstraintError, col, fn, where } from 'sequelize';
+import { UniqueConstraintError } from 'sequelize';
 import { BUILT_IN_DECK_PROFILES, type DeckProfile, type DeckProfileInput, type DeckProfileRename } from '../../shared/schemas/deck-profile.schema';
 import { AppError } from '../errors/app-error';
 import type { Db } from '../models/models';
@@ -31,7 +31,10 @@ export async function listDeckProfiles(ctx: ProfilesCtx, firmId: string): Promis
 async function ensureNameFree(ctx: ProfilesCtx, firmId: string, name: string, exceptId?: string): Promise<void> {
   const lower = name.toLowerCase();
   const builtIn = BUILT_IN_DECK_PROFILES.some((p) => p.name.toLowerCase() === lower);
-  const taken = await ctx.db.models.DeckProfile.findAll({ where: { [Op.and]: [{ firmId }, where(fn('lower', col('name')), lower)] }, attributes: ['id'] });
+  // Compared here, not in SQL: JavaScript folds every letter's case (SQLite's lower() only ASCII),
+  // and a name with any character at all (NUL included) is only ever a bound value.
+  const firmProfiles = await ctx.db.models.DeckProfile.findAll({ where: { firmId }, attributes: ['id', 'name'] });
+  const taken = firmProfiles.filter((r) => String(r.getDataValue('name')).toLowerCase() === lower);
   if (builtIn || taken.some((r) => r.getDataValue('id') !== exceptId)) {
     throw AppError.conflict('deck_profile_name_taken', 'A deck profile with this name already exists.', { name: 'A deck profile with this name already exists' });
   }

@@ -131,6 +131,19 @@ describe('deck profile library: rename and delete', () => {
     await make('Roof slab, lightweight');
     const res = await t.agents.engineer.post('/api/deck-profiles').send({ name: 'roof slab, LIGHTWEIGHT', slab: SLAB });
     expect([res.status, res.body.error.fields]).toEqual([409, { name: 'A deck profile with this name already exists' }]);
+    // Case is folded for every letter, not only ASCII (on SQLite as on PostgreSQL).
+    await make('Dalle légère, étage 4');
+    const accented = await t.agents.engineer.post('/api/deck-profiles').send({ name: 'DALLE LÉGÈRE, ÉTAGE 4', slab: SLAB });
+    expect([accented.status, accented.body.error.fields]).toEqual([409, { name: 'A deck profile with this name already exists' }]);
+  });
+
+  it('when a name holds control characters (NUL included), then the name check never reaches SQL as text: it is stored as sent and a second one is a 409 naming "name", never a 5xx', async () => {
+    const name = 'Slab\u0000with\u0007controls\u0000';
+    const res = await t.agents.engineer.post('/api/deck-profiles').send({ name, slab: SLAB });
+    expect([res.status, res.body.profile?.name]).toEqual([201, name]);
+    const dup = await t.agents.engineer.post('/api/deck-profiles').send({ name, slab: SLAB });
+    expect([dup.status, dup.body.error.fields]).toEqual([409, { name: 'A deck profile with this name already exists' }]);
+    expect(t.serverErrors).toEqual([]);
   });
 
   it('when a built-in is deleted, the id is not a profile id, or the profile is unknown or another firm\'s, then a 4xx naming the id and nothing is removed', async () => {
