@@ -46,7 +46,10 @@ export const deckProfileBody = z.object({
     .string({ error: 'Name is required' })
     .trim()
     .min(1, 'Name is required')
-    .max(120, 'Name is at most 120 characters'),
+    .max(120, 'Name is at most 120 characters')
+    // A name shown in a picker and printed on sheets: no control characters (PostgreSQL text
+    // cannot even hold NUL, so it would not come back as sent).
+    .regex(/^[^\u0000-\u001f\u007f]+$/, 'Name cannot hold control characters'),
   slab: deckSlabSchema,
 });
 export type DeckProfileInput = z.infer<typeof deckProfileBody>;

@@ -137,12 +137,17 @@ describe('deck profile library: rename and delete', () => {
     expect([accented.status, accented.body.error.fields]).toEqual([409, { name: 'A deck profile with this name already exists' }]);
   });
 
-  it('when a name holds control characters (NUL included), then the name check never reaches SQL as text: it is stored as sent and a second one is a 409 naming "name", never a 5xx', async () => {
-    const name = 'Slab\u0000with\u0007controls\u0000';
-    const res = await t.agents.engineer.post('/api/deck-profiles').send({ name, slab: SLAB });
-    expect([res.status, res.body.profile?.name]).toEqual([201, name]);
-    const dup = await t.agents.engineer.post('/api/deck-profiles').send({ name, slab: SLAB });
-    expect([dup.status, dup.body.error.fields]).toEqual([409, { name: 'A deck profile with this name already exists' }]);
+  it('when a name holds control characters (NUL included), then 400 naming "name", on create and on rename, and nothing is stored', async () => {
+    const before = await t.ctx.db.models.DeckProfile.count();
+    for (const name of ['Slab\u0000with NUL', 'Bell\u0007', 'Tab\there', 'DEL\u007f']) {
+      const res = await t.agents.engineer.post('/api/deck-profiles').send({ name, slab: SLAB });
+      expect([res.status, res.body.error.fields]).toEqual([400, { name: 'Name cannot hold control characters' }]);
+    }
+    expect(await t.ctx.db.models.DeckProfile.count()).toBe(before);
+    const id = await make('Kept as it was');
+    const rename = await t.agents.engineer.patch(`/api/deck-profiles/${id}`).send({ name: 'Kept\u0000 no more' });
+    expect([rename.status, rename.body.error.fields]).toEqual([400, { name: 'Name cannot hold control characters' }]);
+    expect(await nameOf(id)).toBe('Kept as it was');
     expect(t.serverErrors).toEqual([]);
   });
 
