@@ -33,6 +33,8 @@ async function main() {
     databaseUrl: `sqlite:${join(tmp, 'cpu.sqlite')}`,
     env: { NODE_ENV: 'production', COOKIE_SECURE: 'false', RATE_LIMIT_RELAXED: 'true', UPLOAD_DIR: join(tmp, 'uploads') },
     timeoutMs: 300_000,
+    // As `npm start` runs it (BENCH_TSX=1: server/index.ts under the TypeScript loader, for comparison).
+    bundled: process.env.BENCH_TSX !== '1',
     ...(profDir ? { nodeArgs: ['--cpu-prof', '--cpu-prof-dir', profDir] } : {}),
   });
   const pid = server.child.pid!;

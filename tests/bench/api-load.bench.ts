@@ -12,7 +12,9 @@
  * conflict; reads go to the shared demo project. The machine's cores are shared with the
  * load generator itself (and with anything else running), which the figures include.
  *
- * Options (environment): BENCH_CLIENTS (50), BENCH_DURATION_S (60), BENCH_WARMUP_S (10).
+ * Options (environment): BENCH_CLIENTS (50), BENCH_DURATION_S (60), BENCH_WARMUP_S (10),
+ * BENCH_THINK_MS (0: each client pauses 0.5–1.5 × this after each response; for a diagnosis only,
+ * the targets are judged with no pause), BENCH_TSX=1 (the server under the TypeScript loader).
  *
  * Each client has one request in flight and no pause between requests, so by Little's law the
  * mean response time is CLIENTS / (requests per second): p95 ≤ 50 ms with 50 clients needs the
@@ -27,6 +29,8 @@ import { signedInClient, startServerProcess } from '../support/server-process';
 const CLIENTS = Number(process.env.BENCH_CLIENTS ?? 50);
 const DURATION_S = Number(process.env.BENCH_DURATION_S ?? 60);
 const WARMUP_S = Number(process.env.BENCH_WARMUP_S ?? 10);
+/** Each client's pause after a response, ms: uniform over [0.5, 1.5] × BENCH_THINK_MS (0: none, a closed loop). */
+const THINK_MS = Number(process.env.BENCH_THINK_MS ?? 0);
 const PASSWORD = 'baywright-demo';
 const ENGINEERS = ['engineer@example.com', 'owner@example.com'];
 
@@ -81,6 +85,8 @@ async function main() {
     databaseUrl: `sqlite:${join(tmp, 'bench.sqlite')}`,
     env: { NODE_ENV: 'production', COOKIE_SECURE: 'false', RATE_LIMIT_RELAXED: 'true', UPLOAD_DIR: join(tmp, 'uploads') },
     timeoutMs: 300_000,
+    // As `npm start` runs it (BENCH_TSX=1: server/index.ts under the TypeScript loader, for comparison).
+    bundled: process.env.BENCH_TSX !== '1',
   });
   const pid = server.child.pid!;
   try {
@@ -148,6 +154,7 @@ async function main() {
           samples.get(route)!.push({ ms, ok });
           if (!ok) failures.push(`${route}: ${status} ${detail}`);
         }
+        if (THINK_MS > 0) await new Promise((r) => setTimeout(r, THINK_MS * (0.5 + random())));
       }
     };
 
@@ -181,7 +188,7 @@ async function main() {
     const f = (n: number) => (Number.isFinite(n) ? n.toFixed(1) : '—');
 
     const out: string[] = [];
-    out.push(`bench:api — ${CLIENTS} clients, ${DURATION_S} s after a ${WARMUP_S} s warm-up, demo building (${members} members per scheme), SQLite file, NODE_ENV=production, loopback`);
+    out.push(`bench:api — ${CLIENTS} clients${THINK_MS > 0 ? `, each pausing ${THINK_MS / 2}–${(THINK_MS * 3) / 2} ms after a response` : ', no pause between requests'}, ${DURATION_S} s after a ${WARMUP_S} s warm-up, demo building (${members} members per scheme), SQLite file, NODE_ENV=production, loopback`);
     out.push(`${'route'.padEnd(20)} ${'requests'.padStart(8)} ${'req/s'.padStart(8)} ${'p50 ms'.padStart(8)} ${'p95 ms'.padStart(8)} ${'p99 ms'.padStart(8)} ${'max ms'.padStart(8)} ${'errors'.padStart(7)}`);
     for (const r of rows) {
       out.push(`${r.route.padEnd(20)} ${String(r.count).padStart(8)} ${f(r.perS).padStart(8)} ${f(r.p50).padStart(8)} ${f(r.p95).padStart(8)} ${f(r.p99).padStart(8)} ${f(r.max).padStart(8)} ${String(r.errors).padStart(7)}`);

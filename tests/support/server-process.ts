@@ -22,9 +22,12 @@ export async function startServerProcess(options: {
   timeoutMs?: number;
   /** Extra node options before the entry (e.g. `--cpu-prof`). */
   nodeArgs?: string[];
+  /** Run as `npm start` does: the bundled server (server/launch.mjs) rather than server/index.ts under tsx. */
+  bundled?: boolean;
 }): Promise<ServerProcess> {
   const port = options.port ?? (await freePort());
-  const child = spawn(process.execPath, [...(options.nodeArgs ?? []), '--import', 'tsx', 'server/index.ts'], {
+  const entry = options.bundled ? ['server/launch.mjs'] : ['--import', 'tsx', 'server/index.ts'];
+  const child = spawn(process.execPath, [...(options.nodeArgs ?? []), ...entry], {
     env: {
       ...process.env,
       NODE_ENV: 'test',

@@ -45,7 +45,9 @@ interface Slot {
   timer: NodeJS.Timeout | null;
 }
 
-const BOOTSTRAP = new URL('./design-worker.bootstrap.mjs', import.meta.url);
+/** Set by the server bundle (server/launch.mjs) to the worker's bundle beside it. */
+declare const __BAYWRIGHT_DESIGN_WORKER__: string | undefined;
+const BOOTSTRAP = new URL(typeof __BAYWRIGHT_DESIGN_WORKER__ === 'string' ? __BAYWRIGHT_DESIGN_WORKER__ : './design-worker.bootstrap.mjs', import.meta.url);
 /** Longest a worker may take to start and pick up a run, ms. */
 const WORKER_START_MS = 60_000;
 
