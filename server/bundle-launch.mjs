@@ -7,7 +7,7 @@
  * data are loaded from node_modules as usual); only our own TypeScript is bundled.
  * Without esbuild the caller falls back to the TypeScript loader (tsx): slower, the same code.
  */
-import { mkdirSync, readFileSync, renameSync, statSync, writeFileSync } from 'node:fs';
+import { mkdirSync, readFileSync, renameSync, rmSync, statSync, writeFileSync } from 'node:fs';
 import { dirname, join, resolve } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 
@@ -17,7 +17,7 @@ export const root = resolve(dirname(fileURLToPath(import.meta.url)), '..');
  * @param {{ name: string, entries: Record<string, string>, launcher: string, external?: boolean, define?: Record<string, string> }} spec
  *   entries: output name (without .mjs) → entry path from the repository root.
  *   external: keep packages out of the bundle (the server); the command line bundles them too.
- * @returns {{ outDir: string, ensure: () => Promise<boolean>, urlOf: (name: string) => string }}
+ * @returns {{ ensure: () => Promise<boolean>, urlOf: (name: string) => string }}
  */
 export function bundled(spec) {
   const outDir = join(root, 'node_modules/.cache', spec.name);
@@ -63,15 +63,10 @@ export function bundled(spec) {
     writeFileSync(`${manifest}.${process.pid}.tmp`, JSON.stringify({ inputs }));
     for (const out of Object.keys(spec.entries)) renameSync(join(tmpDir, `${out}.mjs`), join(outDir, `${out}.mjs`));
     renameSync(`${manifest}.${process.pid}.tmp`, manifest);
-    try {
-      (await import('node:fs')).rmSync(tmpDir, { recursive: true, force: true });
-    } catch {
-      // an empty temporary folder left behind is harmless
-    }
+    rmSync(tmpDir, { recursive: true, force: true });
   }
 
   return {
-    outDir,
     /** Builds when stale; false when it cannot (the caller then uses the TypeScript loader). */
     async ensure() {
       if (!stale()) return true;
