@@ -474,7 +474,18 @@ class DesignPass {
  * member's template takedown (placeholder ids) and `renamers` the member's level, by which
  * the ids it reports are made real.
  */
-type SchemeTakedown = Pick<TakedownResult, 'members' | 'columns' | 'equilibrium' | 'floorArea_ft2' | 'byLevelFloorArea_ft2' | 'problems'> & { renamers?: Map<string, LevelRenamer> };
+type SchemeTakedown = Pick<TakedownResult, 'members' | 'columns' | 'equilibrium' | 'floorArea_ft2' | 'byLevelFloorArea_ft2' | 'problems'> & { placements?: Map<string, Placement> };
+
+/**
+ * Where a member designed from a level template came from: the template's design (`core`),
+ * its placeholder id there (`pid`) and its level's renamer. Its result is the template member's
+ * result, built once per template, with the ids it reports made real for the level.
+ */
+interface Placement {
+  core: DesignCore;
+  pid: string;
+  at: LevelRenamer;
+}
 
 /** A plan's takedown with every member designed: what the scheme result is built from. */
 interface DesignCore {
@@ -592,11 +603,8 @@ function designFromTemplates(
   const lineIndex = new Map(plan.lineLoads.map((l, i) => [l.id!, i]));
   const deckIndex = new Map(plan.decks.map((d, i) => [d.id, i]));
   const members = new Map<string, MemberTakedown>();
-  const renamers = new Map<string, LevelRenamer>();
+  const placements = new Map<string, Placement>();
   const designs = new Map<string, DesignEntry>();
-  const loadsOf = new Map<string, MemberLoad[]>();
-  const extrasOf = new Map<string, MemberDesignExtras>();
-  const sites = wetWhole ? new Map<string, MemberCompositeStatus>() : null;
   const ordering = new Map<string, Pick<FramingMember, 'id' | 'carries' | 'supports'>>();
   const pointReceipts = new Map<number, ColumnReceipt[]>();
   const memberReceipts = new Map<string, ColumnReceipt[]>();
@@ -615,15 +623,9 @@ function designFromTemplates(
         const id = at.text(pid);
         // The template's takedown stands for this member; its ids are made real where reported (buildSchemeResult).
         members.set(id, mt);
-        renamers.set(id, at);
+        placements.set(id, { core, pid, at });
         const entry = core.designs.get(pid);
         if (entry) designs.set(id, 'error' in entry ? at.data(entry) : entry);
-        const loads = core.loadsOf.get(pid);
-        if (loads) loadsOf.set(id, at.loads(loads));
-        const extras = core.extrasOf.get(pid);
-        if (extras) extrasOf.set(id, at.data(extras));
-        const site = core.sites?.get(pid);
-        if (sites && site) sites.set(id, at.data(site));
       }
       for (const [pid, fm] of geometry.topology.members) {
         const id = at.text(pid);
@@ -687,34 +689,34 @@ function designFromTemplates(
   }
   const takedown: SchemeTakedown = {
     members,
-    renamers,
+    placements,
     columns: stackColumns(plan, receipts, plan.designBasis.liveLoadReduction),
     equilibrium: equilibriumOf(applied, receipts),
     floorArea_ft2: deckApplied.total,
     byLevelFloorArea_ft2: deckApplied.byLevel,
     problems: [],
   };
-  const result = buildSchemeResult(plan, takedown, designs, loadsOf, extrasOf, sites);
+  const result = buildSchemeResult(plan, takedown, designs, new Map(), new Map(), wetWhole ? new Map() : null);
   const next: SchemeMemo = { designs: table, geometry: null, templates: geometries };
   Object.defineProperty(result, CACHE, { value: next, enumerable: false });
   return result;
 }
 
 /** A reaction as the scheme reports it: live reduced by the member's own factor. */
-function schemeReactionEnd(r: EndReaction, factor: number, at: LevelRenamer | undefined): SchemeReactionEnd {
+function schemeReactionEnd(r: EndReaction, factor: number): SchemeReactionEnd {
   return {
     D_kip: r.D_kip,
     L_kip: reducedLiveKip(r, factor),
     Lr_kip: r.Lr_kip,
     S_kip: r.S_kip,
     Lunreduced_kip: r.L_kip,
-    supportedBy: at && r.supportedBy !== null ? at.text(r.supportedBy) : r.supportedBy,
+    supportedBy: r.supportedBy,
   };
 }
 
 /** The loads reported for a member: its design loads, then its self weight. */
-function reportedLoads(mt: MemberTakedown, designed: MemberLoad[] | undefined, at: LevelRenamer | undefined): MemberLoad[] {
-  const out = designed ? designed.slice() : at ? at.loads(designLoads(mt)) : designLoads(mt);
+function reportedLoads(mt: MemberTakedown, designed: MemberLoad[] | undefined): MemberLoad[] {
+  const out = designed ? designed.slice() : designLoads(mt);
   for (const l of mt.loads) {
     if (!isSelfWeight(l)) continue;
     if (l.reducible === undefined) out.push(l as MemberLoad);
@@ -724,6 +726,74 @@ function reportedLoads(mt: MemberTakedown, designed: MemberLoad[] | undefined, a
     }
   }
   return out;
+}
+
+/** A member's result from its takedown and design (ids as the takedown wrote them). */
+function schemeMember(
+  m: Plan['members'][number], mt: MemberTakedown, design: MemberDesignResult | null, mark: string, errored: boolean,
+  designed: MemberLoad[] | undefined, extras: MemberDesignExtras | undefined, status: MemberCompositeStatus | undefined, composite: boolean,
+): SchemeMember {
+  const member: SchemeMember = {
+    id: m.id,
+    mark,
+    kind: m.kind,
+    level: m.level,
+    shape: design ? design.shape : m.shape,
+    span_ft: mt.span_ft,
+    passes: design ? design.passes && !errored : false,
+    governing: design ? design.governing : null,
+    ratio: design ? design.ratio : null,
+    tributaryWidth_ft: mt.tributaryWidth_ft,
+    tributaryArea_ft2: mt.tributaryArea_ft2,
+    reducibleArea_ft2: mt.reducibleArea_ft2,
+    KLL: mt.KLL,
+    liveReductionFactor: mt.liveReductionFactor,
+    Lb_ft: design ? design.Lb_ft : null,
+    Cb: design ? design.Cb : null,
+    Mr_kipft: design ? design.Mr_kipft : null,
+    Mc_kipft: design ? design.Mc_kipft : null,
+    weight_plf: mt.selfWeight_plf,
+    reactions: { start: schemeReactionEnd(mt.reactions.start, mt.liveReductionFactor), end: schemeReactionEnd(mt.reactions.end, mt.liveReductionFactor) },
+    loads: reportedLoads(mt, designed),
+    bracing: mt.bracing,
+    connections: 2 + mt.framingPoints_ft.length,
+    design,
+  };
+  if (composite) {
+    member.studs = design?.composite ? design.composite.studs : null;
+    member.camber_in = design?.composite ? design.composite.camber_in : null;
+    member.percentComposite = design?.composite ? design.composite.percentComposite : null;
+    member.compositeNote = status && !status.composite ? status.reason : null;
+    member.designExtras = extras ?? null;
+  }
+  return member;
+}
+
+/** A reaction end on a level: shared unless it names a member of the level. */
+function placedEnd(r: SchemeReactionEnd, at: LevelRenamer): SchemeReactionEnd {
+  if (r.supportedBy === null) return r;
+  const supportedBy = at.text(r.supportedBy);
+  return supportedBy === r.supportedBy ? r : { ...r, supportedBy };
+}
+
+/**
+ * A template member's result placed on a level: the same result (parts without ids shared),
+ * with the member's own id, mark and level and every id it reports made real.
+ */
+function placedMember(base: SchemeMember, m: Plan['members'][number], mark: string, errored: boolean, at: LevelRenamer): SchemeMember {
+  const { start, end } = base.reactions;
+  const member: SchemeMember = {
+    ...base,
+    id: m.id,
+    mark,
+    level: m.level,
+    passes: base.passes && !errored,
+    reactions: { start: placedEnd(start, at), end: placedEnd(end, at) },
+    loads: at.loads(base.loads),
+  };
+  if (base.compositeNote) member.compositeNote = at.text(base.compositeNote);
+  if (base.designExtras) member.designExtras = at.data(base.designExtras);
+  return member;
 }
 
 function buildSchemeResult(
@@ -761,9 +831,22 @@ function buildSchemeResult(
   const erroredIds = new Set<string>();
   for (const p of takedown.problems) if (p.severity === 'error' && p.elementId) erroredIds.add(p.elementId);
 
+  // A template member's result, built once for all the levels it is placed on.
+  const templateMembers = new Map<DesignCore, Map<string, SchemeMember>>();
+  const templateMember = (p: Placement, m: Plan['members'][number]): SchemeMember => {
+    let built = templateMembers.get(p.core);
+    if (!built) templateMembers.set(p.core, (built = new Map()));
+    let base = built.get(p.pid);
+    if (!base) {
+      const { core, pid } = p;
+      const entry = core.designs.get(pid);
+      base = schemeMember(m, core.takedown.members.get(pid)!, entry && !('error' in entry) ? entry : null, '', false, core.loadsOf.get(pid), core.extrasOf.get(pid), sites ? core.sites?.get(pid) : undefined, sites !== null);
+      built.set(pid, base);
+    }
+    return base;
+  };
+
   const members: SchemeMember[] = fileOrder.map((m) => {
-    const mt = takedown.members.get(m.id)!;
-    const at = takedown.renamers?.get(m.id);
     const entry = designs.get(m.id);
     const design = entry && !('error' in entry) ? entry : null;
     if (entry && 'error' in entry) {
@@ -771,41 +854,11 @@ function buildSchemeResult(
     } else if (design && !design.passes) {
       problems.push(planProblem('error', 'member-fails', `Member ${m.id}: ${design.failure ?? 'does not pass'}`, { elementId: m.id }));
     }
-    const member: SchemeMember = {
-      id: m.id,
-      mark: marks.get(m.id) ?? '',
-      kind: m.kind,
-      level: m.level,
-      shape: design ? design.shape : m.shape,
-      span_ft: mt.span_ft,
-      passes: design ? design.passes && !erroredIds.has(m.id) : false,
-      governing: design ? design.governing : null,
-      ratio: design ? design.ratio : null,
-      tributaryWidth_ft: mt.tributaryWidth_ft,
-      tributaryArea_ft2: mt.tributaryArea_ft2,
-      reducibleArea_ft2: mt.reducibleArea_ft2,
-      KLL: mt.KLL,
-      liveReductionFactor: mt.liveReductionFactor,
-      Lb_ft: design ? design.Lb_ft : null,
-      Cb: design ? design.Cb : null,
-      Mr_kipft: design ? design.Mr_kipft : null,
-      Mc_kipft: design ? design.Mc_kipft : null,
-      weight_plf: mt.selfWeight_plf,
-      reactions: { start: schemeReactionEnd(mt.reactions.start, mt.liveReductionFactor, at), end: schemeReactionEnd(mt.reactions.end, mt.liveReductionFactor, at) },
-      loads: reportedLoads(mt, loadsOf.get(m.id), at),
-      bracing: mt.bracing,
-      connections: 2 + mt.framingPoints_ft.length,
-      design,
-    };
-    if (sites) {
-      const status = sites.get(m.id);
-      member.studs = design?.composite ? design.composite.studs : null;
-      member.camber_in = design?.composite ? design.composite.camber_in : null;
-      member.percentComposite = design?.composite ? design.composite.percentComposite : null;
-      member.compositeNote = status && !status.composite ? status.reason : null;
-      member.designExtras = extrasOf.get(m.id) ?? null;
-    }
-    return member;
+    const mark = marks.get(m.id) ?? '';
+    const errored = erroredIds.has(m.id);
+    const placement = takedown.placements?.get(m.id);
+    if (placement) return placedMember(templateMember(placement, m), m, mark, errored, placement.at);
+    return schemeMember(m, takedown.members.get(m.id)!, design, mark, errored, loadsOf.get(m.id), extrasOf.get(m.id), sites?.get(m.id), sites !== null);
   });
 
   // One pass; each sum sees its members in file order, as summing each filtered list would.
