@@ -334,7 +334,8 @@ export function parsePlanFile(json: unknown, migrations: readonly PlanMigration[
     });
     return { plan: null, repairs: migrated.applied, problems };
   }
-  const repaired = repairPlan(parsed.data);
+  // The schema's output is a fresh value (every object and list is built by the parse), so it is repaired in place.
+  const repaired = repairPlan(parsed.data, { inPlace: true });
   const problems = [...repaired.problems, ...planLimitProblems(repaired.plan)];
   return { plan: repaired.plan, repairs: [...migrated.applied, ...repaired.repairs], problems };
 }

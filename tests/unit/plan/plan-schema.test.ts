@@ -84,6 +84,32 @@ describe('parsePlanFile', () => {
   });
 });
 
+  it('when repairs are made (repaired in place on the schema output), then the document read is not changed and a second read repairs again alike', () => {
+    const doc = fixture();
+    doc.version = 2;
+    doc.composite = { enabled: false };
+    delete doc.pointLoads[0].id;
+    doc.members[0].shape = ' w18x35 ';
+    doc.decks[0].polygon = [[0, 0], [0, 36], [0, 36], [60, 36], [60, 0], [0, 0]];
+    doc.columns[0].levels = [...doc.columns[0].levels, doc.columns[0].levels[0]];
+    const before = JSON.stringify(doc);
+    const first = parsePlanFile(doc);
+    expect(first.problems).toEqual([]);
+    expect(first.plan!.members[0].shape).toBe('W18X35');
+    expect(first.plan!.pointLoads[0].id).toBe('P1');
+    expect(first.plan!.decks[0].polygon).toEqual([[60, 0], [60, 36], [0, 36], [0, 0]]);
+    // The caller's document is as it was: nothing of it is shared with the plan, so nothing was repaired in it.
+    expect(JSON.stringify(doc)).toBe(before);
+    expect(first.plan!.members[0]).not.toBe(doc.members[0]);
+    expect(first.plan!.decks[0].polygon).not.toBe(doc.decks[0].polygon);
+    const second = parsePlanFile(doc);
+    expect(second.repairs).toEqual(first.repairs);
+    expect(second.plan).toEqual(first.plan);
+    // Defaults the schema fills in are not shared between reads (a repair or an edit of one plan never reaches another).
+    second.plan!.designBasis.deflectionLimits.live = 480;
+    expect(parsePlanFile(doc).plan!.designBasis.deflectionLimits.live).toBe(first.plan!.designBasis.deflectionLimits.live);
+  });
+
 describe('migratePlanDocument', () => {
   const steps: PlanMigration[] = [
     { from: 2, describe: 'rename title to name', migrate: (d) => ({ ...d, name: d.title, title: undefined }) },
