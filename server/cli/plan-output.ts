@@ -5,14 +5,10 @@ export type PlanOutputView = 'summary' | 'default' | 'detail';
 
 /** Per-member fields only `--detail` prints: the full sizing record and the load list (repeated text per member). */
 const DETAIL_ONLY = new Set<string>(['design', 'loads']);
-/** Fields the summary keeps per member when the engine reports them (composite beams add these). */
-const SUMMARY_OPTIONAL = ['studs', 'camber_in', 'percentComposite'] as const;
 
 function summaryMember(m: SchemeMember): Record<string, unknown> {
-  const out: Record<string, unknown> = { id: m.id, mark: m.mark, shape: m.shape, passes: m.passes, ratio: m.ratio, governing: m.governing };
-  for (const k of SUMMARY_OPTIONAL) if (k in m) out[k] = (m as unknown as Record<string, unknown>)[k];
-  out.reactions = m.reactions;
-  return out;
+  // Every member carries the composite fields in calc plan's output (null where not composite).
+  return { id: m.id, mark: m.mark, shape: m.shape, passes: m.passes, ratio: m.ratio, governing: m.governing, studs: m.studs ?? null, camber_in: m.camber_in ?? null, percentComposite: m.percentComposite ?? null, reactions: m.reactions };
 }
 
 /**
@@ -57,7 +53,17 @@ export function withCompositeFields(m: SchemeMember): SchemeMember {
   return { ...m, studs: m.studs ?? null, camber_in: m.camber_in ?? null, percentComposite: m.percentComposite ?? null };
 }
 
+/** A member as the default view prints it: composite fields present, sizing record and loads left out. One copy per member. */
 function defaultMember(m: SchemeMember): Record<string, unknown> {
+  if (hasKeysInOrder(m, ENGINE_KEYS)) {
+    return {
+      id: m.id, mark: m.mark, kind: m.kind, level: m.level, shape: m.shape, span_ft: m.span_ft, passes: m.passes, governing: m.governing, ratio: m.ratio,
+      tributaryWidth_ft: m.tributaryWidth_ft, tributaryArea_ft2: m.tributaryArea_ft2, reducibleArea_ft2: m.reducibleArea_ft2, KLL: m.KLL,
+      liveReductionFactor: m.liveReductionFactor, Lb_ft: m.Lb_ft, Cb: m.Cb, Mr_kipft: m.Mr_kipft, Mc_kipft: m.Mc_kipft, weight_plf: m.weight_plf,
+      reactions: m.reactions, bracing: m.bracing, connections: m.connections,
+      studs: null, camber_in: null, percentComposite: null,
+    };
+  }
   const notes = hasKeysInOrder(m, WITH_COMPOSITE_NOTES);
   if (notes || hasKeysInOrder(m, WITH_COMPOSITE)) {
     const out: Record<string, unknown> = {
@@ -65,7 +71,7 @@ function defaultMember(m: SchemeMember): Record<string, unknown> {
       tributaryWidth_ft: m.tributaryWidth_ft, tributaryArea_ft2: m.tributaryArea_ft2, reducibleArea_ft2: m.reducibleArea_ft2, KLL: m.KLL,
       liveReductionFactor: m.liveReductionFactor, Lb_ft: m.Lb_ft, Cb: m.Cb, Mr_kipft: m.Mr_kipft, Mc_kipft: m.Mc_kipft, weight_plf: m.weight_plf,
       reactions: m.reactions, bracing: m.bracing, connections: m.connections,
-      studs: m.studs, camber_in: m.camber_in, percentComposite: m.percentComposite,
+      studs: m.studs ?? null, camber_in: m.camber_in ?? null, percentComposite: m.percentComposite ?? null,
     };
     if (notes) {
       out.compositeNote = m.compositeNote;
@@ -73,18 +79,21 @@ function defaultMember(m: SchemeMember): Record<string, unknown> {
     }
     return out;
   }
+  const full = withCompositeFields(m) as unknown as Record<string, unknown>;
   const out: Record<string, unknown> = {};
-  for (const k of Object.keys(m)) if (!DETAIL_ONLY.has(k)) out[k] = (m as unknown as Record<string, unknown>)[k];
+  for (const k of Object.keys(full)) if (!DETAIL_ONLY.has(k)) out[k] = full[k];
   return out;
 }
 
 /**
  * The document `calc plan` prints. detail: everything the engine returns. default: every field but
  * each member's sizing record and load list (`--detail` adds them). summary: per member id, mark,
- * shape, passes, ratio, governing, studs/camber where present and reactions; columns, totals, problems.
+ * shape, passes, ratio, governing, studs/camber (null where not composite) and reactions; columns,
+ * totals, problems. Every view's members carry studs, camber_in and percentComposite
+ * (calc-interface.md "Additions"), each member copied once.
  */
 export function planOutput(result: SchemeResult & { repairs: string[] }, view: PlanOutputView): unknown {
-  if (view === 'detail') return result;
+  if (view === 'detail') return { ...result, members: result.members.map(withCompositeFields) };
   if (view === 'default') return { ...result, members: result.members.map(defaultMember) };
   return {
     name: result.name,

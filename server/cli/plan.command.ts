@@ -3,7 +3,7 @@ import { gravityLoadProblems } from '../../shared/schemas/plan-gravity-loads';
 import { columnInputProblems } from '../../shared/schemas/plan-columns';
 import { designScheme } from '../../shared/engine/index';
 import { CliInputError, EXIT_DESIGN_FAILS, EXIT_OK, errorOutcome, readJsonArgument, type CommandOutcome } from './cli-io';
-import { planOutput, withCompositeFields, type PlanOutputView } from './plan-output';
+import { planOutput, type PlanOutputView } from './plan-output';
 
 const PLAN_FLAGS = ['--group', '--summary', '--detail'];
 
@@ -31,7 +31,6 @@ export function runPlanCommand(args: string[]): CommandOutcome {
   const result = designScheme(plan, { groupIdentical });
   const allProblems = [...problems, ...result.problems];
   const ok = result.members.every((m) => m.passes) && !allProblems.some((p) => p.severity === 'error');
-  // calc-interface.md "Additions": studs, camber_in and percentComposite on every member (null where not composite).
-  const members = result.members.map(withCompositeFields);
-  return { json: planOutput({ ...result, members, problems: allProblems, repairs }, view), exitCode: ok ? EXIT_OK : EXIT_DESIGN_FAILS };
+  // calc-interface.md "Additions": planOutput writes studs, camber_in and percentComposite on every member (null where not composite).
+  return { json: planOutput({ ...result, problems: allProblems, repairs }, view), exitCode: ok ? EXIT_OK : EXIT_DESIGN_FAILS };
 }

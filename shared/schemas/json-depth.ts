@@ -21,8 +21,20 @@ export function jsonTooDeepAt(value: unknown, maxDepth = MAX_JSON_DEPTH): (strin
       for (let f: Frame | null = frame; f && f.key !== null; f = f.parent) path.unshift(f.key);
       return path.slice(0, 8);
     }
-    if (Array.isArray(v)) for (let i = v.length - 1; i >= 0; i--) stack.push({ value: v[i], depth: frame.depth + 1, key: i, parent: frame });
-    else for (const k of Object.keys(v)) stack.push({ value: (v as Record<string, unknown>)[k], depth: frame.depth + 1, key: k, parent: frame });
+    // Pushed last to first, so values are visited in document order. Only containers are visited (a number or string is never too deep), so a file's many coordinates cost no frame.
+    if (Array.isArray(v)) {
+      for (let i = v.length - 1; i >= 0; i--) {
+        const c: unknown = v[i];
+        if (c !== null && typeof c === 'object') stack.push({ value: c, depth: frame.depth + 1, key: i, parent: frame });
+      }
+    } else {
+      const keys = Object.keys(v);
+      for (let i = keys.length - 1; i >= 0; i--) {
+        const k = keys[i];
+        const c = (v as Record<string, unknown>)[k];
+        if (c !== null && typeof c === 'object') stack.push({ value: c, depth: frame.depth + 1, key: k, parent: frame });
+      }
+    }
   }
   return null;
 }
