@@ -28,7 +28,8 @@ export function runPlanCommand(args: string[]): CommandOutcome {
     return errorOutcome('invalid plan file', fatal.map((p) => p.message));
   }
   for (const r of repairs) process.stderr.write(`calc plan: repaired: ${r}\n`);
-  const result = designScheme(plan, { groupIdentical });
+  // Only --detail prints each member's load list, so only --detail has the engine build it.
+  const result = designScheme(plan, { groupIdentical, memberLoads: view === 'detail' });
   const allProblems = [...problems, ...result.problems];
   const ok = result.members.every((m) => m.passes) && !allProblems.some((p) => p.severity === 'error');
   // calc-interface.md "Additions": planOutput writes studs, camber_in and percentComposite on every member (null where not composite).

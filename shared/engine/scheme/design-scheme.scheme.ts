@@ -41,6 +41,12 @@ export interface SchemeOptions {
   changedIds?: string[];
   /** Design levels alike once and place the result on each (typical-levels.scheme; same figures). Default true. */
   typicalLevels?: boolean;
+  /**
+   * Default true. False: each member's `loads` list is left empty, for a caller that does not
+   * print it (calc plan without --detail), so 10,000 members' load lists with their ids made
+   * real are not built for nothing. Every other figure is the same.
+   */
+  memberLoads?: boolean;
 }
 
 export interface SchemeReactionEnd {
@@ -510,7 +516,7 @@ export function designScheme(plan: Plan, options: SchemeOptions = {}): SchemeRes
   }
   const geometry = planGeometry(plan, memo?.geometry ?? null);
   const core = designCore(plan, geometry, options, table, previous, false);
-  const result = buildSchemeResult(plan, core.takedown, core.designs, core.loadsOf, core.extrasOf, core.sites);
+  const result = buildSchemeResult(plan, core.takedown, core.designs, core.loadsOf, core.extrasOf, core.sites, options.memberLoads !== false);
   const next: SchemeMemo = { designs: table, geometry, templates: null };
   Object.defineProperty(result, CACHE, { value: next, enumerable: false });
   return result;
@@ -696,7 +702,7 @@ function designFromTemplates(
     byLevelFloorArea_ft2: deckApplied.byLevel,
     problems: [],
   };
-  const result = buildSchemeResult(plan, takedown, designs, new Map(), new Map(), wetWhole ? new Map() : null);
+  const result = buildSchemeResult(plan, takedown, designs, new Map(), new Map(), wetWhole ? new Map() : null, options.memberLoads !== false);
   const next: SchemeMemo = { designs: table, geometry: null, templates: geometries };
   Object.defineProperty(result, CACHE, { value: next, enumerable: false });
   return result;
@@ -731,7 +737,7 @@ function reportedLoads(mt: MemberTakedown, designed: MemberLoad[] | undefined): 
 /** A member's result from its takedown and design (ids as the takedown wrote them). */
 function schemeMember(
   m: Plan['members'][number], mt: MemberTakedown, design: MemberDesignResult | null, mark: string, errored: boolean,
-  designed: MemberLoad[] | undefined, extras: MemberDesignExtras | undefined, status: MemberCompositeStatus | undefined, composite: boolean,
+  designed: MemberLoad[] | undefined, extras: MemberDesignExtras | undefined, status: MemberCompositeStatus | undefined, composite: boolean, withLoads: boolean,
 ): SchemeMember {
   const member: SchemeMember = {
     id: m.id,
@@ -754,7 +760,7 @@ function schemeMember(
     Mc_kipft: design ? design.Mc_kipft : null,
     weight_plf: mt.selfWeight_plf,
     reactions: { start: schemeReactionEnd(mt.reactions.start, mt.liveReductionFactor), end: schemeReactionEnd(mt.reactions.end, mt.liveReductionFactor) },
-    loads: reportedLoads(mt, designed),
+    loads: withLoads ? reportedLoads(mt, designed) : [],
     bracing: mt.bracing,
     connections: 2 + mt.framingPoints_ft.length,
     design,
@@ -780,7 +786,7 @@ function placedEnd(r: SchemeReactionEnd, at: LevelRenamer): SchemeReactionEnd {
  * A template member's result placed on a level: the same result (parts without ids shared),
  * with the member's own id, mark and level and every id it reports made real.
  */
-function placedMember(base: SchemeMember, m: Plan['members'][number], mark: string, errored: boolean, at: LevelRenamer): SchemeMember {
+function placedMember(base: SchemeMember, m: Plan['members'][number], mark: string, errored: boolean, at: LevelRenamer, withLoads: boolean): SchemeMember {
   // Written out field by field in schemeMember's order (a spread of 30 fields was most of the
   // placement's time); the typical-level tests compare the text with a design made level by level.
   const member: SchemeMember = {
@@ -804,7 +810,7 @@ function placedMember(base: SchemeMember, m: Plan['members'][number], mark: stri
     Mc_kipft: base.Mc_kipft,
     weight_plf: base.weight_plf,
     reactions: { start: placedEnd(base.reactions.start, at), end: placedEnd(base.reactions.end, at) },
-    loads: at.loads(base.loads),
+    loads: withLoads ? at.loads(base.loads) : [],
     bracing: base.bracing,
     connections: base.connections,
     design: base.design,
@@ -821,7 +827,7 @@ function placedMember(base: SchemeMember, m: Plan['members'][number], mark: stri
 
 function buildSchemeResult(
   plan: Plan, takedown: SchemeTakedown, designs: Map<string, DesignEntry>, loadsOf: Map<string, MemberLoad[]>,
-  extrasOf: Map<string, MemberDesignExtras> = new Map(), sites: Map<string, MemberCompositeStatus> | null = null,
+  extrasOf: Map<string, MemberDesignExtras> = new Map(), sites: Map<string, MemberCompositeStatus> | null = null, withLoads = true,
 ): SchemeResult {
   const problems: PlanProblem[] = [...takedown.problems];
   const fileOrder = plan.members.filter((m) => takedown.members.has(m.id));
@@ -863,7 +869,7 @@ function buildSchemeResult(
     if (!base) {
       const { core, pid } = p;
       const entry = core.designs.get(pid);
-      base = schemeMember(m, core.takedown.members.get(pid)!, entry && !('error' in entry) ? entry : null, '', false, core.loadsOf.get(pid), core.extrasOf.get(pid), sites ? core.sites?.get(pid) : undefined, sites !== null);
+      base = schemeMember(m, core.takedown.members.get(pid)!, entry && !('error' in entry) ? entry : null, '', false, core.loadsOf.get(pid), core.extrasOf.get(pid), sites ? core.sites?.get(pid) : undefined, sites !== null, withLoads);
       built.set(pid, base);
     }
     return base;
@@ -880,8 +886,8 @@ function buildSchemeResult(
     const mark = marks.get(m.id) ?? '';
     const errored = erroredIds.has(m.id);
     const placement = takedown.placements?.get(m.id);
-    if (placement) return placedMember(templateMember(placement, m), m, mark, errored, placement.at);
-    return schemeMember(m, takedown.members.get(m.id)!, design, mark, errored, loadsOf.get(m.id), extrasOf.get(m.id), sites?.get(m.id), sites !== null);
+    if (placement) return placedMember(templateMember(placement, m), m, mark, errored, placement.at, withLoads);
+    return schemeMember(m, takedown.members.get(m.id)!, design, mark, errored, loadsOf.get(m.id), extrasOf.get(m.id), sites?.get(m.id), sites !== null, withLoads);
   });
 
   // One pass; each sum sees its members in file order, as summing each filtered list would.

@@ -64,6 +64,19 @@ describe('typical levels: designed once, placed on each level, identical to desi
     }
   });
 
+  it('when member loads are not asked for (calc plan without --detail), then every member\'s list is empty and all else is the same text, templated or not', () => {
+    const plan = regularBuildingPlan(4, 4, 3);
+    const full = designScheme(plan);
+    const withoutLoads = (r: ReturnType<typeof designScheme>) => JSON.stringify({ ...r, members: r.members.map((m) => ({ ...m, loads: [] })) });
+    for (const typicalLevels of [true, false]) {
+      const lean = designScheme(plan, { memberLoads: false, typicalLevels });
+      expect(designedFromLevelTemplates(lean)).toBe(typicalLevels);
+      expect(lean.members.every((m) => m.loads.length === 0)).toBe(true);
+      expect(JSON.stringify(lean)).toBe(withoutLoads(full));
+    }
+    expect(full.members.every((m) => m.loads.length > 0)).toBe(true);
+  });
+
   it('when a re-design passes the previous templated result, then it equals a fresh design', () => {
     const plan = regularBuildingPlan(4, 4, 3);
     const first = designScheme(plan);
