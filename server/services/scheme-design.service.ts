@@ -140,8 +140,8 @@ async function latestRun(db: Db, schemeId: string, transaction?: Transaction): P
  * worker hands back the result packed for storage and as JSON bytes, so the request thread
  * neither serialises nor packs it.
  */
-export function runEngine(plan: Plan): Promise<StoredDesign> {
-  return designPool().run(plan);
+export function runEngine(plan: Plan, schemeId?: string): Promise<StoredDesign> {
+  return designPool().run(plan, schemeId);
 }
 
 /** Stores a design result against a revision; returns the stored row. */
@@ -219,7 +219,7 @@ async function designAndStore(ctx: SchemeServiceContext, schemeId: string, trigg
   if (running) return running;
   const run = (async (): Promise<FreshRun> => {
     const plan = await readPlan(ctx.db, attrs);
-    const stored = await runEngine(plan);
+    const stored = await runEngine(plan, schemeId);
     const row = await storeDesignRun(ctx.db, {
       schemeId,
       revision: attrs.revision,

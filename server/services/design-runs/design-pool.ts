@@ -9,7 +9,8 @@ import type { StudyResult } from '../../../shared/engine/index';
 import type { Plan } from '../../../shared/schemas/plan.schema';
 import type { StudySpec } from '../../../shared/schemas/study.schema';
 import { AppError } from '../../errors/app-error';
-import type { DesignReply, StoredDesign } from './design.worker';
+import type { DesignReply, DesignRequest, StoredDesign } from './design.worker';
+import { KEPT_RESULTS } from './kept-results';
 
 export interface DesignBudget {
   /** Longest a design run may take, ms. */
@@ -34,6 +35,8 @@ export const DEFAULT_DESIGN_BUDGET: DesignBudget = {
 interface Task {
   id: number;
   plan: Plan;
+  /** The scheme designed (plain designs only): its worker may still hold its last result. */
+  key?: string;
   study?: StudySpec;
   resolve: (r: never) => void;
   reject: (e: unknown) => void;
@@ -43,6 +46,8 @@ interface Slot {
   worker: Worker;
   task: Task | null;
   timer: NodeJS.Timeout | null;
+  /** Schemes this worker designed last, newest first (as many as it keeps results of). */
+  recent: string[];
 }
 
 /** Set by the server bundle (server/launch.mjs) to the worker's bundle beside it. */
@@ -65,8 +70,8 @@ export class DesignPool {
    * its JSON bytes), both made in the worker. Rejects with an AppError (422 over budget or
    * engine failure, 503 queue full).
    */
-  run(plan: Plan): Promise<StoredDesign> {
-    return this.submit<StoredDesign>(plan);
+  run(plan: Plan, key?: string): Promise<StoredDesign> {
+    return this.submit<StoredDesign>(plan, undefined, key);
   }
 
   /** A bay study of the plan in a worker, under the same budget (each option is a whole design). */
@@ -74,12 +79,12 @@ export class DesignPool {
     return this.submit<StudyResult>(plan, study);
   }
 
-  private submit<T>(plan: Plan, study?: StudySpec): Promise<T> {
+  private submit<T>(plan: Plan, study?: StudySpec, key?: string): Promise<T> {
     if (this.queue.length >= this.budget.maxQueue) {
       return Promise.reject(new AppError(503, 'design_busy', 'The server is designing many plans right now; try again in a moment.', { headers: { 'Retry-After': '5' } }));
     }
     return new Promise<T>((resolve, reject) => {
-      this.queue.push({ id: this.nextId++, plan, ...(study ? { study } : {}), resolve: resolve as (r: never) => void, reject });
+      this.queue.push({ id: this.nextId++, plan, ...(study ? { study } : {}), ...(key !== undefined ? { key } : {}), resolve: resolve as (r: never) => void, reject });
       this.dispatch();
     });
   }
@@ -97,15 +102,19 @@ export class DesignPool {
 
   private dispatch(): void {
     while (this.queue.length > 0) {
-      let slot = this.slots.find((s) => s.task === null);
+      const next = this.queue[0];
+      // An idle worker that designed this scheme lately re-designs only what changed; else any idle one.
+      const idle = this.slots.filter((s) => s.task === null);
+      let slot = (next.key !== undefined ? idle.find((s) => s.recent.includes(next.key!)) : undefined) ?? idle[0];
       if (!slot && this.slots.length < this.budget.workers) slot = this.spawn();
       if (!slot) return;
       const task = this.queue.shift()!;
+      if (task.key !== undefined) slot.recent = [task.key, ...slot.recent.filter((k) => k !== task.key)].slice(0, KEPT_RESULTS);
       slot.task = task;
       slot.worker.ref();
       // Until the worker says it has started (a new worker loads the engine first): a start-up budget.
       this.arm(slot, WORKER_START_MS, () => new AppError(503, 'design_busy', 'The design worker did not start; try again in a moment.'));
-      slot.worker.postMessage({ id: task.id, plan: task.plan, ...(task.study ? { study: task.study } : {}) });
+      slot.worker.postMessage({ id: task.id, plan: task.plan, ...(task.study ? { study: task.study } : {}), ...(task.key !== undefined ? { key: task.key } : {}) } satisfies DesignRequest);
     }
   }
 
@@ -120,7 +129,7 @@ export class DesignPool {
       stdout: false,
       stderr: false,
     });
-    const slot: Slot = { worker, task: null, timer: null };
+    const slot: Slot = { worker, task: null, timer: null, recent: [] };
     worker.unref();
     worker.on('message', (reply: DesignReply) => {
       const task = slot.task;

@@ -1,0 +1,81 @@
+/**
+ * Design runs re-designed from the worker's last result of the scheme (server/services/design-runs):
+ * after an edit, only members whose design input changed are sized again, and the result is the
+ * same text, byte for byte, as a fresh design of the saved plan. The demo schemes are invented of our own.
+ */
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { DEMO_SCHEMES } from '../../server/db/seed-demo-building';
+import { designScheme } from '../../shared/engine/index';
+import { parsePlanFile, type Plan } from '../../shared/schemas/plan.schema';
+import { DesignPool, DEFAULT_DESIGN_BUDGET } from '../../server/services/design-runs/design-pool';
+import { KEPT_RESULTS } from '../../server/services/design-runs/kept-results';
+import { createTestApp, type TestApp } from './helpers/test-app';
+
+let t: TestApp;
+beforeAll(async () => {
+  t = await createTestApp();
+});
+afterAll(async () => {
+  expect(t.serverErrors).toEqual([]);
+  await t.close();
+});
+
+const VIEW_KEYS = ['revision', 'designedAt', 'stale'];
+const withoutViewKeys = (body: Record<string, unknown>) => Object.fromEntries(Object.entries(body).filter(([k]) => !VIEW_KEYS.includes(k)));
+const text = (bytes: Uint8Array) => Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength).toString('utf8');
+
+async function schemeIdOf(name: string): Promise<string> {
+  const row = await t.ctx.db.models.Scheme.findOne({ where: { name } });
+  return row!.getDataValue('id');
+}
+
+async function exported(schemeId: string): Promise<Plan> {
+  return parsePlanFile((await t.agents.engineer.get(`/api/schemes/${schemeId}/export`)).body).plan!;
+}
+
+describe('design runs from the last result of the scheme', () => {
+  it('when a scheme is edited and designed again, several times and between two schemes, then each stored result equals a fresh design of the saved plan', async () => {
+    const ids = [await schemeIdOf(DEMO_SCHEMES[0].name), await schemeIdOf(DEMO_SCHEMES[1].name)];
+    for (const id of ids) expect((await t.agents.engineer.post(`/api/schemes/${id}/design`)).status).toBe(200);
+    const edits: ((p: Plan) => void)[] = [
+      (p) => { p.members.find((m) => m.kind === 'beam' && m.shape === null)!.shape = 'W21X44'; },
+      (p) => { p.pointLoads.push({ id: 'bench-unit', level: p.levels[0].id, x_ft: p.columns[1].x_ft + 4, y_ft: p.columns[1].y_ft + 9, D_kip: 4, L_kip: 2 }); },
+      (p) => { p.zones[0].live_psf += 25; },
+    ];
+    for (const [k, edit] of edits.entries()) {
+      for (const id of ids) {
+        const plan = await exported(id);
+        edit(plan);
+        const revision = (await t.agents.engineer.get(`/api/schemes/${id}`)).body.scheme.revision as number;
+        const put = await t.agents.engineer.put(`/api/schemes/${id}/plan`).send({ revision, plan });
+        expect(put.status, `edit ${k} of scheme ${id}: ${JSON.stringify(put.body)}`).toBe(200);
+        expect((await t.agents.engineer.post(`/api/schemes/${id}/design`)).status).toBe(200);
+        const got = await t.agents.drafter.get(`/api/schemes/${id}/design`);
+        expect(got.body.stale).toBe(false);
+        expect(JSON.stringify(withoutViewKeys(got.body))).toBe(JSON.stringify(designScheme(await exported(id))));
+      }
+    }
+  }, 180_000);
+
+  it('when the pool designs a scheme twice, then the second run starts from the first (same bytes as fresh), and a worker keeps only its last few schemes', async () => {
+    const pool = new DesignPool({ ...DEFAULT_DESIGN_BUDGET, workers: 1 });
+    try {
+      const plan = await exported(await schemeIdOf(DEMO_SCHEMES[1].name));
+      const first = await pool.run(plan, 'scheme-a');
+      expect(first.incremental).toBe(false);
+      const edited = structuredClone(plan);
+      edited.members.find((m) => m.kind === 'beam' && m.shape === null)!.shape = 'W18X40';
+      const second = await pool.run(edited, 'scheme-a');
+      expect(second.incremental).toBe(true);
+      expect(text(second.json)).toBe(JSON.stringify(designScheme(edited)));
+      // No key (a bay study's plan, a one-off): never from a kept result.
+      expect((await pool.run(plan)).incremental).toBe(false);
+      // KEPT_RESULTS other schemes push scheme-a out.
+      for (let i = 0; i < KEPT_RESULTS; i++) expect((await pool.run(plan, `other-${i}`)).incremental).toBe(false);
+      expect((await pool.run(plan, 'scheme-a')).incremental).toBe(false);
+      expect((await pool.run(plan, `other-${KEPT_RESULTS - 1}`)).incremental).toBe(true);
+    } finally {
+      await pool.close();
+    }
+  }, 180_000);
+});
