@@ -57,23 +57,29 @@ describe('design runs from the last result of the scheme', () => {
     }
   }, 180_000);
 
-  it('when the pool designs a scheme twice, then the second run starts from the first (same bytes as fresh), and a worker keeps only its last few schemes', async () => {
+  it('when the pool designs a scheme twice, then the second run starts from the first; another scheme starts from the newest kept result; each gives the bytes of a fresh design', async () => {
     const pool = new DesignPool({ ...DEFAULT_DESIGN_BUDGET, workers: 1 });
     try {
       const plan = await exported(await schemeIdOf(DEMO_SCHEMES[1].name));
+      const other = await exported(await schemeIdOf(DEMO_SCHEMES[0].name));
       const first = await pool.run(plan, 'scheme-a');
-      expect(first.incremental).toBe(false);
+      expect(first.startedFrom).toBe(null);
+      expect(text(first.json)).toBe(JSON.stringify(designScheme(plan)));
       const edited = structuredClone(plan);
       edited.members.find((m) => m.kind === 'beam' && m.shape === null)!.shape = 'W18X40';
       const second = await pool.run(edited, 'scheme-a');
-      expect(second.incremental).toBe(true);
+      expect(second.startedFrom).toBe('this scheme');
       expect(text(second.json)).toBe(JSON.stringify(designScheme(edited)));
-      // No key (a bay study's plan, a one-off): never from a kept result.
-      expect((await pool.run(plan)).incremental).toBe(false);
-      // KEPT_RESULTS other schemes push scheme-a out.
-      for (let i = 0; i < KEPT_RESULTS; i++) expect((await pool.run(plan, `other-${i}`)).incremental).toBe(false);
-      expect((await pool.run(plan, 'scheme-a')).incremental).toBe(false);
-      expect((await pool.run(plan, `other-${KEPT_RESULTS - 1}`)).incremental).toBe(true);
+      // A different scheme (other framing, other ids) from scheme-a's result: only equal inputs are reused.
+      const b = await pool.run(other, 'scheme-b');
+      expect(b.startedFrom).toBe('another scheme');
+      expect(text(b.json)).toBe(JSON.stringify(designScheme(other)));
+      // KEPT_RESULTS other schemes push scheme-a out of the worker's keeping.
+      for (let i = 0; i < KEPT_RESULTS; i++) expect((await pool.run(other, `other-${i}`)).startedFrom).toBe('another scheme');
+      const again = await pool.run(plan, 'scheme-a');
+      expect(again.startedFrom).toBe('another scheme');
+      expect(text(again.json)).toBe(JSON.stringify(designScheme(plan)));
+      expect((await pool.run(other, `other-${KEPT_RESULTS - 1}`)).startedFrom).toBe('this scheme');
     } finally {
       await pool.close();
     }

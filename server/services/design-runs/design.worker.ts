@@ -24,8 +24,12 @@ const lastResults = new Map<string, SchemeResult>();
 export interface StoredDesign {
   packed: PackedResult;
   json: Uint8Array;
-  /** Whether the worker re-designed from its last result of the scheme (same result; for tests and the bench). */
-  incremental?: boolean;
+  /**
+   * Which kept result the worker re-designed from: its last of this scheme, else its newest of
+   * another (designs are reused only where a member's input is the same, so a copy or variant of
+   * a scheme gains too); null for a design from nothing. The result is the same either way.
+   */
+  startedFrom?: 'this scheme' | 'another scheme' | null;
 }
 
 export type DesignReply =
@@ -43,7 +47,8 @@ parentPort!.on('message', (msg: DesignRequest) => {
     if (msg.study) {
       reply = { id: msg.id, ok: true, result: runStudy(msg.plan, msg.study) };
     } else {
-      const previous = msg.key !== undefined ? lastResults.get(msg.key) : undefined;
+      const ofScheme = msg.key !== undefined ? lastResults.get(msg.key) : undefined;
+      const previous = ofScheme ?? [...lastResults.values()].pop();
       if (msg.key !== undefined) lastResults.delete(msg.key);
       const result = designScheme(msg.plan, previous ? { previous } : {});
       // Kept for the scheme's next run unless the plan is very large (its memo would crowd the worker's memory budget).
@@ -57,7 +62,7 @@ parentPort!.on('message', (msg: DesignRequest) => {
       const bytes = new Uint8Array(json.buffer, json.byteOffset, json.byteLength);
       const own = bytes.byteOffset === 0 && bytes.byteLength === bytes.buffer.byteLength ? bytes : bytes.slice();
       transfer.push(own.buffer as ArrayBuffer);
-      reply = { id: msg.id, ok: true, stored: { packed: packDesignResult(result, text), json: own, incremental: previous !== undefined } };
+      reply = { id: msg.id, ok: true, stored: { packed: packDesignResult(result, text), json: own, startedFrom: ofScheme ? 'this scheme' : previous ? 'another scheme' : null } };
     }
   } catch (err) {
     reply = { id: msg.id, ok: false, message: err instanceof Error ? err.message : String(err) };
