@@ -43,20 +43,68 @@ export function memberWantsComposite(plan: Plan, m: PlanMember): boolean {
   return plan.designBasis.composite?.enabled ?? false;
 }
 
-function decksAt(plan: Plan, level: string, p: Point): PlanDeck[] {
-  return plan.decks.filter((d) => d.level === level && d.polygon.length >= 3 && pointInPolygon(p, d.polygon));
+/** A polygon with its bounding box, widened past pointInPolygon's edge tolerance (1e-9 ft). */
+interface Region<T> { item: T; polygon: readonly Point[]; x0: number; y0: number; x1: number; y1: number }
+const BOX_MARGIN_FT = 1e-6;
+
+function regionOf<T>(item: T, polygon: readonly Point[]): Region<T> {
+  let x0 = Infinity, y0 = Infinity, x1 = -Infinity, y1 = -Infinity;
+  for (const [x, y] of polygon) {
+    if (x < x0) x0 = x;
+    if (x > x1) x1 = x;
+    if (y < y0) y0 = y;
+    if (y > y1) y1 = y;
+  }
+  return { item, polygon, x0: x0 - BOX_MARGIN_FT, y0: y0 - BOX_MARGIN_FT, x1: x1 + BOX_MARGIN_FT, y1: y1 + BOX_MARGIN_FT };
 }
 
-function inOpening(plan: Plan, level: string, p: Point): boolean {
-  return plan.openings.some((o) => o.level === level && o.polygon.length >= 3 && pointInPolygon(p, o.polygon));
+/** A point outside the widened box is outside the polygon and off its edges, so the box only skips work. */
+const within = <T>(r: Region<T>, p: Point): boolean => p[0] >= r.x0 && p[0] <= r.x1 && p[1] >= r.y0 && p[1] <= r.y1 && pointInPolygon(p, r.polygon);
+
+/**
+ * The decks with a slab build-up and the openings of each level, in file order, each with its
+ * box: what the slab tests below read, gathered once per plan instead of filtering every deck
+ * and opening of the plan at each of a member's sample points.
+ */
+class SlabIndex {
+  private readonly slabDecks = new Map<string, Region<PlanDeck>[]>();
+  private readonly openings = new Map<string, Region<null>[]>();
+
+  constructor(plan: Plan) {
+    for (const d of plan.decks) {
+      if (d.polygon.length < 3 || !d.slab) continue;
+      let list = this.slabDecks.get(d.level);
+      if (!list) this.slabDecks.set(d.level, (list = []));
+      list.push(regionOf(d, d.polygon));
+    }
+    for (const o of plan.openings) {
+      if (o.polygon.length < 3) continue;
+      let list = this.openings.get(o.level);
+      if (!list) this.openings.set(o.level, (list = []));
+      list.push(regionOf(null, o.polygon));
+    }
+  }
+
+  /** The first deck in file order with a slab build-up over p, or null. */
+  slabDeckAt(level: string, p: Point): PlanDeck | null {
+    for (const r of this.slabDecks.get(level) ?? []) if (within(r, p)) return r.item;
+    return null;
+  }
+
+  inOpening(level: string, p: Point): boolean {
+    for (const r of this.openings.get(level) ?? []) if (within(r, p)) return true;
+    return false;
+  }
+
+  /** Slab at p: a deck with a slab build-up and no opening. */
+  onSlab(level: string, p: Point): boolean {
+    return !this.inOpening(level, p) && this.slabDeckAt(level, p) !== null;
+  }
 }
 
 /** Distance from the midpoint along ±normal to the first point off the slab (no deck with a slab, or an opening), up to maxFt. */
-function slabEdgeDistanceFt(plan: Plan, level: string, mid: Point, normal: Point, maxFt: number): number | null {
-  const on = (t: number): boolean => {
-    const p: Point = [mid[0] + normal[0] * t, mid[1] + normal[1] * t];
-    return !inOpening(plan, level, p) && decksAt(plan, level, p).some((d) => d.slab);
-  };
+function slabEdgeDistanceFt(slabs: SlabIndex, level: string, mid: Point, normal: Point, maxFt: number): number | null {
+  const on = (t: number): boolean => slabs.onSlab(level, [mid[0] + normal[0] * t, mid[1] + normal[1] * t]);
   const step = 0.5;
   let inside = 0;
   for (let t = 0.05; t <= maxFt + step; t += step) {
@@ -97,6 +145,7 @@ function nextParallelFt(fm: FramingMember, others: readonly FramingMember[], mid
 /** Composite status of every member of the plan (composite with its site, or bare with the reason). */
 export function compositeSites(plan: Plan, topology: FramingTopology): Map<string, MemberCompositeStatus> {
   const out = new Map<string, MemberCompositeStatus>();
+  const slabs = new SlabIndex(plan);
   const byLevel = new Map<string, FramingMember[]>();
   for (const fm of topology.members.values()) {
     let l = byLevel.get(fm.level);
@@ -114,7 +163,7 @@ export function compositeSites(plan: Plan, topology: FramingTopology): Map<strin
     let deck: PlanDeck | null = null;
     for (const s of [1, -1] as const) {
       const p: Point = [mid[0] + normal[0] * 0.1 * s, mid[1] + normal[1] * 0.1 * s];
-      deck ??= decksAt(plan, fm.level, p).find((d) => d.slab) ?? null;
+      deck ??= slabs.slabDeckAt(fm.level, p);
     }
     if (!deck) {
       out.set(fm.id, { composite: false, reason: 'no deck with a slab build-up over the member: designed bare steel' });
@@ -126,7 +175,7 @@ export function compositeSites(plan: Plan, topology: FramingTopology): Map<strin
     const sides = ([1, -1] as const).map((s) => {
       const dir: Point = [normal[0] * s, normal[1] * s];
       const next = nextParallelFt(fm, byLevel.get(fm.level) ?? [], mid, normal, s);
-      const edge = slabEdgeDistanceFt(plan, fm.level, mid, dir, fm.span_ft / 8);
+      const edge = slabEdgeDistanceFt(slabs, fm.level, mid, dir, fm.span_ft / 8);
       return { toNextBeamIn: next === null ? null : next * IN_PER_FT, toEdgeIn: edge === null ? null : edge * IN_PER_FT };
     });
     const w = effectiveWidthI3_1a(spanIn, sides);
