@@ -36,10 +36,13 @@ function hardenSqlite(sequelize: Sequelize): void {
   const manager = (sequelize as unknown as { connectionManager: ConnectionManager }).connectionManager;
   const getConnection = manager.getConnection.bind(manager);
   const configured = new WeakSet<object>();
+  const columnInfo = new SqliteColumnInfoCache();
+  columnInfoCaches.set(sequelize, columnInfo);
   manager.getConnection = async (options?: unknown) => {
     const connection = await getConnection(options);
     if (!configured.has(connection)) {
       connection.configure('busyTimeout', SQLITE_BUSY_TIMEOUT_MS);
+      columnInfo.attach(connection as unknown as SqliteConnection);
       configured.add(connection);
     }
     return connection;
@@ -61,6 +64,78 @@ function hardenSqlite(sequelize: Sequelize): void {
     return run;
   };
   (sequelize as unknown as { transaction: typeof queued }).transaction = queued;
+}
+
+type SqliteCallback = (this: unknown, err: Error | null, rows?: unknown) => void;
+interface SqliteConnection {
+  all(sql: string, ...rest: unknown[]): unknown;
+  run(sql: string, ...rest: unknown[]): unknown;
+  exec(sql: string, ...rest: unknown[]): unknown;
+}
+
+const TABLE_INFO = /^PRAGMA table_info\(`([^`]+)`\)$/;
+const SCHEMA_CHANGE = /^\s*(CREATE|ALTER|DROP)\b/i;
+
+/**
+ * Sequelize's SQLite driver asks `PRAGMA table_info` of every table a SELECT reads, before
+ * every SELECT, to learn the column types it parses values by: a second statement for each
+ * read. The answer changes only when the schema does, so it is kept per database and served
+ * from memory (asynchronously, as the driver would answer), and forgotten whenever a statement
+ * that changes the schema (CREATE, ALTER, DROP: migrations) runs on any of its connections.
+ * PostgreSQL has no such step.
+ */
+const columnInfoCaches = new WeakMap<Sequelize, SqliteColumnInfoCache>();
+
+/** The column-type cache of a SQLite database (tests); undefined on PostgreSQL. */
+export function sqliteColumnInfoOf(sequelize: Sequelize): SqliteColumnInfoCache | undefined {
+  return columnInfoCaches.get(sequelize);
+}
+
+export class SqliteColumnInfoCache {
+  private readonly tables = new Map<string, unknown>();
+  /** Counts schema changes, so an answer read before one is not kept after it. */
+  private generation = 0;
+  /** Statements answered from memory (for tests). */
+  hits = 0;
+
+  attach(connection: SqliteConnection): void {
+    const all = connection.all.bind(connection);
+    const run = connection.run.bind(connection);
+    const exec = connection.exec.bind(connection);
+    const forgetOnSchemaChange = (sql: unknown) => {
+      if (typeof sql === 'string' && SCHEMA_CHANGE.test(sql)) {
+        this.tables.clear();
+        this.generation++;
+      }
+    };
+    connection.all = (sql: string, ...rest: unknown[]) => {
+      const table = typeof sql === 'string' ? TABLE_INFO.exec(sql)?.[1] : undefined;
+      const callback = rest[rest.length - 1];
+      if (table === undefined || typeof callback !== 'function' || rest.length !== 1) {
+        forgetOnSchemaChange(sql);
+        return all(sql, ...rest);
+      }
+      const known = this.tables.get(table);
+      if (known !== undefined) {
+        this.hits++;
+        process.nextTick(() => (callback as SqliteCallback).call(connection, null, known));
+        return connection;
+      }
+      const asked = this.generation;
+      return all(sql, (err: Error | null, rows?: unknown) => {
+        if (!err && Array.isArray(rows) && rows.length > 0 && asked === this.generation) this.tables.set(table, rows);
+        (callback as SqliteCallback).call(connection, err, rows);
+      });
+    };
+    connection.run = (sql: string, ...rest: unknown[]) => {
+      forgetOnSchemaChange(sql);
+      return run(sql, ...rest);
+    };
+    connection.exec = (sql: string, ...rest: unknown[]) => {
+      forgetOnSchemaChange(sql);
+      return exec(sql, ...rest);
+    };
+  }
 }
 
 /** Opens the database and defines the models. Does not run migrations. */

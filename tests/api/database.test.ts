@@ -3,7 +3,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { QueryTypes } from 'sequelize';
 import { afterAll, describe, expect, it } from 'vitest';
-import { connectDatabase } from '../../server/db/connection';
+import { connectDatabase, sqliteColumnInfoOf } from '../../server/db/connection';
 import { createMigrator, migrateToLatest, MIGRATION_NAMES } from '../../server/db/migrator';
 import { DEMO_USERS, seedDemo } from '../../server/db/seed-demo';
 import { createTestApp } from './helpers/test-app';
@@ -45,6 +45,30 @@ describe(`database (${testDialect}): migrations and demo seed`, () => {
       expect(tables.filter((n) => n !== 'schema_migrations')).toEqual([]);
       await migrateToLatest(db.sequelize);
       expect(await seedDemo(db)).toMatchObject({ firmId: expect.any(String) });
+    });
+  });
+
+  it.runIf(testDialect === 'sqlite')('when the same table is read again, then its column types come from memory, the rows read the same, and a schema change makes the next read ask SQLite again', async () => {
+    await withFreshDb(async (db) => {
+      await migrateToLatest(db.sequelize);
+      await seedDemo(db);
+      const cache = sqliteColumnInfoOf(db.sequelize)!;
+      expect(cache).toBeDefined();
+      const read = async () => (await db.models.User.findAll({ order: [['email', 'ASC']] })).map((u) => u.get({ plain: true }));
+      const first = await read();
+      const hits0 = cache.hits;
+      const second = await read();
+      expect(cache.hits).toBe(hits0 + 1);
+      expect(second).toEqual(first);
+      // Types still parse: dates come back as dates, as on the first read (driver asked SQLite then).
+      expect(second[0].createdAt).toBeInstanceOf(Date);
+      // A schema change (ALTER) forgets every table's types: the next read asks SQLite, the one after is from memory again.
+      await db.sequelize.query('ALTER TABLE users ADD COLUMN probe_note TEXT');
+      const hits1 = cache.hits;
+      expect(await read()).toEqual(first);
+      expect(cache.hits).toBe(hits1);
+      await read();
+      expect(cache.hits).toBe(hits1 + 1);
     });
   });
 
