@@ -99,8 +99,11 @@ test.describe('plan performance', () => {
       `[perf] plan pan/zoom, ${result.members} members: median ${result.median_ms} ms, p95 ${result.p95_ms} ms (target ≤ 16.7 ms: ${result.p95_ms <= 16.7 ? 'PASS' : 'FAIL'}), max ${result.max_ms} ms over ${result.frames} frames; ` +
         `full static draws ${result.staticDraws} (median ${result.staticDrawMedian_ms} ms, p95 ${result.staticDrawP95_ms} ms), gesture bitmap draws ${result.bitmapDraws} (p95 ${result.bitmapDrawP95_ms} ms)`,
     );
-    // During the gesture the static layer is drawn from its bitmap, not member by member.
+    // During the gesture the static layer is drawn from its bitmap, not member by member: in full
+    // only when a gesture has wholly ended (the scripted navigation is at most three: wheel and
+    // space-drags, space released, wheel and middle-button drag; one more if a design arrives).
     expect(result.bitmapDraws).toBeGreaterThan(result.staticDraws);
+    expect(result.staticDraws).toBeLessThanOrEqual(4);
     // Generous bounds: shared 2-core machine. The true figures are in the JSON.
     expect(result.frames).toBeGreaterThan(30);
     expect(result.median_ms).toBeLessThan(50);

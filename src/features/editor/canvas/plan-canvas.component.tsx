@@ -1,5 +1,5 @@
 import { planNamer } from '../../../../shared/drafting/element-names.drafting';
-import { useEffect, useRef, useState, useSyncExternalStore } from 'react';
+import { useEffect, useMemo, useRef, useState, useSyncExternalStore } from 'react';
 import { Layer, Shape, Stage } from 'react-konva';
 import type Konva from 'konva';
 import { useStore } from 'zustand';
@@ -8,7 +8,8 @@ import type { LiveDesign } from '../design/live-design';
 import type { ToolController } from '../tools/tool-controller';
 import { buildStaticGeometry, type StaticGeometry } from './static-geometry';
 import { drawStatic } from './draw-static';
-import { drawGestureBitmap, snapshotLayer, WHEEL_GESTURE_IDLE_MS, type GestureBitmap } from './gesture-bitmap';
+import { drawGestureBitmap, snapshotLayer, type GestureBitmap } from './gesture-bitmap';
+import { GestureLifecycle } from './gesture-lifecycle';
 import { drawOverlay } from './draw-overlay';
 import { readPlanTheme, type PlanTheme } from './plan-theme';
 import { scaleBar } from './view-transform';
@@ -47,18 +48,23 @@ export function PlanCanvas({ store, design, controller, label, renderUnderlay }:
   const [panning, setPanning] = useState(false);
   // The static layer's bitmap while a pan or zoom gesture runs (gesture-bitmap.ts).
   const gesture = useRef<GestureBitmap | null>(null);
-  const wheelIdle = useRef<ReturnType<typeof setTimeout> | null>(null);
-  const startGesture = () => {
-    if (gesture.current) return;
-    gesture.current = snapshotLayer(staticLayer.current?.getNativeCanvasElement(), store.getState().view);
-  };
-  const endGesture = () => {
-    if (wheelIdle.current) clearTimeout(wheelIdle.current);
-    wheelIdle.current = null;
-    if (!gesture.current) return;
-    gesture.current = null;
-    staticLayer.current?.batchDraw();
-  };
+  // From the first step of a pan or zoom to the end of its last part (gesture-lifecycle.ts).
+  const lifecycle = useMemo(
+    () =>
+      new GestureLifecycle({
+        step: () => {
+          if (!gesture.current) gesture.current = snapshotLayer(staticLayer.current?.getNativeCanvasElement(), store.getState().view);
+        },
+        end: () => {
+          if (!gesture.current) return;
+          gesture.current = null;
+          staticLayer.current?.batchDraw();
+        },
+        panning: () => controller.panning,
+      }),
+    [store, controller],
+  );
+  useEffect(() => () => lifecycle.dispose(), [lifecycle]);
   const tooltip = useTooltip(store, design, containerRef);
   // Labels on the canvas are written in the reader's units; the layers read this ref when drawn.
   const { system } = useUnits();
@@ -126,20 +132,13 @@ export function PlanCanvas({ store, design, controller, label, renderUnderlay }:
     if (!el) return;
     const onWheel = (e: WheelEvent) => {
       e.preventDefault();
-      startGesture();
-      if (wheelIdle.current) clearTimeout(wheelIdle.current);
-      wheelIdle.current = setTimeout(endGesture, WHEEL_GESTURE_IDLE_MS);
+      lifecycle.wheel();
       const r = el.getBoundingClientRect();
       controller.wheel({ sx: e.clientX - r.left, sy: e.clientY - r.top, deltaY: e.deltaY, deltaX: e.deltaX, ctrl: e.ctrlKey });
     };
     el.addEventListener('wheel', onWheel, { passive: false });
-    return () => {
-      el.removeEventListener('wheel', onWheel);
-      if (wheelIdle.current) clearTimeout(wheelIdle.current);
-    };
-    // startGesture/endGesture read refs only.
-    // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, [controller]);
+    return () => el.removeEventListener('wheel', onWheel);
+  }, [controller, lifecycle]);
 
   const local = (e: React.PointerEvent | React.MouseEvent) => {
     const r = containerRef.current!.getBoundingClientRect();
@@ -163,7 +162,7 @@ export function PlanCanvas({ store, design, controller, label, renderUnderlay }:
         containerRef.current?.focus();
         (e.target as Element).setPointerCapture?.(e.pointerId);
         controller.down(local(e));
-        if (controller.panning) startGesture();
+        lifecycle.pointerDown();
         setPanning(controller.panning);
       }}
       onPointerMove={(e) => {
@@ -172,12 +171,17 @@ export function PlanCanvas({ store, design, controller, label, renderUnderlay }:
       }}
       onPointerUp={(e) => {
         controller.up(local(e));
-        if (!controller.panning && !wheelIdle.current) endGesture();
+        lifecycle.pointerUp();
         setPanning(controller.panning);
       }}
       onPointerLeave={() => {
         controller.leave();
         tooltip.hide();
+      }}
+      // Space is released on the editor around the canvas (it clears the controller's hold there,
+      // after this handler); the gesture may end once it has.
+      onKeyUp={(e) => {
+        if (e.key === ' ') queueMicrotask(() => lifecycle.spaceUp());
       }}
       onDoubleClick={() => controller.doubleClick()}
       onContextMenu={(e) => e.preventDefault()}
