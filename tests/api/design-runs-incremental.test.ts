@@ -3,40 +3,33 @@
  * after an edit, only members whose design input changed are sized again, and the result is the
  * same text, byte for byte, as a fresh design of the saved plan. The demo schemes are invented of our own.
  */
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { DEMO_SCHEMES } from '../../server/db/seed-demo-building';
 import { designScheme } from '../../shared/engine/index';
 import { parsePlanFile, type Plan } from '../../shared/schemas/plan.schema';
 import { DesignPool, DEFAULT_DESIGN_BUDGET } from '../../server/services/design-runs/design-pool';
 import { KEPT_RESULTS } from '../../server/services/design-runs/kept-results';
-import { createTestApp, type TestApp } from './helpers/test-app';
+import { useTestApp } from './helpers/test-app';
 
-let t: TestApp;
-beforeAll(async () => {
-  t = await createTestApp();
-});
-afterAll(async () => {
-  expect(t.serverErrors).toEqual([]);
-  await t.close();
-});
+const server = useTestApp();
 
 const VIEW_KEYS = ['revision', 'designedAt', 'stale'];
 const withoutViewKeys = (body: Record<string, unknown>) => Object.fromEntries(Object.entries(body).filter(([k]) => !VIEW_KEYS.includes(k)));
 const text = (bytes: Uint8Array) => Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength).toString('utf8');
 
 async function schemeIdOf(name: string): Promise<string> {
-  const row = await t.ctx.db.models.Scheme.findOne({ where: { name } });
+  const row = await server.app.ctx.db.models.Scheme.findOne({ where: { name } });
   return row!.getDataValue('id');
 }
 
 async function exported(schemeId: string): Promise<Plan> {
-  return parsePlanFile((await t.agents.engineer.get(`/api/schemes/${schemeId}/export`)).body).plan!;
+  return parsePlanFile((await server.app.agents.engineer.get(`/api/schemes/${schemeId}/export`)).body).plan!;
 }
 
 describe('design runs from the last result of the scheme', () => {
   it('when a scheme is edited and designed again, several times and between two schemes, then each stored result equals a fresh design of the saved plan', async () => {
     const ids = [await schemeIdOf(DEMO_SCHEMES[0].name), await schemeIdOf(DEMO_SCHEMES[1].name)];
-    for (const id of ids) expect((await t.agents.engineer.post(`/api/schemes/${id}/design`)).status).toBe(200);
+    for (const id of ids) expect((await server.app.agents.engineer.post(`/api/schemes/${id}/design`)).status).toBe(200);
     const edits: ((p: Plan) => void)[] = [
       (p) => { p.members.find((m) => m.kind === 'beam' && m.shape === null)!.shape = 'W21X44'; },
       (p) => { p.pointLoads.push({ id: 'bench-unit', level: p.levels[0].id, x_ft: p.columns[1].x_ft + 4, y_ft: p.columns[1].y_ft + 9, D_kip: 4, L_kip: 2 }); },
@@ -46,11 +39,11 @@ describe('design runs from the last result of the scheme', () => {
       for (const id of ids) {
         const plan = await exported(id);
         edit(plan);
-        const revision = (await t.agents.engineer.get(`/api/schemes/${id}`)).body.scheme.revision as number;
-        const put = await t.agents.engineer.put(`/api/schemes/${id}/plan`).send({ revision, plan });
+        const revision = (await server.app.agents.engineer.get(`/api/schemes/${id}`)).body.scheme.revision as number;
+        const put = await server.app.agents.engineer.put(`/api/schemes/${id}/plan`).send({ revision, plan });
         expect(put.status, `edit ${k} of scheme ${id}: ${JSON.stringify(put.body)}`).toBe(200);
-        expect((await t.agents.engineer.post(`/api/schemes/${id}/design`)).status).toBe(200);
-        const got = await t.agents.drafter.get(`/api/schemes/${id}/design`);
+        expect((await server.app.agents.engineer.post(`/api/schemes/${id}/design`)).status).toBe(200);
+        const got = await server.app.agents.drafter.get(`/api/schemes/${id}/design`);
         expect(got.body.stale).toBe(false);
         expect(JSON.stringify(withoutViewKeys(got.body))).toBe(JSON.stringify(designScheme(await exported(id))));
       }

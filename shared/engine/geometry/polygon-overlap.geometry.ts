@@ -5,7 +5,7 @@
  */
 import type { Plan } from '../../schemas/plan.schema';
 import { planProblem, type PlanProblem } from '../../schemas/plan-problem.schema';
-import { polygonAreaFt2, type Point } from './polygon.geometry';
+import { polygonAreaFt2, polygonBox, type Point } from './polygon.geometry';
 
 /** Overlaps smaller than this (ft²) are rounding at a shared edge, not a second deck. */
 export const DECK_OVERLAP_TOLERANCE_FT2 = 0.01;
@@ -76,17 +76,6 @@ export function polygonOverlapAreaFt2(a: readonly Point[], b: readonly Point[]):
   return area;
 }
 
-type Box = [number, number, number, number];
-function boxOf(polygon: readonly Point[]): Box {
-  let x0 = Infinity, y0 = Infinity, x1 = -Infinity, y1 = -Infinity;
-  for (const [x, y] of polygon) {
-    if (x < x0) x0 = x;
-    if (x > x1) x1 = x;
-    if (y < y0) y0 = y;
-    if (y > y1) y1 = y;
-  }
-  return [x0, y0, x1, y1];
-}
 
 /**
  * Every pair of decks on one level whose areas overlap, as an error naming both (the later deck
@@ -96,7 +85,7 @@ function boxOf(polygon: readonly Point[]): Box {
 export function deckOverlapProblems(plan: Pick<Plan, 'decks'>): PlanProblem[] {
   const problems: PlanProblem[] = [];
   const entries = plan.decks
-    .map((deck, index) => ({ deck, index, box: boxOf(deck.polygon) }))
+    .map((deck, index) => ({ deck, index, box: polygonBox(deck.polygon) }))
     .filter((e) => e.deck.polygon.length >= 3)
     .sort((p, q) => p.box[0] - q.box[0] || p.index - q.index);
   // Sweep in x: only decks whose boxes meet are compared.

@@ -16,6 +16,18 @@ export function polygonAreaFt2(polygon: readonly Point[]): number {
   return Math.abs(signedAreaFt2(polygon));
 }
 
+/** The polygon's bounding box: [x0, y0, x1, y1]. */
+export function polygonBox(polygon: readonly Point[]): [number, number, number, number] {
+  let x0 = Infinity, y0 = Infinity, x1 = -Infinity, y1 = -Infinity;
+  for (const [x, y] of polygon) {
+    if (x < x0) x0 = x;
+    if (x > x1) x1 = x;
+    if (y < y0) y0 = y;
+    if (y > y1) y1 = y;
+  }
+  return [x0, y0, x1, y1];
+}
+
 /** Even-odd point-in-polygon; points on an edge count as inside (within tolFt). */
 export function pointInPolygon(p: Point, polygon: readonly Point[], tolFt = 1e-9): boolean {
   if (pointOnPolygonBoundary(p, polygon, tolFt)) return true;

@@ -11,7 +11,7 @@
  */
 import type { Plan, PlanDeck, PlanMember, PlanZone } from '../../schemas/plan.schema';
 import { effectiveWidthI3_1a } from '../design/aisc360/chapter-i/i3.equations';
-import { pointInPolygon, type Point } from '../geometry/polygon.geometry';
+import { pointInPolygon, polygonBox, type Point } from '../geometry/polygon.geometry';
 import type { FramingMember, FramingTopology } from '../geometry/framing-topology.geometry';
 import { slabWeight } from '../loads/slab-weight.loads';
 import type { Bracing, CompositeMemberInput } from '../sizing/member-design.types';
@@ -48,13 +48,7 @@ interface Region<T> { item: T; polygon: readonly Point[]; x0: number; y0: number
 const BOX_MARGIN_FT = 1e-6;
 
 function regionOf<T>(item: T, polygon: readonly Point[]): Region<T> {
-  let x0 = Infinity, y0 = Infinity, x1 = -Infinity, y1 = -Infinity;
-  for (const [x, y] of polygon) {
-    if (x < x0) x0 = x;
-    if (x > x1) x1 = x;
-    if (y < y0) y0 = y;
-    if (y > y1) y1 = y;
-  }
+  const [x0, y0, x1, y1] = polygonBox(polygon);
   return { item, polygon, x0: x0 - BOX_MARGIN_FT, y0: y0 - BOX_MARGIN_FT, x1: x1 + BOX_MARGIN_FT, y1: y1 + BOX_MARGIN_FT };
 }
 

@@ -1,3 +1,4 @@
+import { afterAll, beforeAll, expect } from 'vitest';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import type { AddressInfo } from 'node:net';
@@ -140,4 +141,27 @@ export function setCookies(res: request.Response): Record<string, string> {
   const out: Record<string, string> = {};
   for (const header of list) out[header.split('=')[0]] = header;
   return out;
+}
+
+/**
+ * A test app for the whole file: made before the first test, closed after the last, and the
+ * file fails if the server logged an error meanwhile. Read `.app` inside tests.
+ */
+export function useTestApp(overrides: Partial<Config> = {}): { readonly app: TestApp } {
+  const holder: { app: TestApp | null } = { app: null };
+  beforeAll(async () => {
+    holder.app = await createTestApp(overrides);
+  });
+  afterAll(async () => {
+    const app = holder.app;
+    if (!app) return;
+    expect(app.serverErrors).toEqual([]);
+    await app.close();
+  });
+  return {
+    get app(): TestApp {
+      if (!holder.app) throw new Error('useTestApp: the app is made in beforeAll; read it inside a test');
+      return holder.app;
+    },
+  };
 }
