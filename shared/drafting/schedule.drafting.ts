@@ -96,9 +96,14 @@ function reactionEnd(method: DesignMethod, r: SchemeMember['reactions']['start']
   return { ...base, ...factoredReaction(method, base), supportedBy: r.supportedBy ?? null };
 }
 
+// One collator for every comparison: `localeCompare` with options builds a new one per call,
+// which made sorting a few hundred marks take tens of milliseconds. Same order (ECMA-402:
+// localeCompare(b, locales, options) compares as new Intl.Collator(locales, options).compare).
+const MARK_COLLATOR = new Intl.Collator('en', { numeric: true, sensitivity: 'base' });
+
 /** "2G10" after "2G9": marks compare by prefix, then number. */
 export function compareMarks(a: string, b: string): number {
-  return a.localeCompare(b, 'en', { numeric: true, sensitivity: 'base' });
+  return MARK_COLLATOR.compare(a, b);
 }
 
 export function scheduleRows(design: Pick<SchemeResult, 'members' | 'method'>, plan: Pick<Plan, 'levels' | 'members' | 'grids'>): ScheduleRow[] {

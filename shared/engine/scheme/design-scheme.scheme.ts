@@ -848,7 +848,10 @@ function buildSchemeResult(
   // A locked mark carried by members that no longer match (a load or span changed since it was
   // set) is said, never silent: one mark is one fabricated piece.
   const levelName = new Map(plan.levels.map((l) => [l.id, l.name]));
-  for (const c of sharedMarkConflicts(markInputs, marks)) {
+  // assignMarks gives each design its own mark, so only a locked mark can be carried by members
+  // of different designs (tests/unit/plan/member-marks.test.ts holds that as a property).
+  const anyLocked = markInputs.some((m) => !!m.lockedMark);
+  for (const c of anyLocked ? sharedMarkConflicts(markInputs, marks) : []) {
     const designsText = c.designs.map((d) => `${d.shape ?? 'not sized'} spanning ${d.span_ft.toFixed(2)} ft`).join(', ');
     problems.push(
       planProblem('warning', 'mark-shared-by-different-designs', `Mark ${c.mark} on ${levelName.get(c.level) ?? c.level} is carried by ${c.memberIds.length} members of different designs (${designsText}); give one of them another mark.`, { elementId: c.memberIds[0] }),

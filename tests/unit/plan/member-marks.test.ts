@@ -77,6 +77,29 @@ describe('marks once issued stay put', () => {
     );
   });
 
+  it('property: with no locked mark, whatever marks were issued before (taken, clashing or malformed), no mark is carried by two designs on a level', () => {
+    const levels = [{ id: 'L2', name: 'Level 2' }, { id: 'L3', name: 'Level 3' }, { id: 'R', name: 'Roof', roof: true }];
+    const arbIssued = fc.oneof(fc.constant(null), fc.constantFrom('2B1', '2B2', '2G1', '3B1', 'RB1', '2B10', 'B1', '2b1', ''), fc.string({ maxLength: 4 }));
+    const arbMember = fc.record({
+      level: fc.constantFrom('L2', 'L3', 'R'),
+      kind: fc.constantFrom<'beam' | 'girder'>('beam', 'girder'),
+      shape: fc.constantFrom('W16X26', 'W18X35', null),
+      span_ft: fc.constantFrom(20, 25, 30, 30.004),
+      x: fc.integer({ min: 0, max: 90 }),
+      y: fc.integer({ min: 0, max: 90 }),
+      issuedMark: arbIssued,
+    });
+    fc.assert(
+      fc.property(fc.array(arbMember, { minLength: 1, maxLength: 30 }), (list) => {
+        const inputs: MarkInput[] = list.map((m, i) => ({ id: `m${i}`, level: m.level, kind: m.kind, shape: m.shape, span_ft: m.span_ft, midpoint: [m.x, m.y], lockedMark: null, issuedMark: m.issuedMark }));
+        const marks = assignMarks(inputs, levels);
+        expect(marks.size).toBe(inputs.length);
+        expect(sharedMarkConflicts(inputs, marks)).toEqual([]);
+      }),
+      { numRuns: 400 },
+    );
+  });
+
   it('when marks are stored on the plan, then locked marks are left alone and an unchanged plan is returned as is', () => {
     const plan = twoBayPlan();
     plan.members[0] = { ...plan.members[0], mark: 'X-1', markLocked: true };
