@@ -80,7 +80,16 @@ export function gridLocation(start: PlanPoint, end: PlanPoint, grids: readonly P
 
 /** Column mark from the grid intersection it stands on ("B2"), else null. */
 export function gridIntersectionLabel(xFt: number, yFt: number, grids: readonly PlanGrid[] | undefined): string | null {
-  const x = linesOf(grids ?? [], 'x').find((l) => Math.abs(l.offset - xFt) <= GRID_TOLERANCE_FT);
-  const y = linesOf(grids ?? [], 'y').find((l) => Math.abs(l.offset - yFt) <= GRID_TOLERANCE_FT);
-  return x && y ? `${y.label}${x.label}` : null;
+  return gridIntersectionLabeller(grids)(xFt, yFt);
+}
+
+/** gridIntersectionLabel for many points of one plan: the grid lines are sorted once. */
+export function gridIntersectionLabeller(grids: readonly PlanGrid[] | undefined): (xFt: number, yFt: number) => string | null {
+  const xs = linesOf(grids ?? [], 'x');
+  const ys = linesOf(grids ?? [], 'y');
+  return (xFt, yFt) => {
+    const x = xs.find((l) => Math.abs(l.offset - xFt) <= GRID_TOLERANCE_FT);
+    const y = ys.find((l) => Math.abs(l.offset - yFt) <= GRID_TOLERANCE_FT);
+    return x && y ? `${y.label}${x.label}` : null;
+  };
 }

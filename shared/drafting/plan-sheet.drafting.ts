@@ -8,7 +8,7 @@
  */
 import { memberSizeLabel } from './member-label.drafting';
 import type { Plan, PlanGrid } from '../schemas/plan.schema';
-import { formatFeetInches, gridIntersectionLabel } from './grid-location.drafting';
+import { formatFeetInches, gridIntersectionLabeller } from './grid-location.drafting';
 import { factoredReaction, type DesignMethod } from './schedule.drafting';
 import { LabelPlacer, rotatedBox, type LabelBox } from './label-placement.drafting';
 import {
@@ -325,13 +325,14 @@ export function buildPlanSheet(input: PlanSheetInput): PlanSheet {
 
     // Columns: a filled square at each, marked by its grid intersection.
     const columnAt = new Map((design.columns ?? []).map((c) => [c.id, c]));
+    const gridMark = gridIntersectionLabeller(plan.grids);
     for (const c of plan.columns) {
       if (!c.levels.includes(levelId)) continue;
       const cx = sx(c.x_ft);
       const cy = sy(c.y_ft);
       const half = 4.5;
       out.push({ type: 'rect', x: cx - half, y: cy - half, w: 2 * half, h: 2 * half, weight: LINE_WEIGHTS.column, fill: 'ink' });
-      const mark = gridIntersectionLabel(c.x_ft, c.y_ft, plan.grids) ?? c.id;
+      const mark = gridMark(c.x_ft, c.y_ft) ?? c.id;
       // Above-left: member reactions sit on the other sides of a support.
       out.push({ type: 'text', x: cx - half - 2, y: cy - half - 2, text: mark, size: 5.5, font: 'sans-bold', anchor: 'end', tone: 'soft' });
       // The column size below this level, and a splice note where a new tier starts at this floor.

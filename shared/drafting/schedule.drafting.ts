@@ -8,7 +8,7 @@
  * present at that end — with floor loads only that is 1.2D+1.6L (LRFD) or D+L (ASD); roof
  * live or snow add their combinations so a roof reaction is never understated.
  */
-import { loadCombinations, type LoadCase } from '../engine/index';
+import { sharedLoadCombinations, type LoadCase } from '../engine/index';
 import type { SchemeMember, SchemeResult } from '../engine/index';
 import type { Plan } from '../schemas/plan.schema';
 import { gridLocation } from './grid-location.drafting';
@@ -84,7 +84,7 @@ export function factoredReaction(
   const present = (Object.keys(values) as LoadCase[]).filter((c) => values[c] !== 0);
   if (present.length === 0) return { factored_kip: 0, combination: method === 'LRFD' ? '1.2D+1.6L' : 'D+L' };
   let best = { factored_kip: -Infinity, combination: '' };
-  for (const combo of loadCombinations(method, present)) {
+  for (const combo of sharedLoadCombinations(method, present)) {
     const total = combo.factors.D * values.D + combo.factors.L * values.L + combo.factors.Lr * values.Lr + combo.factors.S * values.S;
     if (total > best.factored_kip) best = { factored_kip: total, combination: combo.name };
   }

@@ -1,6 +1,6 @@
 // Public entry of the Baywright calculation engine (pure TypeScript). A plain list of exports.
 export type { LoadCase, LoadCombination, LoadFactors } from './loads/combinations';
-export { LOAD_CASES, loadCombinations } from './loads/combinations';
+export { LOAD_CASES, loadCombinations, sharedLoadCombinations } from './loads/combinations';
 export type { MemberLoad } from './analysis/member-load.types';
 export type {
   AlternativeShape, Bracing, CaseReactions, CheckName, DiagramSeries, MemberCheck, MemberDesignInput,

@@ -57,18 +57,34 @@ function dominated(a: LoadFactors, b: LoadFactors): boolean {
  */
 const cache = new Map<string, LoadCombination[]>();
 
-export function loadCombinations(
+/**
+ * The cached list itself, frozen (list, combinations and factors): for callers that only read
+ * it, many times (a reaction per member end on every redraw), without a copy each time.
+ */
+export function sharedLoadCombinations(
   method: 'LRFD' | 'ASD', casesPresent: Iterable<LoadCase>, options: CombinationOptions = {},
-): LoadCombination[] {
+): readonly Readonly<LoadCombination>[] {
   const present = new Set(casesPresent);
   let key = method === 'LRFD' ? (options.liveLoadFactorHalf ? 'LRFD½' : 'LRFD') : 'ASD';
   for (const c of LOAD_CASES) if (present.has(c)) key += `|${c}`;
   let list = cache.get(key);
   if (!list) {
     list = buildCombinations(method, present, options);
+    for (const c of list) {
+      Object.freeze(c.factors);
+      Object.freeze(c);
+    }
+    Object.freeze(list);
     cache.set(key, list);
   }
-  // Callers get their own copies so a cached list is never mutated.
+  return list;
+}
+
+export function loadCombinations(
+  method: 'LRFD' | 'ASD', casesPresent: Iterable<LoadCase>, options: CombinationOptions = {},
+): LoadCombination[] {
+  const list = sharedLoadCombinations(method, casesPresent, options);
+  // Callers get their own copies, free to change.
   const out: LoadCombination[] = [];
   for (const c of list) out.push({ name: c.name, clause: c.clause, factors: { D: c.factors.D, L: c.factors.L, Lr: c.factors.Lr, S: c.factors.S } });
   return out;

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { loadCombinations } from '../../../shared/engine/loads/combinations';
+import { loadCombinations, sharedLoadCombinations } from '../../../shared/engine/loads/combinations';
 
 const names = (...a: Parameters<typeof loadCombinations>) => loadCombinations(...a).map((c) => c.name);
 
@@ -36,5 +36,17 @@ describe('ASCE 7-16 load combinations', () => {
   it('when a returned combination is mutated, then the next call is unaffected (cache is private)', () => {
     loadCombinations('LRFD', ['D', 'L'])[1].factors.L = 99;
     expect(loadCombinations('LRFD', ['D', 'L'])[1].factors.L).toBe(1.6);
+  });
+
+  it('when the shared list is read, then it is the one cached list, frozen, equal to the copies callers get', () => {
+    const shared = sharedLoadCombinations('LRFD', ['D', 'L', 'S']);
+    expect(sharedLoadCombinations('LRFD', ['S', 'L', 'D'])).toBe(shared);
+    expect(shared).toEqual(loadCombinations('LRFD', ['D', 'L', 'S']));
+    expect(Object.isFrozen(shared) && shared.every((c) => Object.isFrozen(c) && Object.isFrozen(c.factors))).toBe(true);
+    expect(() => {
+      (shared[0].factors as { D: number }).D = 9;
+    }).toThrow(TypeError);
+    // ASCE 7-16 §2.3.1 (recalled): 1.2D + 1.6L + 0.5S is among the LRFD combinations of D, L and S.
+    expect(shared.some((c) => c.factors.D === 1.2 && c.factors.L === 1.6 && c.factors.S === 0.5)).toBe(true);
   });
 });

@@ -10,7 +10,7 @@ import type { LiveDesignSnapshot } from '../design/live-design';
 import { memberStatus, type MemberStatus } from '../members/member-status';
 import type { UtilisationBand } from '../../../lib/utilisation';
 import type { PlanPoint } from '../store/editor.types';
-import { gridIntersectionLabel } from '../../../../shared/drafting/grid-location.drafting';
+import { gridIntersectionLabeller } from '../../../../shared/drafting/grid-location.drafting';
 import { factoredReaction } from '../../../../shared/drafting/schedule.drafting';
 
 type SchemeReactionEnd = SchemeMember['reactions']['start'];
@@ -47,9 +47,10 @@ export interface StaticGeometry {
 function columnLabels(plan: Plan, levelId: string, design: LiveDesignSnapshot): { at: PlanPoint; text: string }[] {
   const designed = new Map((design.result?.columns ?? []).map((c) => [c.id, c]));
   const out: { at: PlanPoint; text: string }[] = [];
+  const gridMark = gridIntersectionLabeller(plan.grids);
   for (const c of plan.columns) {
     if (!c.levels.includes(levelId)) continue;
-    const mark = gridIntersectionLabel(c.x_ft, c.y_ft, plan.grids) ?? c.id;
+    const mark = gridMark(c.x_ft, c.y_ft) ?? c.id;
     const shape = designed.get(c.id)?.levels?.find((l) => l.level === levelId)?.shape;
     out.push({ at: [c.x_ft, c.y_ft], text: shape ? `${mark} ${shape}` : mark });
   }
