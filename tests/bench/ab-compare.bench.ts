@@ -5,7 +5,8 @@
  * two builds alternate (A B, B A, …) so drift falls on both alike, and the figure is the median of
  * the per-pair differences. Each side runs from an esbuild bundle in a fresh process:
  *   engine: designScheme of the building, CPU (user + system) of the process from just before to just after;
- *   calc:   `calc plan` of the building to /dev/null, CPU of the whole process (start-up included).
+ *   calc:   `calc plan` of the building to /dev/null, CPU of the whole process (start-up included);
+ *   re-design: plan.bench.ts's one-member change on a 622-member level, median of 20 edits after 40 (one process a run).
  * The base is checked out into a temporary git worktree and removed afterwards; both sides use
  * this checkout's node_modules (so a base with other package versions is measured with these).
  */
@@ -30,11 +31,31 @@ const dirty = git('status', '--porcelain', '--untracked-files=no') !== '';
 /** The harness both sides run: the same file, written into each tree (it imports that tree's engine). */
 const HARNESS = `import { regularBuildingPlan } from './plan.bench';
 import { designScheme } from '../../shared/engine/scheme/design-scheme.scheme';
-const building = regularBuildingPlan(24, 10, 8);
-const c0 = process.cpuUsage();
-const r = designScheme(building);
-const u = process.cpuUsage(c0);
-process.stdout.write(JSON.stringify({ cpuMs: (u.user + u.system) / 1000, members: r.members.length }) + '\\n');
+const cpu = () => { const u = process.cpuUsage(); return (u.user + u.system) / 1000; };
+if (process.argv[2] === 'redesign') {
+  // plan.bench.ts's one-member re-design on a 622-member level: median CPU of 20 edits after 40.
+  const level = regularBuildingPlan(1, 12, 10);
+  level.levels[0].roof = false;
+  level.decks = [{ id: 'd', level: level.levels[0].id, polygon: [[0, 0], [360, 0], [360, 300], [0, 300]], spanDirection: 'x', zone: 'office' }];
+  const first = designScheme(level);
+  const shapes = ['W18X40', 'W21X50', 'W16X31', 'W24X55', 'W18X35', 'W21X44'];
+  const edit = (i) => {
+    const changed = structuredClone(level);
+    const target = changed.members.find((m) => m.kind === 'beam' && m.id.endsWith('B' + ((i * 7) % 49) + '-' + ((i * 3) % 10)));
+    target.shape = shapes[i % shapes.length];
+    const c0 = cpu();
+    designScheme(changed, { previous: first, changedIds: [target.id] });
+    return cpu() - c0;
+  };
+  for (let i = 0; i < 40; i++) edit(i);
+  const runs = Array.from({ length: 20 }, (_, i) => edit(40 + i)).sort((a, b) => a - b);
+  process.stdout.write(JSON.stringify({ cpuMs: (runs[9] + runs[10]) / 2 }) + '\\n');
+} else {
+  const building = regularBuildingPlan(24, 10, 8);
+  const c0 = cpu();
+  const r = designScheme(building);
+  process.stdout.write(JSON.stringify({ cpuMs: cpu() - c0, members: r.members.length }) + '\\n');
+}
 `;
 
 const outRoot = join(root, 'node_modules', '.cache', 'baywright-ab');
@@ -67,8 +88,8 @@ async function bundle(tree: string, label: string): Promise<{ engine: string; ca
 }
 
 /** CPU ms of one fresh process running the engine harness (its own reading, after module loading). */
-function engineCpu(file: string): number {
-  const r = spawnSync(process.execPath, [file], { encoding: 'utf8', timeout: 120_000 });
+function engineCpu(file: string, mode: 'first' | 'redesign' = 'first'): number {
+  const r = spawnSync(process.execPath, [file, mode], { encoding: 'utf8', timeout: 120_000 });
   if (r.status !== 0) throw new Error(`bench:ab: ${file} failed: ${r.stderr.slice(0, 500)}`);
   return (JSON.parse(r.stdout.trim().split('\n').pop()!) as { cpuMs: number }).cpuMs;
 }
@@ -95,7 +116,8 @@ function compare(name: string, measure: (f: string) => number, a: string, b: str
   }
   const d = median(B.map((x, i) => x - A[i]));
   const ma = median(A);
-  return `  ${name.padEnd(34)} base ${ma.toFixed(0).padStart(5)} ms   this ${median(B).toFixed(0).padStart(5)} ms   change ${d >= 0 ? '+' : ''}${d.toFixed(0)} ms (${((100 * d) / ma).toFixed(1)} %, ratio ${((ma + d) / ma).toFixed(3)})`;
+  const digits = ma < 100 ? 1 : 0;
+  return `  ${name.padEnd(34)} base ${ma.toFixed(digits).padStart(6)} ms   this ${median(B).toFixed(digits).padStart(6)} ms   change ${d >= 0 ? '+' : ''}${d.toFixed(digits)} ms (${((100 * d) / ma).toFixed(1)} %, ratio ${((ma + d) / ma).toFixed(3)})`;
 }
 
 const worktree = join(work, 'base');
@@ -109,6 +131,7 @@ try {
     `bench:ab — base ${baseSha.slice(0, 10)} (${base}) against this checkout (${headSha.slice(0, 10)}${dirty ? ' with uncommitted changes' : ''}); ${PAIRS} alternating pairs, CPU ms, medians`,
     compare('engine first run, 24-level building', engineCpu, a.engine, b.engine),
     compare('calc plan, 24-level building', calcCpu, a.calc, b.calc),
+    compare('one-member re-design, 622 members', (f) => engineCpu(f, 'redesign'), a.engine, b.engine),
   ];
   process.stdout.write(`${lines.join('\n')}\n`);
 } finally {
