@@ -76,6 +76,13 @@ interface SqliteConnection {
 const TABLE_INFO = /^PRAGMA table_info\(`([^`]+)`\)$/;
 const SCHEMA_CHANGE = /^\s*(CREATE|ALTER|DROP)\b/i;
 
+const columnInfoCaches = new WeakMap<Sequelize, SqliteColumnInfoCache>();
+
+/** The column-type cache of a SQLite database (tests); undefined on PostgreSQL. */
+export function sqliteColumnInfoOf(sequelize: Sequelize): SqliteColumnInfoCache | undefined {
+  return columnInfoCaches.get(sequelize);
+}
+
 /**
  * Sequelize's SQLite driver asks `PRAGMA table_info` of every table a SELECT reads, before
  * every SELECT, to learn the column types it parses values by: a second statement for each
@@ -84,13 +91,6 @@ const SCHEMA_CHANGE = /^\s*(CREATE|ALTER|DROP)\b/i;
  * that changes the schema (CREATE, ALTER, DROP: migrations) runs on any of its connections.
  * PostgreSQL has no such step.
  */
-const columnInfoCaches = new WeakMap<Sequelize, SqliteColumnInfoCache>();
-
-/** The column-type cache of a SQLite database (tests); undefined on PostgreSQL. */
-export function sqliteColumnInfoOf(sequelize: Sequelize): SqliteColumnInfoCache | undefined {
-  return columnInfoCaches.get(sequelize);
-}
-
 export class SqliteColumnInfoCache {
   private readonly tables = new Map<string, unknown>();
   /** Counts schema changes, so an answer read before one is not kept after it. */
