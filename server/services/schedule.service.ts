@@ -12,7 +12,8 @@ import { fileSlug } from './schemes.service';
 // The member schedule of a scheme: its current design (designed first when stale) read
 // against the plan it was computed from.
 
-export const COMPOSITE_NOTE = 'Camber and studs: composite design is not in Baywright yet, so these columns stay empty.';
+/** Said above the schedule when no member of the design is composite (the camber and studs columns are then empty). */
+export const COMPOSITE_NOTE = 'Camber and studs: no member of this scheme is designed composite (composite design is off in its design basis, or no deck has a slab build-up), so these columns stay empty.';
 
 export interface ScheduleView {
   scheme: { id: string; projectId: string; name: string; revision: number };
@@ -22,7 +23,8 @@ export interface ScheduleView {
   rows: ScheduleRow[];
   problems: PlanProblem[];
   caution: string;
-  compositeNote: string;
+  /** COMPOSITE_NOTE when no member is composite, else null. */
+  compositeNote: string | null;
   columnSchedule: ColumnSchedule;
 }
 
@@ -56,7 +58,7 @@ function scheduleView({ scheme, plan, design }: SchemeDrafting): ScheduleView {
     rows: scheduleRows(design, plan),
     problems: design.problems ?? [],
     caution: design.caution ?? SCHEME_CAUTION,
-    compositeNote: COMPOSITE_NOTE,
+    compositeNote: design.members.some((m) => m.studs != null || m.camber_in != null) ? null : COMPOSITE_NOTE,
     columnSchedule: buildColumnSchedule(design, plan),
   };
 }

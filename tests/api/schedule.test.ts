@@ -114,5 +114,16 @@ describe('GET /api/schemes/:id/schedule', () => {
     expect(res.status).toBe(200);
     expect(res.body.levels.length).toBeGreaterThanOrEqual(3);
     for (const level of res.body.levels) expect(res.body.rows.some((r: { level: string }) => r.level === level.id)).toBe(true);
+    // Composite: studs in the rows, and no note that the camber and studs columns stay empty.
+    expect(res.body.rows.some((r: { studs: number | null }) => (r.studs ?? 0) > 0)).toBe(true);
+    expect(res.body.compositeNote).toBeNull();
+  });
+
+  it('when no member is composite (the bare-steel fixture), then the schedule says why camber and studs stay empty', async () => {
+    const { schemeId } = await makeScheme(t, { designed: true, name: 'Bare steel' });
+    const res = await t.agents.drafter.get(`/api/schemes/${schemeId}/schedule`);
+    expect(res.status).toBe(200);
+    expect(res.body.rows.every((r: { studs: number | null; camber_in: number | null }) => r.studs == null && r.camber_in == null)).toBe(true);
+    expect(res.body.compositeNote).toMatch(/^Camber and studs: no member of this scheme is designed composite/);
   });
 });

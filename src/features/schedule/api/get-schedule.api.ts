@@ -11,7 +11,7 @@ export interface ScheduleView {
   rows: ScheduleRow[];
   problems: { message: string; elementId?: string }[];
   caution: string;
-  compositeNote: string;
+  compositeNote: string | null;
   /** Absent from a server older than the column schedule. */
   columnSchedule?: ColumnSchedule;
 }

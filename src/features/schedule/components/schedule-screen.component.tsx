@@ -139,7 +139,7 @@ export function ScheduleScreen({ schemes, mayEditMarks, renderSheet }: ScheduleS
                 : 'D+L for floors (ASCE 7-16 §2.4.1; roof live and snow combinations where present, largest governs).'}
             </p>
           </div>
-          <p className="rounded-[3px] border border-notice/40 bg-notice-wash px-3 py-2 text-sm text-notice">{view.compositeNote}</p>
+          {view.compositeNote ? <p className="rounded-[3px] border border-notice/40 bg-notice-wash px-3 py-2 text-sm text-notice">{view.compositeNote}</p> : null}
           {view.problems.length > 0 ? (
             <FormAlert>
               {view.problems.length} design problem{view.problems.length === 1 ? '' : 's'}: {view.problems[0].message}
