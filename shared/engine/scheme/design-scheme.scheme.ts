@@ -842,6 +842,8 @@ function buildSchemeResult(
       midpoint: [(m.start[0] + m.end[0]) / 2, (m.start[1] + m.end[1]) / 2] as const,
       lockedMark: m.markLocked && m.mark ? m.mark : null,
       issuedMark: m.markLocked ? null : (m.mark ?? null),
+      studs: d && !('error' in d) && d.composite ? d.composite.studs : null,
+      camber_in: d && !('error' in d) && d.composite ? d.composite.camber_in : null,
     };
   });
   const marks = assignMarks(markInputs, plan.levels);
@@ -852,7 +854,9 @@ function buildSchemeResult(
   // of different designs (tests/unit/plan/member-marks.test.ts holds that as a property).
   const anyLocked = markInputs.some((m) => !!m.lockedMark);
   for (const c of anyLocked ? sharedMarkConflicts(markInputs, marks) : []) {
-    const designsText = c.designs.map((d) => `${d.shape ?? 'not sized'} spanning ${d.span_ft.toFixed(2)} ft`).join(', ');
+    const designsText = c.designs
+      .map((d) => `${d.shape ?? 'not sized'} spanning ${d.span_ft.toFixed(2)} ft${d.studs !== null ? ` with ${d.studs} studs` : ''}${d.camber_in ? `, camber ${d.camber_in} in` : ''}`)
+      .join(', ');
     problems.push(
       planProblem('warning', 'mark-shared-by-different-designs', `Mark ${c.mark} on ${levelName.get(c.level) ?? c.level} is carried by ${c.memberIds.length} members of different designs (${designsText}); give one of them another mark.`, { elementId: c.memberIds[0] }),
     );

@@ -1,7 +1,8 @@
 /**
  * Piece marks (Baywright's own rule, common practice in spirit): level prefix + kind letter
- * (G girder, B beam) + number. One mark per distinct design on a level (same kind, shape and
- * span to 0.01 ft).
+ * (G girder, B beam) + number. One mark per distinct design on a level (same kind, shape,
+ * span to 0.01 ft, and for a composite member the same stud count and camber: one mark is one
+ * fabricated piece).
  *
  * Marks once issued stay put: a member carries the mark it was last given (`issuedMark`, the
  * plan member's `mark` without `markLocked`), and keeps it while its design still matches the
@@ -25,6 +26,9 @@ export interface MarkInput {
   lockedMark: string | null;
   /** The mark issued to this member earlier and stored with it (kept while it still fits). */
   issuedMark?: string | null;
+  /** Composite members: studs on the member and camber (in); null or absent for bare steel. */
+  studs?: number | null;
+  camber_in?: number | null;
 }
 
 /**
@@ -45,7 +49,7 @@ export function levelMarkPrefix(level: Pick<PlanLevel, 'id'> & Partial<Pick<Plan
 
 type LevelLike = Pick<PlanLevel, 'id'> & Partial<Pick<PlanLevel, 'name' | 'roof'>>;
 
-const designKey = (m: MarkInput) => `${m.level}\u0000${m.kind}\u0000${m.shape ?? '?'}\u0000${m.span_ft.toFixed(2)}`;
+const designKey = (m: MarkInput) => `${m.level}\u0000${m.kind}\u0000${m.shape ?? '?'}\u0000${m.span_ft.toFixed(2)}\u0000${m.studs ?? ''}\u0000${m.camber_in ?? ''}`;
 const escapeRe = (s: string) => s.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
 
 export function assignMarks(members: readonly MarkInput[], levels: readonly LevelLike[]): Map<string, string> {
@@ -116,7 +120,7 @@ export interface SharedMarkConflict {
   level: string;
   memberIds: string[];
   /** "W18X35, span 30'-0"" per distinct design, in member order. */
-  designs: { shape: string | null; span_ft: number }[];
+  designs: { shape: string | null; span_ft: number; studs: number | null; camber_in: number | null }[];
 }
 
 /** Marks that one level's members of different sizes or spans carry (to warn about, never silently). */
@@ -142,7 +146,7 @@ export function sharedMarkConflicts(members: readonly MarkInput[], marks: Readon
       mark: marks.get(list[0].id)!,
       level: list[0].level,
       memberIds: list.map((m) => m.id),
-      designs: [...keys.values()].map((m) => ({ shape: m.shape, span_ft: m.span_ft })),
+      designs: [...keys.values()].map((m) => ({ shape: m.shape, span_ft: m.span_ft, studs: m.studs ?? null, camber_in: m.camber_in ?? null })),
     });
   }
   return out;

@@ -111,6 +111,32 @@ describe('marks once issued stay put', () => {
   });
 });
 
+describe('composite members: one mark is one fabricated piece', () => {
+  it('when beams of one size and span carry different stud counts or camber, then each gets its own mark; equal ones share it', () => {
+    // Common practice: studs and camber are shop work, so they tell pieces apart.
+    const inputs = [
+      beam('a1', 'W16X31', 5, 10, { studs: 14, camber_in: 0.75 }),
+      beam('a2', 'W16X31', 15, 10, { studs: 14, camber_in: 0.75 }),
+      beam('b1', 'W16X31', 25, 10, { studs: 18, camber_in: 0.75 }),
+      beam('c1', 'W16X31', 35, 10, { studs: 14, camber_in: 1 }),
+      beam('d1', 'W16X31', 45, 10),
+    ];
+    const marks = assignMarks(inputs, LEVELS);
+    expect(marks.get('a1')).toBe(marks.get('a2'));
+    expect(new Set(['a1', 'b1', 'c1', 'd1'].map((id) => marks.get(id))).size).toBe(4);
+    expect(sharedMarkConflicts(inputs, marks)).toEqual([]);
+  });
+
+  it('when a locked mark is carried by beams with different stud counts, then the conflict names both stud counts', () => {
+    const inputs = [beam('a1', 'W16X31', 5, 10, { studs: 14, lockedMark: '2B5' }), beam('b1', 'W16X31', 25, 10, { studs: 18, lockedMark: '2B5' })];
+    const [c] = sharedMarkConflicts(inputs, assignMarks(inputs, LEVELS));
+    expect(c.designs).toEqual([
+      { shape: 'W16X31', span_ft: 30, studs: 14, camber_in: null },
+      { shape: 'W16X31', span_ft: 30, studs: 18, camber_in: null },
+    ]);
+  });
+});
+
 describe('a mark shared by members of different designs is said', () => {
   it('when a locked mark is carried by members of two sizes, then the design warns naming the mark and the level', () => {
     const plan = twoBayPlan();

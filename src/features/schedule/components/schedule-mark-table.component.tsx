@@ -147,7 +147,7 @@ export function ScheduleMarkTable({ rows, levels, basis, units, mayEditMarks, on
                     <span className="font-mono font-semibold">{r.mark || dash}</span>
                     {mayEditMarks ? <MarkEditor row={r} onSave={onSaveMarks} saving={savingMark} /> : null}
                   </span>
-                  {r.split ? <span className="block text-xs text-danger">mark shared by another size: split</span> : null}
+                  {r.split ? <span className="block text-xs text-danger">mark shared by another design: split</span> : null}
                 </td>
                 <td className={`${td} whitespace-nowrap font-mono`}>{r.size ?? 'not sized'}</td>
                 <td className={`${td} font-mono`}>{r.quantity}</td>
