@@ -17,7 +17,8 @@ import type { MemberDesignInput, MemberDesignResult } from '../sizing/member-des
 import type { MemberLoad } from '../analysis/member-load.types';
 import type { TakedownLoad } from '../takedown/member-load.takedown';
 import { planGeometry, type PlanGeometry, type PlanGeometryMemo } from './plan-geometry-memo.scheme';
-import { lockedShapeWeightPlf, reducedLiveKip, runTakedown, type EndReaction, type MemberTakedown, type TakedownResult } from '../takedown/gravity-takedown.takedown';
+import { lockedShapeWeightPlf, reducedLiveKip, runTakedown, type EndReaction, type MemberTakedown, type TakedownResult, type TakedownReuse } from '../takedown/gravity-takedown.takedown';
+import { copyValue, sameValue } from '../plain-value';
 import type { Bracing } from '../takedown/member-bracing.takedown';
 import { assignMarks, sharedMarkConflicts, type MarkInput } from './member-marks.scheme';
 import { compositeMemberInput, compositeSites, planNeedsWetStage, wetStagePlan, type MemberCompositeStatus } from './composite-plan.scheme';
@@ -249,8 +250,18 @@ const ABSENT = -0.5e300;
  * and positions, rounded) plus the locked shape; it is hashed, and equal hashes are confirmed
  * number by number, so no two different inputs share a design.
  */
+/** One memoised design: its key (numbers and locked shape, with their hash) and the design. */
+interface TableEntry {
+  nums: Float64Array;
+  shape: string;
+  hash: number;
+  value: DesignEntry;
+}
+
 class DesignTable {
-  private readonly buckets = new Map<number, { nums: Float64Array; shape: string; value: DesignEntry }[]>();
+  private readonly buckets = new Map<number, TableEntry[]>();
+  /** Entries this table holds (so one adopted by several members is entered once). */
+  private readonly held = new Set<TableEntry>();
   size = 0;
 
   /** The key being looked up: scratch[0 … length) and the locked shape, with its hash. */
@@ -334,13 +345,8 @@ class DesignTable {
     DesignTable.hash = h;
   }
 
-  /** The design for the scratch key, if memoised. */
-  get(): DesignEntry | undefined {
-    return this.entry()?.value;
-  }
-
   /** The memo entry for the scratch key, if any. */
-  private entry(): { nums: Float64Array; shape: string; value: DesignEntry } | undefined {
+  entry(): TableEntry | undefined {
     const list = this.buckets.get(DesignTable.hash);
     if (!list) return undefined;
     const k = DesignTable.scratch;
@@ -358,23 +364,27 @@ class DesignTable {
    * The design for the scratch key from `from` (the previous run's memo), entered in this memo
    * as the same entry object (entries are never mutated), so a re-design copies no key.
    */
-  adoptFrom(from: DesignTable): DesignEntry | undefined {
+  adoptFrom(from: DesignTable): TableEntry | undefined {
     const e = from.entry();
-    if (!e) return undefined;
-    const list = this.buckets.get(DesignTable.hash);
+    if (e) this.adopt(e);
+    return e;
+  }
+
+  /** Enter an entry of an earlier memo (by its own key), once. */
+  adopt(e: TableEntry): void {
+    if (this.held.has(e)) return;
+    this.held.add(e);
+    const list = this.buckets.get(e.hash);
     if (list) list.push(e);
-    else this.buckets.set(DesignTable.hash, [e]);
+    else this.buckets.set(e.hash, [e]);
     this.size++;
-    return e.value;
   }
 
   /** Memoise a design under the scratch key. */
-  set(value: DesignEntry): void {
-    const entry = { nums: DesignTable.scratch.slice(0, DesignTable.length), shape: DesignTable.shape, value };
-    const list = this.buckets.get(DesignTable.hash);
-    if (list) list.push(entry);
-    else this.buckets.set(DesignTable.hash, [entry]);
-    this.size++;
+  set(value: DesignEntry): TableEntry {
+    const entry: TableEntry = { nums: DesignTable.scratch.slice(0, DesignTable.length), shape: DesignTable.shape, hash: DesignTable.hash, value };
+    this.adopt(entry);
+    return entry;
   }
 }
 
@@ -386,6 +396,10 @@ interface SchemeMemo {
   geometry: PlanGeometryMemo | null;
   /** Each level template's geometry, by template signature. */
   templates: Map<string, PlanGeometryMemo> | null;
+  /** The last pass of a design made at once, for reuse by the next (see LastPass). */
+  last: LastPass | null;
+  /** How many members this run took from the previous run's takedown (TakedownReuse). */
+  reusedMembers: number;
 }
 function cacheOf(result: SchemeResult | undefined): SchemeMemo | null {
   return (result as unknown as { [CACHE]?: SchemeMemo } | undefined)?.[CACHE] ?? null;
@@ -395,6 +409,11 @@ function cacheOf(result: SchemeResult | undefined): SchemeMemo | null {
 export function designedFromLevelTemplates(result: SchemeResult): boolean {
   const memo = cacheOf(result);
   return memo !== null && memo.templates !== null;
+}
+
+/** How many members a re-design took as they were from the previous run's takedown, for tests and benchmarks. */
+export function reusedMemberTakedowns(result: SchemeResult): number {
+  return cacheOf(result)?.reusedMembers ?? 0;
 }
 
 /** Group key: level, kind, span, bracing and the layout (case, kind, position) of the loads. */
@@ -451,29 +470,89 @@ class DesignPass {
     const extras = this.extrasFor(mt);
     if (extras) this.extrasOf.set(mt.id, extras);
     DesignTable.keyOf(this.plan, mt, shape, loads, extras ? `|${JSON.stringify(extras)}` : '');
-    let result = this.table.get();
-    if (!result && this.previous) result = this.table.adoptFrom(this.previous);
-    if (!result) {
+    let entry = this.table.entry();
+    if (!entry && this.previous) entry = this.table.adoptFrom(this.previous);
+    if (!entry) {
+      let result: DesignEntry;
       try {
         result = designMember({ ...memberDesignInput(this.plan, mt, this.forced.get(mt.id) ?? null, loads), ...(extras ?? {}) });
       } catch (e) {
         if (!(e instanceof MemberInputError)) throw e;
         result = { error: [e.message, ...e.problems] };
       }
-      this.table.set(result);
+      entry = this.table.set(result);
     }
+    this.entries.set(mt.id, entry);
+    const result = entry.value;
     this.designs.set(mt.id, result);
     return 'error' in result ? lockedShapeWeightPlf(mt.member) : result.weight_plf;
+  };
+
+  /** Each member's memo entry (for the next re-design's reuse). */
+  readonly entries = new Map<string, TableEntry>();
+  /** Members whose earlier takedown and design were used (TakedownReuse). */
+  readonly reusedIds = new Set<string>();
+
+  /** The takedown's reuse hook: the member's earlier design, loads and extras, as they were. */
+  private readonly reused = (mt: MemberTakedown): void => {
+    const last = this.last!;
+    const entry = last.entries.get(mt.id)!;
+    this.table.adopt(entry);
+    this.entries.set(mt.id, entry);
+    this.designs.set(mt.id, entry.value);
+    const loads = last.loadsOf.get(mt.id);
+    if (loads) this.loadsOf.set(mt.id, loads);
+    this.reusedIds.add(mt.id);
   };
 
   /** The trace of the last run (when traced). */
   trace: TakedownTrace | null = null;
 
+  /** An earlier pass this one may reuse members of (see LastPass; only for a plan without wet stage or grouping). */
+  last: LastPass | null = null;
+
   run(geometry: PlanGeometry, traced = false): TakedownResult {
     this.trace = traced ? emptyTakedownTrace() : null;
-    return runTakedown(this.plan, { topology: geometry.topology, deckLoads: geometry.deckLoads, selfWeight: this.selfWeight, ...(this.trace ? { trace: this.trace } : {}) });
+    const last = this.last;
+    const reuse: TakedownReuse | undefined = last && !traced
+      ? {
+          previous: last.takedown,
+          unchanged: (fm) => {
+            const before = last.members.get(fm.id);
+            return before !== undefined && sameValue(fm.member, before);
+          },
+          reused: this.reused,
+        }
+      : undefined;
+    return runTakedown(this.plan, {
+      topology: geometry.topology,
+      deckLoads: geometry.deckLoads,
+      selfWeight: this.selfWeight,
+      ...(this.trace ? { trace: this.trace } : {}),
+      ...(reuse ? { reuse } : {}),
+    });
   }
 }
+
+/**
+ * What a design pass leaves for the next re-design of the same plan to reuse: the takedown,
+ * each member's memo entry and design loads, and value copies of what the takedown read
+ * beyond the framing geometry and the placed loads (each member, the design basis).
+ * Kept only for a plan without a wet stage (its extras come from a second takedown) or
+ * grouping (a forced size depends on other members).
+ */
+interface LastPass {
+  geometry: PlanGeometryMemo;
+  takedown: TakedownResult;
+  entries: Map<string, TableEntry>;
+  loadsOf: Map<string, MemberLoad[]>;
+  members: Map<string, Plan['members'][number]>;
+  /** Copy of passRest(plan) when taken down. */
+  rest: unknown;
+}
+
+/** What a takedown reads of a plan beyond its framing geometry, its members and the loads placed on them (compared in the takedown). */
+const passRest = (plan: Plan) => ({ designBasis: plan.designBasis });
 
 /**
  * What buildSchemeResult reads of a takedown. From level templates, `members` holds each
@@ -502,6 +581,8 @@ interface DesignCore {
   sites: Map<string, MemberCompositeStatus> | null;
   /** The final takedown's trace (when traced). */
   trace: TakedownTrace | null;
+  /** The pass a later re-design may reuse members of (no wet stage, no grouping, not traced), else null. */
+  reusable: DesignPass | null;
 }
 
 export function designScheme(plan: Plan, options: SchemeOptions = {}): SchemeResult {
@@ -515,15 +596,29 @@ export function designScheme(plan: Plan, options: SchemeOptions = {}): SchemeRes
     if (fromTemplates) return fromTemplates;
   }
   const geometry = planGeometry(plan, memo?.geometry ?? null);
-  const core = designCore(plan, geometry, options, table, previous, false);
+  // The last pass is reused only on the same framing geometry with the same loads and basis.
+  const lastPass = memo?.last && memo.last.geometry === geometry && sameValue(passRest(plan), memo.last.rest) ? memo.last : null;
+  const core = designCore(plan, geometry, options, table, previous, false, lastPass);
   const result = buildSchemeResult(plan, core.takedown, core.designs, core.loadsOf, core.extrasOf, core.sites, options.memberLoads !== false);
-  const next: SchemeMemo = { designs: table, geometry, templates: null };
+  const next: SchemeMemo = { designs: table, geometry, templates: null, last: core.reusable ? nextLastPass(plan, geometry, core.reusable, core.takedown, lastPass) : null, reusedMembers: core.reusable?.reusedIds.size ?? 0 };
   Object.defineProperty(result, CACHE, { value: next, enumerable: false });
   return result;
 }
 
 /** The takedown of a plan with each member sized as it is reached (wet stage and grouping included). */
-function designCore(plan: Plan, geometry: PlanGeometry, options: SchemeOptions, table: DesignTable, previous: DesignTable | null, traced: boolean): DesignCore {
+/** The LastPass of a pass just run: copies made only of members worked out again, and of the rest if it changed. */
+function nextLastPass(plan: Plan, geometry: PlanGeometryMemo, pass: DesignPass, takedown: TakedownResult, before: LastPass | null): LastPass {
+  const members = new Map<string, Plan['members'][number]>();
+  for (const mt of takedown.members.values()) {
+    const kept = pass.reusedIds.has(mt.id) ? before?.members.get(mt.id) : undefined;
+    members.set(mt.id, kept ?? copyValue(mt.member));
+  }
+  return { geometry, takedown, entries: pass.entries, loadsOf: pass.loadsOf, members, rest: before ? before.rest : copyValue(passRest(plan)) };
+}
+
+function designCore(
+  plan: Plan, geometry: PlanGeometry, options: SchemeOptions, table: DesignTable, previous: DesignTable | null, traced: boolean, last: LastPass | null = null,
+): DesignCore {
   const forced = new Map<string, string>();
   // Composite plans (and the superimposed-dead total deflection setting) need the wet-concrete
   // stage: a takedown of the wet slab and construction live on the same framing. Its girders
@@ -535,6 +630,8 @@ function designCore(plan: Plan, geometry: PlanGeometry, options: SchemeOptions, 
   const wetTakedown = (weight: (mt: MemberTakedown) => number) => runTakedown(wetPlan!, { topology: geometry.topology, selfWeight: weight });
   if (wetPlan) wet = { sites: sites!, takedown: wetTakedown((mt) => lockedShapeWeightPlf(mt.member)) };
   let pass = new DesignPass(plan, table, previous, forced, wet);
+  const reusable = !wetPlan && !options.groupIdentical && !traced;
+  if (reusable) pass.last = last;
   let takedown = pass.run(geometry, traced);
   if (wetPlan) {
     const first = pass.designs;
@@ -580,7 +677,7 @@ function designCore(plan: Plan, geometry: PlanGeometry, options: SchemeOptions, 
       takedown = pass.run(geometry, traced);
     }
   }
-  return { takedown, designs: pass.designs, loadsOf: pass.loadsOf, extrasOf: pass.extrasOf, sites, trace: pass.trace };
+  return { takedown, designs: pass.designs, loadsOf: pass.loadsOf, extrasOf: pass.extrasOf, sites, trace: pass.trace, reusable: reusable ? pass : null };
 }
 
 /**
@@ -703,7 +800,7 @@ function designFromTemplates(
     problems: [],
   };
   const result = buildSchemeResult(plan, takedown, designs, new Map(), new Map(), wetWhole ? new Map() : null, options.memberLoads !== false);
-  const next: SchemeMemo = { designs: table, geometry: null, templates: geometries };
+  const next: SchemeMemo = { designs: table, geometry: null, templates: geometries, last: null, reusedMembers: 0 };
   Object.defineProperty(result, CACHE, { value: next, enumerable: false });
   return result;
 }

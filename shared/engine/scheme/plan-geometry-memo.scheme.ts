@@ -9,6 +9,7 @@
 import type { Plan } from '../../schemas/plan.schema';
 import { buildFramingTopology, type FramingMember, type FramingTopology } from '../geometry/framing-topology.geometry';
 import { prepareDeckLoads, type PreparedDeckLoads } from '../takedown/gravity-takedown.takedown';
+import { sameValue } from '../plain-value';
 
 interface GeometrySignature {
   memberIds: string[];
@@ -60,26 +61,6 @@ function signatureOf(plan: Plan): GeometrySignature {
     memberEnds[4 * i + 3] = m.end[1];
   }
   return { memberIds, memberLevels, memberKinds, memberEnds, rest: structuredClone(restOf(plan)) };
-}
-
-/** Deep equality of plain data; numbers by Object.is (so 0 and −0 differ, as arithmetic may). */
-function sameValue(a: unknown, b: unknown): boolean {
-  if (Object.is(a, b)) return true;
-  if (typeof a !== 'object' || typeof b !== 'object' || a === null || b === null) return false;
-  if (Array.isArray(a)) {
-    if (!Array.isArray(b) || a.length !== b.length) return false;
-    for (let i = 0; i < a.length; i++) if (!sameValue(a[i], b[i])) return false;
-    return true;
-  }
-  if (Array.isArray(b)) return false;
-  const ka = Object.keys(a);
-  const kb = Object.keys(b);
-  if (ka.length !== kb.length) return false;
-  for (const k of ka) {
-    if (!Object.prototype.hasOwnProperty.call(b, k)) return false;
-    if (!sameValue((a as Record<string, unknown>)[k], (b as Record<string, unknown>)[k])) return false;
-  }
-  return true;
 }
 
 function geometryUnchanged(memo: PlanGeometryMemo, plan: Plan): boolean {

@@ -21,6 +21,7 @@ import { LOAD_CASES, mergeContiguousLoads, type AreaLoad, type LoadCase, type Ta
 import { lastResultant, resultantKip, simpleSpanReactions } from './simple-span-statics.takedown';
 import { deriveMemberBracing, type Bracing } from './member-bracing.takedown';
 import { stackColumns, type ColumnReceipt, type ColumnTakedown } from './column-stack.takedown';
+import { sameValue } from '../plain-value';
 
 /** Unfactored reaction at one end, per case, before live load reduction, plus the area passed on. */
 export interface EndReaction {
@@ -77,6 +78,43 @@ export interface TakedownOptions {
   deckLoads?: PreparedDeckLoads;
   /** Filled with what the whole-plan sums are made of, in the order they are made (see TakedownTrace). */
   trace?: TakedownTrace;
+  /** Reuse of an earlier takedown of this plan's framing (see TakedownReuse). Ignored with `trace`. */
+  reuse?: TakedownReuse;
+}
+
+/**
+ * An earlier takedown of the same framing (the same topology object, with the same deck
+ * loads), which the caller vouches was made with the same design basis. A member's takedown
+ * is a function of its own plan member, its deck strips, the point and line loads placed on
+ * it (compared by value with what was placed on it before), the reactions of the members it
+ * carries, and its self weight (a function of the same inputs, through the selfWeight hook).
+ * So a member whose own inputs are unchanged and which carries only such members (carried
+ * members are taken down first) comes out as before: its earlier takedown is used and
+ * `selfWeight` is not called for it; `reused` is called instead. Every other member is
+ * taken down as always.
+ */
+export interface TakedownReuse {
+  previous: TakedownResult;
+  /** Whether this member's own plan member is unchanged since `previous` (compared by value). */
+  unchanged: (fm: FramingMember) => boolean;
+  /** Called for each member whose earlier takedown is used, in topological order. */
+  reused: (mt: MemberTakedown) => void;
+}
+
+/** The members a takedown must work out again: changed ones and everything that carries them. */
+function membersToRedo(topology: FramingTopology, reuse: TakedownReuse, placed: Map<string, PlacedParts>): Set<string> {
+  const redo = new Set<string>();
+  const placedBefore = reuse.previous.placed;
+  for (const id of topology.order) {
+    const fm = topology.members.get(id)!;
+    if (redo.has(id) || !reuse.previous.members.has(id) || !reuse.unchanged(fm) || !sameValue(placed.get(id), placedBefore.get(id))) {
+      redo.add(id);
+      // Supporters come later in the order, so marking them here reaches them in time.
+      if (fm.supports.start.kind === 'member') redo.add(fm.supports.start.id);
+      if (fm.supports.end.kind === 'member') redo.add(fm.supports.end.id);
+    }
+  }
+  return redo;
 }
 
 /**
@@ -140,6 +178,14 @@ export interface TakedownResult {
   floorArea_ft2: number;
   byLevelFloorArea_ft2: Map<string, number>;
   problems: PlanProblem[];
+  /** The point- and line-load parts each member received (members that received any), for TakedownReuse. */
+  placed: Map<string, PlacedParts>;
+}
+
+/** What the point and line loads placed on one member, in placing order. */
+interface PlacedParts {
+  loads: TakedownLoad[];
+  areas: AreaLoad[];
 }
 
 const emptyReaction = (supportedBy: string | null): EndReaction => ({
@@ -345,8 +391,21 @@ export function runTakedown(plan: Plan, options: TakedownOptions = {}): Takedown
   const llrOn = plan.designBasis.liveLoadReduction;
   const sums = new EndSums();
   const selfWeightLoads = new Map<number, TakedownLoad>();
+  const placed = new Map<string, PlacedParts>();
+  for (const [id, strip] of prepared.strips) {
+    const g = gathered.get(id)!;
+    if (g.loads.length > strip.loads.length || g.areas.length > strip.areas.length) placed.set(id, { loads: g.loads.slice(strip.loads.length), areas: g.areas.slice(strip.areas.length) });
+  }
+  const reuse = !trace && options.reuse && options.reuse.previous.topology === topology ? options.reuse : null;
+  const redo = reuse ? membersToRedo(topology, reuse, placed) : null;
   for (const id of topology.order) {
     const fm = topology.members.get(id)!;
+    if (redo && !redo.has(id)) {
+      reusedMember(reuse!.previous.members.get(id)!, fm, reuse!, redo, gathered, receipts, members);
+      const prev = members.get(id)!;
+      applied.D += (prev.selfWeight_plf / 1000) * prev.span_ft;
+      continue;
+    }
     const g = gathered.get(id)!;
     const loads = g.loads;
     const areaLoads = g.areas;
@@ -435,7 +494,48 @@ export function runTakedown(plan: Plan, options: TakedownOptions = {}): Takedown
     floorArea_ft2: deckApplied.total,
     byLevelFloorArea_ft2: deckApplied.byLevel,
     problems,
+    placed,
   };
+}
+
+/**
+ * A member taken down as before (TakedownReuse): its earlier takedown on this plan's member,
+ * its reactions delivered to the supporters being worked out again and its column receipts
+ * pushed, each exactly as the full loop does them.
+ */
+function reusedMember(
+  prev: MemberTakedown, fm: FramingMember, reuse: TakedownReuse, redo: Set<string>, gathered: Map<string, Gathered>, receipts: ColumnReceipt[], members: Map<string, MemberTakedown>,
+): void {
+  const mt: MemberTakedown = { ...prev, member: fm.member };
+  reuse.reused(mt);
+  members.set(mt.id, mt);
+  let source: string | null = null;
+  for (let e = 0; e < 2; e++) {
+    const end: MemberEnd = e === 0 ? 'start' : 'end';
+    const support = fm.supports[end];
+    const r = mt.reactions[end];
+    if (support.kind === 'member') {
+      // A supporter taken down as before already holds this reaction in its earlier loads.
+      if (!redo.has(support.id)) continue;
+      const target = gathered.get(support.id);
+      if (!target) continue;
+      deliverReaction((source ??= `${mt.kind} ${mt.id} reaction`), r, support.position_ft, target.loads, target.areas);
+    } else if (support.kind === 'column') {
+      receipts.push({
+        columnId: support.id,
+        level: fm.level,
+        D_kip: r.D_kip,
+        L_kip: r.L_kip,
+        Lreducible_kip: r.Lreducible_kip,
+        Lr_kip: r.Lr_kip,
+        S_kip: r.S_kip,
+        area_ft2: r.area_ft2,
+        reducibleArea_ft2: r.reducibleArea_ft2,
+        cantileverSlab: mt.carriesOverhang,
+        source: `${mt.kind} ${mt.id} ${end}`,
+      });
+    }
+  }
 }
 
 /** Equilibrium per case: the applied totals beside the sum of the column receipts (in their order). */

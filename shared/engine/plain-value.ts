@@ -1,0 +1,33 @@
+/**
+ * Plain data (JSON-like values: numbers, strings, booleans, null, undefined, arrays and plain
+ * objects) compared and copied by value, for the memos that decide what a re-design may reuse.
+ */
+
+/** Deep equality of plain data; numbers by Object.is (so 0 and −0 differ, as arithmetic may). */
+export function sameValue(a: unknown, b: unknown): boolean {
+  if (Object.is(a, b)) return true;
+  if (typeof a !== 'object' || typeof b !== 'object' || a === null || b === null) return false;
+  if (Array.isArray(a)) {
+    if (!Array.isArray(b) || a.length !== b.length) return false;
+    for (let i = 0; i < a.length; i++) if (!sameValue(a[i], b[i])) return false;
+    return true;
+  }
+  if (Array.isArray(b)) return false;
+  const ka = Object.keys(a);
+  const kb = Object.keys(b);
+  if (ka.length !== kb.length) return false;
+  for (const k of ka) {
+    if (!Object.prototype.hasOwnProperty.call(b, k)) return false;
+    if (!sameValue((a as Record<string, unknown>)[k], (b as Record<string, unknown>)[k])) return false;
+  }
+  return true;
+}
+
+/** A deep copy of plain data (own enumerable keys, undefined values kept), sharing nothing with it. */
+export function copyValue<T>(value: T): T {
+  if (typeof value !== 'object' || value === null) return value;
+  if (Array.isArray(value)) return value.map(copyValue) as T;
+  const out: Record<string, unknown> = {};
+  for (const k of Object.keys(value)) out[k] = copyValue((value as Record<string, unknown>)[k]);
+  return out as T;
+}
