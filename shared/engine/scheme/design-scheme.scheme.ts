@@ -20,7 +20,7 @@ import { planGeometry, type PlanGeometry, type PlanGeometryMemo } from './plan-g
 import { lockedShapeWeightPlf, reducedLiveKip, runTakedown, type EndReaction, type MemberTakedown, type TakedownResult, type TakedownReuse } from '../takedown/gravity-takedown.takedown';
 import { copyValue, sameValue } from '../plain-value';
 import type { Bracing } from '../takedown/member-bracing.takedown';
-import { assignMarks, sharedMarkConflicts, type MarkInput } from './member-marks.scheme';
+import { assignMarks, levelMarkPrefix, sharedMarkConflicts, type MarkInput } from './member-marks.scheme';
 import { compositeMemberInput, compositeSites, planNeedsWetStage, wetStagePlan, type MemberCompositeStatus } from './composite-plan.scheme';
 import type { CompositeMemberInput } from '../sizing/member-design.types';
 import { schemeColumns, type SchemeColumn } from './column-design.scheme';
@@ -799,7 +799,7 @@ function designFromTemplates(
     byLevelFloorArea_ft2: deckApplied.byLevel,
     problems: [],
   };
-  const result = buildSchemeResult(plan, takedown, designs, new Map(), new Map(), wetWhole ? new Map() : null, options.memberLoads !== false);
+  const result = buildSchemeResult(plan, takedown, designs, new Map(), new Map(), wetWhole ? new Map() : null, options.memberLoads !== false, marksFromTemplates(plan, templates, cores));
   const next: SchemeMemo = { designs: table, geometry: null, templates: geometries, last: null, reusedMembers: 0 };
   Object.defineProperty(result, CACHE, { value: next, enumerable: false });
   return result;
@@ -922,20 +922,16 @@ function placedMember(base: SchemeMember, m: Plan['members'][number], mark: stri
   return member;
 }
 
-function buildSchemeResult(
-  plan: Plan, takedown: SchemeTakedown, designs: Map<string, DesignEntry>, loadsOf: Map<string, MemberLoad[]>,
-  extrasOf: Map<string, MemberDesignExtras> = new Map(), sites: Map<string, MemberCompositeStatus> | null = null, withLoads = true,
-): SchemeResult {
-  const problems: PlanProblem[] = [...takedown.problems];
-  const fileOrder = plan.members.filter((m) => takedown.members.has(m.id));
-  const markInputs: MarkInput[] = fileOrder.map((m) => {
+/** What assignMarks reads of each member: kind, size, span, midpoint, marks it carries, studs and camber. */
+function markInputsOf(members: readonly Plan['members'][number][], designs: Map<string, DesignEntry>, takedowns: Map<string, MemberTakedown>): MarkInput[] {
+  return members.map((m) => {
     const d = designs.get(m.id);
     return {
       id: m.id,
       level: m.level,
       kind: m.kind,
       shape: d && !('error' in d) ? d.shape : m.shape,
-      span_ft: takedown.members.get(m.id)!.span_ft,
+      span_ft: takedowns.get(m.id)!.span_ft,
       midpoint: [(m.start[0] + m.end[0]) / 2, (m.start[1] + m.end[1]) / 2] as const,
       lockedMark: m.markLocked && m.mark ? m.mark : null,
       issuedMark: m.markLocked ? null : (m.mark ?? null),
@@ -943,7 +939,47 @@ function buildSchemeResult(
       camber_in: d && !('error' in d) && d.composite ? d.composite.camber_in : null,
     };
   });
-  const marks = assignMarks(markInputs, plan.levels);
+}
+
+/**
+ * Marks of a plan designed from level templates, worked out once per template. assignMarks
+ * numbers each mark prefix on its own, in plan order, and only issued or locked marks reach
+ * across levels; so where no member carries a mark and no two levels share a prefix, a level's
+ * marks are its template's marks under the level's prefix (placeholders order as the real
+ * ids do, so plan order ties break alike). Null otherwise (the whole plan is marked at once).
+ */
+function marksFromTemplates(plan: Plan, templates: LevelTemplate[], cores: DesignCore[]): Map<string, string> | null {
+  for (const m of plan.members) if (m.mark) return null;
+  const prefixes = new Map(plan.levels.map((l) => [l.id, levelMarkPrefix(l)]));
+  if (new Set(prefixes.values()).size !== plan.levels.length) return null;
+  const marks = new Map<string, string>();
+  templates.forEach((t, k) => {
+    const core = cores[k];
+    const first = plan.levels.find((l) => l.id === t.levels[0].levelId)!;
+    const templateLevel = t.plan.levels[0];
+    const inputs = markInputsOf(t.plan.members.filter((m) => core.takedown.members.has(m.id)), core.designs, core.takedown.members);
+    const named = { id: templateLevel.id, name: first.name, roof: first.roof };
+    const own = assignMarks(inputs, [named]);
+    // (Numbering never reads the prefix's text; a name without a number falls back to the id, here a placeholder.)
+    const templatePrefix = levelMarkPrefix(named);
+    for (const level of t.levels) {
+      const at = new LevelRenamer(level);
+      const prefix = prefixes.get(level.levelId)!;
+      for (const [pid, mark] of own) marks.set(at.text(pid), prefix + mark.slice(templatePrefix.length));
+    }
+  });
+  return marks;
+}
+
+function buildSchemeResult(
+  plan: Plan, takedown: SchemeTakedown, designs: Map<string, DesignEntry>, loadsOf: Map<string, MemberLoad[]>,
+  extrasOf: Map<string, MemberDesignExtras> = new Map(), sites: Map<string, MemberCompositeStatus> | null = null, withLoads = true,
+  presetMarks: Map<string, string> | null = null,
+): SchemeResult {
+  const problems: PlanProblem[] = [...takedown.problems];
+  const fileOrder = plan.members.filter((m) => takedown.members.has(m.id));
+  const markInputs: MarkInput[] = presetMarks ? [] : markInputsOf(fileOrder, designs, takedown.members);
+  const marks = presetMarks ?? assignMarks(markInputs, plan.levels);
   // A locked mark carried by members that no longer match (a load or span changed since it was
   // set) is said, never silent: one mark is one fabricated piece.
   const levelName = new Map(plan.levels.map((l) => [l.id, l.name]));

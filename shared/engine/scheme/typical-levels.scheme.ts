@@ -44,6 +44,13 @@ const placeholder = (rank: number) => `${OPEN}${String(rank).padStart(RANK_DIGIT
 
 /** The real text of a string the template wrote, for one level. */
 export function realText(s: string, level: TemplateLevel): string {
+  // A whole placeholder (an element id): the real id itself, no new text.
+  if (s.length === RANK_DIGITS + 2 && s.charCodeAt(0) === 0xe000 && s.charCodeAt(RANK_DIGITS + 1) === 0xe001) {
+    let rank = 0;
+    for (let i = 1; i <= RANK_DIGITS; i++) rank = rank * 10 + (s.charCodeAt(i) - 48);
+    return level.ids[rank];
+  }
+  if (s === LEVEL_PLACEHOLDER) return level.levelId;
   let at = s.indexOf(OPEN);
   if (at === -1) return s;
   let out = '';

@@ -140,11 +140,17 @@ describe('typical levels: designed once, placed on each level, identical to desi
       copies: fc.integer({ min: 2, max: 4 }),
       prefix: fc.array(fc.string({ unit: idChars, minLength: 1, maxLength: 4 }), { minLength: 4, maxLength: 4 }),
       shuffle: fc.integer({ min: 0, max: 1000 }),
+      // Level names: numbered, none (the mark prefix falls back to the id), lettered alike
+      // (every level's prefix "N"), numbered alike ("Level 3" twice); marks: none, or one
+      // beam per level carrying an issued or a locked mark.
+      naming: fc.constantFrom('numbered', 'empty', 'letter', 'same-number'),
+      marks: fc.constantFrom('none', 'none', 'issued', 'locked'),
     });
     let templatedRuns = 0;
     fc.assert(
       fc.property(levelSpec, (spec) => {
-        const levels = Array.from({ length: spec.copies }, (_, i) => ({ id: `${spec.prefix[i % 4]}#${i}`, name: `Level ${i + 2}`, elevation_ft: 13 * (i + 1) }));
+        const name = (i: number) => ({ numbered: `Level ${i + 2}`, empty: '', letter: 'North wing', 'same-number': i < 2 ? 'Level 3' : `Level ${i + 2}` })[spec.naming];
+        const levels = Array.from({ length: spec.copies }, (_, i) => ({ id: `${spec.prefix[i % 4]}#${i}`, name: name(i), elevation_ft: 13 * (i + 1) }));
         const W = 30 * spec.bays;
         const plan: Plan = {
           format: 'baywright-plan', version: 2, name: 'property',
@@ -163,6 +169,7 @@ describe('typical levels: designed once, placed on each level, identical to desi
           for (let k = 0; k <= spec.beams * spec.bays; k++) {
             const x = (k * 30) / spec.beams;
             members.push({ id: id(`B${k}`), level: level.id, kind: 'beam', start: [x, 0], end: [x, 30], shape: spec.locked && k === 1 ? 'W16X31' : null, maxDepth_in: null });
+            if (k === 2 && spec.marks !== 'none') Object.assign(members[members.length - 1], { mark: 'B7', markLocked: spec.marks === 'locked' });
           }
           plan.decks.push({ id: id('d'), level: level.id, polygon: [[0, 0], [W, 0], [W, 30], [0, 30]], spanDirection: 'x', zone: 'office' });
           if (spec.point) plan.pointLoads.push({ id: id('p'), level: level.id, x_ft: Math.min(spec.point.x, W - 1), y_ft: spec.point.y, D_kip: spec.point.D, L_kip: 1 });
@@ -188,5 +195,19 @@ describe('typical levels: designed once, placed on each level, identical to desi
     );
     // Most generated plans are templated (the rest fall back, e.g. a load off the floor): both paths are exercised.
     expect(templatedRuns).toBeGreaterThan(5);
+  });
+});
+
+describe('typical levels: marks', () => {
+  it('when the 24-level benchmark building is designed, then each level\'s marks carry its own prefix, as marking the whole plan at once gives', () => {
+    const plan = regularBuildingPlan(24, 4, 3);
+    const r = both(plan);
+    expect(designedFromLevelTemplates(r.templated)).toBe(true);
+    expect(r.same).toBe(true);
+    const marksOn = (level: string) => r.templated.members.filter((m) => m.level === level).map((m) => m.mark);
+    // "Level 5" → prefix 5, "Level 25" (the roof, named by number) → 25 (member-marks.scheme levelMarkPrefix).
+    expect(new Set(marksOn('L5').map((m) => m.replace(/[GB]\d+$/, '')))).toEqual(new Set(['5']));
+    expect(marksOn('L5').map((m) => m.slice(1))).toEqual(marksOn('L6').map((m) => m.slice(1)));
+    expect(marksOn('L25').every((m) => m.startsWith('25'))).toBe(true);
   });
 });
