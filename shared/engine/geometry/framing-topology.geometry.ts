@@ -266,7 +266,11 @@ export function buildFramingTopology(plan: Plan): FramingTopology {
 }
 
 /** Kahn's algorithm on "carries": a member comes after every member that bears on it. Ties by id. */
-export function orderBySupport(members: Map<string, Pick<FramingMember, 'id' | 'carries' | 'supports'>>): { order: string[]; cyclic: Set<string> } {
+export function orderBySupport(
+  members: Map<string, Pick<FramingMember, 'id' | 'carries' | 'supports'>>,
+  /** Filled (when given) with the supporters each member made ready, in the order they were queued. */
+  readied?: Map<string, string[]>,
+): { order: string[]; cyclic: Set<string> } {
   const pending = new Map<string, number>();
   const ready: string[] = [];
   for (const fm of members.values()) {
@@ -293,9 +297,11 @@ export function orderBySupport(members: Map<string, Pick<FramingMember, 'id' | '
     }
     if (first !== null && second !== null && second < first) {
       ready.push(second, first);
+      readied?.set(id, [second, first]);
     } else {
       if (first !== null) ready.push(first);
       if (second !== null) ready.push(second);
+      if (readied && first !== null) readied.set(id, second !== null ? [first, second] : [first]);
     }
   }
   if (order.length === members.size) return { order, cyclic: new Set() };

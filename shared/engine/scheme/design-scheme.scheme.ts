@@ -708,18 +708,24 @@ function designFromTemplates(
   const members = new Map<string, MemberTakedown>();
   const placements = new Map<string, Placement>();
   const designs = new Map<string, DesignEntry>();
-  const ordering = new Map<string, Pick<FramingMember, 'id' | 'carries' | 'supports'>>();
+  // The whole plan's leaves (members that carry none), and per template what each member readies (orderBySupport).
+  const leaves: string[] = [];
+  const readiedBy = new Map<DesignCore, Map<string, string[]>>();
   const pointReceipts = new Map<number, ColumnReceipt[]>();
   const memberReceipts = new Map<string, ColumnReceipt[]>();
   const pointApplied = new Map<number, { case: LoadCase; kip: number }[]>();
   const lineApplied = new Map<number, { case: LoadCase; kip: number }[]>();
   const deckEntries: { index: number; ctx: DeckContext; level: string }[] = [];
-  const realSupport = (s: EndSupport, at: LevelRenamer): EndSupport => (s.kind === 'member' ? { kind: 'member', id: at.text(s.id), position_ft: s.position_ft } : s);
 
   templates.forEach((t, k) => {
     const core = cores[k];
     const trace = core.trace!;
     const geometry = geometries.get(t.signature)!;
+    const readied = new Map<string, string[]>();
+    orderBySupport(geometry.topology.members, readied);
+    readiedBy.set(core, readied);
+    const templateLeaves: string[] = [];
+    for (const fm of geometry.topology.members.values()) if (fm.carries.length === 0) templateLeaves.push(fm.id);
     for (const level of t.levels) {
       const at = new LevelRenamer(level);
       for (const [pid, mt] of core.takedown.members) {
@@ -730,10 +736,7 @@ function designFromTemplates(
         const entry = core.designs.get(pid);
         if (entry) designs.set(id, 'error' in entry ? at.data(entry) : entry);
       }
-      for (const [pid, fm] of geometry.topology.members) {
-        const id = at.text(pid);
-        ordering.set(id, { id, carries: fm.carries, supports: { start: realSupport(fm.supports.start, at), end: realSupport(fm.supports.end, at) } });
-      }
+      for (const pid of templateLeaves) leaves.push(at.text(pid));
       trace.receipts.forEach((r, i) => {
         const from = trace.receiptFrom[i];
         const receipt: ColumnReceipt = { ...r, level: level.levelId, source: at.text(r.source) };
@@ -763,14 +766,18 @@ function designFromTemplates(
       for (const ctx of geometry.deckLoads.decks) deckEntries.push({ index: deckIndex.get(at.text(ctx.deck.id))!, ctx, level: level.levelId });
     }
   });
-  // The whole plan's order of takedown (as buildFramingTopology would order it), then its sums in that order.
-  const byFile = new Map<string, Pick<FramingMember, 'id' | 'carries' | 'supports'>>();
-  for (const m of plan.members) {
-    const o = ordering.get(m.id);
-    if (o && !byFile.has(m.id)) byFile.set(m.id, o);
+  // The whole plan's order of takedown, as orderBySupport gives it for the whole plan's framing:
+  // every leaf in id order, then each member queues the supporters it readies. Levels never
+  // bear on each other and placeholders order as the real ids do, so within a level the same
+  // members are processed in the same relative order as in its template, and each member
+  // readies the same supporters as its template member (the template's trace, renamed).
+  const order = leaves.sort();
+  for (let i = 0; i < order.length; i++) {
+    const p = placements.get(order[i])!;
+    const next = readiedBy.get(p.core)!.get(p.pid);
+    if (next) for (const pid of next) order.push(p.at.text(pid));
   }
-  const { order, cyclic } = orderBySupport(byFile);
-  if (cyclic.size > 0 || order.length !== members.size) return null;
+  if (order.length !== members.size) return null;
   deckEntries.sort((a, b) => a.index - b.index);
   const deckApplied = deckAppliedLoads(deckEntries.map((e) => e.ctx), (_, k) => deckEntries[k].level);
   const sumInFileOrder = (logs: Map<number, { case: LoadCase; kip: number }[]>) => {
