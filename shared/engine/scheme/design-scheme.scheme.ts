@@ -6,8 +6,12 @@
  * Re-design after an edit: pass `previous` (the last result of this function, in memory).
  * Designs are reused wherever a member's design input is unchanged, so only the changed
  * members and what their change reaches (neighbours sharing a strip, supporters up the
- * order) are sized again. `changedIds` is accepted as a hint for callers; correctness does
- * not depend on it because the inputs themselves are compared.
+ * order) are sized again. On the same framing geometry and design basis (and without
+ * grouping or a wet stage), a member whose own data and placed loads are unchanged and which
+ * carries only such members also keeps its takedown (LastPass, TakedownReuse), so a
+ * one-member edit takes down that member and what carries it. `changedIds` is accepted as a
+ * hint for callers; correctness does not depend on it because the inputs themselves are
+ * compared (with value copies, so edits made in place to an earlier plan are caught).
  */
 import type { Plan } from '../../schemas/plan.schema';
 import { planProblem, type PlanProblem } from '../../schemas/plan-problem.schema';
