@@ -9,6 +9,12 @@
 const STREAM_DEPTH = 2;
 /** Pieces are gathered up to this size before one write (fewer, larger writes). */
 const FLUSH_CHARS = 1 << 16;
+/**
+ * Compact output: a top-level list is stringified this many elements at a time (one
+ * JSON.stringify call per slice, its brackets dropped), which writes the same text as one
+ * call per element at a fraction of the script work; 64 members are about 60 kB.
+ */
+const SLICE = 64;
 
 type Write = (chunk: string) => void;
 
@@ -38,6 +44,8 @@ function serialisable(holderKey: string, value: unknown): unknown {
   return value;
 }
 
+const hasToJson = (v: unknown) => v !== null && typeof v === 'object' && typeof (v as { toJSON?: unknown }).toJSON === 'function';
+
 function emit(out: ChunkedWriter, value: unknown, indent: number, depth: number): void {
   const isContainer = value !== null && typeof value === 'object';
   if (!isContainer || depth >= STREAM_DEPTH) {
@@ -49,6 +57,17 @@ function emit(out: ChunkedWriter, value: unknown, indent: number, depth: number)
   const close = indent > 0 ? `\n${' '.repeat(indent * depth)}` : '';
   if (Array.isArray(value)) {
     if (value.length === 0) return out.push('[]');
+    if (indent === 0 && depth === STREAM_DEPTH - 1 && !value.some(hasToJson)) {
+      // Without toJSON (which would see the slice's index as its key) a slice's text is its
+      // elements' texts joined by commas, undefined and functions written as null, as element by element.
+      out.push('[');
+      for (let i = 0; i < value.length; i += SLICE) {
+        const text = JSON.stringify(value.slice(i, i + SLICE));
+        out.push(i === 0 ? text.slice(1, -1) : `,${text.slice(1, -1)}`);
+      }
+      out.push(']');
+      return;
+    }
     out.push('[');
     for (let i = 0; i < value.length; i++) {
       out.push(i === 0 ? inner : `,${inner}`);
