@@ -136,8 +136,13 @@ function nextParallelFt(fm: FramingMember, others: readonly FramingMember[], mid
   return best;
 }
 
-/** Composite status of every member of the plan (composite with its site, or bare with the reason). */
-export function compositeSites(plan: Plan, topology: FramingTopology): Map<string, MemberCompositeStatus> {
+/**
+ * Composite status of every member of the plan (composite with its site, or bare with the reason).
+ * A member's status is a function of the framing geometry, the decks and openings, the design
+ * basis and the member's own `composite` setting; `kept` may give a member's earlier status
+ * where the caller knows all of those unchanged (a re-design), and it is used as it is.
+ */
+export function compositeSites(plan: Plan, topology: FramingTopology, kept?: (fm: FramingMember) => MemberCompositeStatus | undefined): Map<string, MemberCompositeStatus> {
   const out = new Map<string, MemberCompositeStatus>();
   const slabs = new SlabIndex(plan);
   const byLevel = new Map<string, FramingMember[]>();
@@ -148,6 +153,11 @@ export function compositeSites(plan: Plan, topology: FramingTopology): Map<strin
   }
   for (const fm of topology.members.values()) {
     const m = fm.member;
+    const before = kept?.(fm);
+    if (before) {
+      out.set(fm.id, before);
+      continue;
+    }
     if (!memberWantsComposite(plan, m)) {
       out.set(fm.id, { composite: false, reason: m.composite === false ? 'non-composite by the engineer' : 'composite design is off in the design basis' });
       continue;

@@ -6,10 +6,11 @@
  * Re-design after an edit: pass `previous` (the last result of this function, in memory).
  * Designs are reused wherever a member's design input is unchanged, so only the changed
  * members and what their change reaches (neighbours sharing a strip, supporters up the
- * order) are sized again. On the same framing geometry and design basis (and without
- * grouping or a wet stage), a member whose own data and placed loads are unchanged and which
- * carries only such members also keeps its takedown (LastPass, TakedownReuse), so a
- * one-member edit takes down that member and what carries it. `changedIds` is accepted as a
+ * order) are sized again. On the same framing geometry and design basis (not with grouping),
+ * a member whose own data and placed loads are unchanged and which carries only such members
+ * also keeps its takedown (LastPass, TakedownReuse) — with a wet stage, in each stage, its
+ * composite site and wet takedown unchanged too — so a one-member edit takes down that
+ * member and what carries it. `changedIds` is accepted as a
  * hint for callers; correctness does not depend on it because the inputs themselves are
  * compared (with value copies, so edits made in place to an earlier plan are caught).
  */
@@ -499,32 +500,35 @@ class DesignPass {
 
   /** The takedown's reuse hook: the member's earlier design, loads and extras, as they were. */
   private readonly reused = (mt: MemberTakedown): void => {
-    const last = this.last!;
+    const last = this.last!.stage;
     const entry = last.entries.get(mt.id)!;
     this.table.adopt(entry);
     this.entries.set(mt.id, entry);
     this.designs.set(mt.id, entry.value);
     const loads = last.loadsOf.get(mt.id);
     if (loads) this.loadsOf.set(mt.id, loads);
+    const extras = last.extrasOf.get(mt.id);
+    if (extras) this.extrasOf.set(mt.id, extras);
     this.reusedIds.add(mt.id);
   };
 
   /** The trace of the last run (when traced). */
   trace: TakedownTrace | null = null;
 
-  /** An earlier pass this one may reuse members of (see LastPass; only for a plan without wet stage or grouping). */
-  last: LastPass | null = null;
+  /**
+   * The same pass of the last run, which this one may reuse members of: a member whose own data
+   * is unchanged (`sameMember`) and, with a wet stage, whose design extras are (`sameExtras`:
+   * its wet-stage takedown and composite site), and which carries only such members.
+   */
+  last: { stage: StagePass; sameMember: (fm: FramingMember) => boolean; sameExtras: ((id: string) => boolean) | null } | null = null;
 
   run(geometry: PlanGeometry, traced = false): TakedownResult {
     this.trace = traced ? emptyTakedownTrace() : null;
     const last = this.last;
     const reuse: TakedownReuse | undefined = last && !traced
       ? {
-          previous: last.takedown,
-          unchanged: (fm) => {
-            const before = last.members.get(fm.id);
-            return before !== undefined && sameValue(fm.member, before);
-          },
+          previous: last.stage.takedown,
+          unchanged: last.sameExtras ? (fm) => last.sameMember(fm) && last.sameExtras!(fm.id) : last.sameMember,
           reused: this.reused,
         }
       : undefined;
@@ -538,21 +542,36 @@ class DesignPass {
   }
 }
 
-/**
- * What a design pass leaves for the next re-design of the same plan to reuse: the takedown,
- * each member's memo entry and design loads, and value copies of what the takedown read
- * beyond the framing geometry and the placed loads (each member, the design basis).
- * Kept only for a plan without a wet stage (its extras come from a second takedown) or
- * grouping (a forced size depends on other members).
- */
-interface LastPass {
-  geometry: PlanGeometryMemo;
+/** What one design pass leaves for the same pass of the next re-design: its takedown, each member's memo entry, design loads and extras. */
+interface StagePass {
   takedown: TakedownResult;
   entries: Map<string, TableEntry>;
   loadsOf: Map<string, MemberLoad[]>;
+  extrasOf: Map<string, MemberDesignExtras>;
+}
+
+/**
+ * What a design leaves for the next re-design of the same plan to reuse: its final pass, with a
+ * wet stage also the composite sites, both wet-stage takedowns and the first pass, and value
+ * copies of what the takedowns read beyond the framing geometry and the placed loads (each
+ * member, the design basis). Not kept with grouping (a forced size depends on other members).
+ */
+interface LastPass {
+  geometry: PlanGeometryMemo;
+  main: StagePass;
+  wet: { sites: Map<string, MemberCompositeStatus>; wet1: TakedownResult; pass1: StagePass; wet2: TakedownResult } | null;
   members: Map<string, Plan['members'][number]>;
   /** Copy of passRest(plan) when taken down. */
   rest: unknown;
+}
+
+const stageOf = (pass: DesignPass, takedown: TakedownResult): StagePass => ({ takedown, entries: pass.entries, loadsOf: pass.loadsOf, extrasOf: pass.extrasOf });
+
+/** Whether a member's composite site is the same as before (its deck by id: deck values are part of the geometry memo's comparison). */
+function sameSite(a: MemberCompositeStatus | undefined, b: MemberCompositeStatus | undefined): boolean {
+  if (a === undefined || b === undefined) return a === b;
+  if (!a.composite || !b.composite) return !a.composite && !b.composite && a.reason === b.reason;
+  return a.site.deck.id === b.site.deck.id && a.site.orientation === b.site.orientation && Object.is(a.site.effectiveWidth_in, b.site.effectiveWidth_in) && a.site.basis === b.site.basis;
 }
 
 /** What a takedown reads of a plan beyond its framing geometry, its members and the loads placed on them (compared in the takedown). */
@@ -585,8 +604,8 @@ interface DesignCore {
   sites: Map<string, MemberCompositeStatus> | null;
   /** The final takedown's trace (when traced). */
   trace: TakedownTrace | null;
-  /** The pass a later re-design may reuse members of (no wet stage, no grouping, not traced), else null. */
-  reusable: DesignPass | null;
+  /** What a later re-design may reuse (no grouping, not traced), else null. */
+  reusable: ReusableCore | null;
 }
 
 export function designScheme(plan: Plan, options: SchemeOptions = {}): SchemeResult {
@@ -604,20 +623,29 @@ export function designScheme(plan: Plan, options: SchemeOptions = {}): SchemeRes
   const lastPass = memo?.last && memo.last.geometry === geometry && sameValue(passRest(plan), memo.last.rest) ? memo.last : null;
   const core = designCore(plan, geometry, options, table, previous, false, lastPass);
   const result = buildSchemeResult(plan, core.takedown, core.designs, core.loadsOf, core.extrasOf, core.sites, options.memberLoads !== false);
-  const next: SchemeMemo = { designs: table, geometry, templates: null, last: core.reusable ? nextLastPass(plan, geometry, core.reusable, core.takedown, lastPass) : null, reusedMembers: core.reusable?.reusedIds.size ?? 0 };
+  const next: SchemeMemo = { designs: table, geometry, templates: null, last: core.reusable ? nextLastPass(plan, geometry, core.reusable, lastPass) : null, reusedMembers: core.reusable?.pass.reusedIds.size ?? 0 };
   Object.defineProperty(result, CACHE, { value: next, enumerable: false });
   return result;
 }
 
 /** The takedown of a plan with each member sized as it is reached (wet stage and grouping included). */
 /** The LastPass of a pass just run: copies made only of members worked out again, and of the rest if it changed. */
-function nextLastPass(plan: Plan, geometry: PlanGeometryMemo, pass: DesignPass, takedown: TakedownResult, before: LastPass | null): LastPass {
+function nextLastPass(plan: Plan, geometry: PlanGeometryMemo, core: ReusableCore, before: LastPass | null): LastPass {
+  const { pass, takedown } = core;
   const members = new Map<string, Plan['members'][number]>();
   for (const mt of takedown.members.values()) {
+    // A member reused by the final pass was compared equal to its copy, which stays good.
     const kept = pass.reusedIds.has(mt.id) ? before?.members.get(mt.id) : undefined;
     members.set(mt.id, kept ?? copyValue(mt.member));
   }
-  return { geometry, takedown, entries: pass.entries, loadsOf: pass.loadsOf, members, rest: before ? before.rest : copyValue(passRest(plan)) };
+  return { geometry, main: stageOf(pass, takedown), wet: core.wet, members, rest: before ? before.rest : copyValue(passRest(plan)) };
+}
+
+/** A design core's parts a later re-design may reuse (see LastPass). */
+interface ReusableCore {
+  pass: DesignPass;
+  takedown: TakedownResult;
+  wet: LastPass['wet'];
 }
 
 function designCore(
@@ -630,17 +658,58 @@ function designCore(
   // sizes of the first design pass (beams' inputs do not change, so only girders re-design).
   let wet: WetStage | null = null;
   const wetPlan = planNeedsWetStage(plan) ? wetStagePlan(plan) : null;
-  const sites = wetPlan ? compositeSites(plan, geometry.topology) : null;
-  const wetTakedown = (weight: (mt: MemberTakedown) => number) => runTakedown(wetPlan!, { topology: geometry.topology, selfWeight: weight });
-  if (wetPlan) wet = { sites: sites!, takedown: wetTakedown((mt) => lockedShapeWeightPlf(mt.member)) };
+  const reusable = !options.groupIdentical && !traced;
+  // Reuse of the last run (LastPass): each member's own data is compared once with its copy.
+  const reuseFrom = reusable && last && (wetPlan ? last.wet !== null : last.wet === null) ? last : null;
+  // Same geometry, decks and basis (LastPass): a member's site is as before unless its own composite setting changed.
+  const keptSite = reuseFrom?.wet
+    ? (fm: FramingMember) => {
+        const before = reuseFrom.members.get(fm.id);
+        return before && sameValue(before.composite, fm.member.composite) ? reuseFrom.wet!.sites.get(fm.id) : undefined;
+      }
+    : undefined;
+  const sites = wetPlan ? compositeSites(plan, geometry.topology, keptSite) : null;
+  const sameOwn = new Map<string, boolean>();
+  const sameMember = (fm: FramingMember): boolean => {
+    let same = sameOwn.get(fm.id);
+    if (same === undefined) {
+      const before = reuseFrom!.members.get(fm.id);
+      sameOwn.set(fm.id, (same = before !== undefined && sameValue(fm.member, before)));
+    }
+    return same;
+  };
+  const sameSiteOf = (id: string) => sameSite(sites!.get(id), reuseFrom!.wet!.sites.get(id));
+  const wetTakedown = (weight: (mt: MemberTakedown) => number, previousWet: TakedownResult | null, unchanged: (fm: FramingMember) => boolean, reusedIds: Set<string>) =>
+    runTakedown(wetPlan!, {
+      topology: geometry.topology,
+      selfWeight: weight,
+      ...(previousWet ? { reuse: { previous: previousWet, unchanged, reused: (mt: MemberTakedown) => void reusedIds.add(mt.id) } } : {}),
+    });
+  let wetParts: LastPass['wet'] = null;
+  const wet1Reused = new Set<string>();
+  if (wetPlan) wet = { sites: sites!, takedown: wetTakedown((mt) => lockedShapeWeightPlf(mt.member), reuseFrom?.wet?.wet1 ?? null, sameMember, wet1Reused) };
   let pass = new DesignPass(plan, table, previous, forced, wet);
-  const reusable = !wetPlan && !options.groupIdentical && !traced;
-  if (reusable) pass.last = last;
+  if (reuseFrom) pass.last = { stage: reuseFrom.wet ? reuseFrom.wet.pass1 : reuseFrom.main, sameMember, sameExtras: reuseFrom.wet ? (id) => wet1Reused.has(id) && sameSiteOf(id) : null };
   let takedown = pass.run(geometry, traced);
   if (wetPlan) {
     const first = pass.designs;
-    wet = { sites: sites!, takedown: wetTakedown((mt) => { const d = first.get(mt.id); return d && !('error' in d) ? d.weight_plf : lockedShapeWeightPlf(mt.member); }) };
+    const firstPass = pass;
+    const wet1 = wet!.takedown;
+    const wet2Reused = new Set<string>();
+    // The second wet takedown carries the first pass's sizes: a member keeps its wet takedown
+    // only if the first pass kept its design (so its weight) as well.
+    wet = {
+      sites: sites!,
+      takedown: wetTakedown(
+        (mt) => { const d = first.get(mt.id); return d && !('error' in d) ? d.weight_plf : lockedShapeWeightPlf(mt.member); },
+        reuseFrom?.wet?.wet2 ?? null,
+        (fm) => sameMember(fm) && firstPass.reusedIds.has(fm.id),
+        wet2Reused,
+      ),
+    };
     pass = new DesignPass(plan, table, previous, forced, wet);
+    if (reuseFrom) pass.last = { stage: reuseFrom.main, sameMember, sameExtras: (id) => wet2Reused.has(id) && sameSiteOf(id) };
+    wetParts = { sites: sites!, wet1, pass1: stageOf(firstPass, takedown), wet2: wet.takedown };
     takedown = pass.run(geometry, traced);
   }
 
@@ -681,7 +750,7 @@ function designCore(
       takedown = pass.run(geometry, traced);
     }
   }
-  return { takedown, designs: pass.designs, loadsOf: pass.loadsOf, extrasOf: pass.extrasOf, sites, trace: pass.trace, reusable: reusable ? pass : null };
+  return { takedown, designs: pass.designs, loadsOf: pass.loadsOf, extrasOf: pass.extrasOf, sites, trace: pass.trace, reusable: reusable ? { pass, takedown, wet: wetParts } : null };
 }
 
 /**

@@ -23,6 +23,14 @@ function level(baysX = 3, baysY = 2): Plan {
   return plan;
 }
 
+/** The same level with a composite slab on the deck (parsed, so the composite settings get their defaults). */
+function compositeLevel(): Plan {
+  const doc = JSON.parse(JSON.stringify(level()));
+  doc.designBasis.composite = { enabled: true };
+  doc.decks[0].slab = { ribHeight_in: 3, toppingThickness_in: 3.25, ribAvgWidth_in: 6, ribSpacing_in: 12, concreteWeight_pcf: 115, fc_ksi: 3, deckWeight_psf: 2 };
+  return parsePlanFile(doc).plan!;
+}
+
 /** Paths where a and b differ: numbers beyond the relative tolerance, anything else at all. */
 function differences(a: unknown, b: unknown, relTol: number, path = '$', out: string[] = []): string[] {
   if (typeof a === 'number' && typeof b === 'number') {
@@ -132,31 +140,55 @@ describe('re-design reusing the previous takedown', () => {
     expect(JSON.stringify(again)).toBe(JSON.stringify(first));
   });
 
-  it('when the same members are grouped or the slab is composite, then the takedown is not reused (their inputs reach past a member)', () => {
+  it('when the same members are grouped, then the takedown is not reused (a forced size depends on other members)', () => {
     const plan = level();
     const grouped = designScheme(plan, { groupIdentical: true });
     const again = designScheme(structuredClone(plan), { previous: grouped, groupIdentical: true });
     expect(reusedMemberTakedowns(again)).toBe(0);
     expectFullDesign(again, plan, 'grouped', { groupIdentical: true });
-
-    const doc = JSON.parse(JSON.stringify(level()));
-    doc.designBasis.composite = { enabled: true };
-    doc.decks[0].slab = { ribHeight_in: 3, toppingThickness_in: 3.25, ribAvgWidth_in: 6, ribSpacing_in: 12, concreteWeight_pcf: 115, fc_ksi: 3, deckWeight_psf: 2 };
-    const composite = parsePlanFile(doc).plan!;
-    const wet = designScheme(composite);
-    expect(wet.members.some((m) => m.studs !== null && m.studs !== undefined)).toBe(true);
-    const changed = structuredClone(composite);
-    changed.members.find((m) => m.id === 'B5-0')!.shape = 'W21X50';
-    const wetAgain = designScheme(changed, { previous: wet });
-    expect(reusedMemberTakedowns(wetAgain)).toBe(0);
-    expectFullDesign(wetAgain, changed, 'composite');
   });
 
-  it('property: any chain of member edits, each re-designed from the last result, ends at the full design of the final plan', () => {
+  it('when the slab is composite, then a one-beam edit keeps the other members\' wet-stage and final takedowns, and the result is the full design', () => {
+    const composite = compositeLevel();
+    const wet = designScheme(composite);
+    expect(wet.members.every((m) => typeof m.studs === 'number' && m.studs > 0)).toBe(true);
+    const changed = structuredClone(composite);
+    changed.members.find((m) => m.id === 'B5-0')!.shape = 'W21X50';
+    const again = designScheme(changed, { previous: wet });
+    // B5-0 and the girders G1-0, G1-1 it bears on (its weight reaches them in both stages).
+    expect(reusedMemberTakedowns(again)).toBe(changed.members.length - 3);
+    expect(again.members.find((m) => m.id === 'B5-0')!.shape).toBe('W21X50');
+    expect(JSON.stringify(again)).toBe(JSON.stringify(designScheme(structuredClone(changed))));
+    // Studs given on a member are part of its own data: that member (B9-1, x = 67.5) and the girders G2-1, G2-2 it bears on are redone.
+    const studded = structuredClone(changed);
+    studded.members.find((m) => m.id === 'B9-1')!.studs = 30;
+    const third = designScheme(studded, { previous: again });
+    expect(reusedMemberTakedowns(third)).toBe(studded.members.length - 3);
+    expect(third.members.find((m) => m.id === 'B9-1')!.studs).toBe(30);
+    expectFullDesign(third, studded, 'studs given');
+    // A member made non-composite: its site changes (the others' sites are kept), it and its girders are redone.
+    const bare = structuredClone(studded);
+    bare.members.find((m) => m.id === 'B9-1')!.composite = false;
+    const bareAgain = designScheme(bare, { previous: third });
+    expect(reusedMemberTakedowns(bareAgain)).toBe(bare.members.length - 3);
+    expect(bareAgain.members.find((m) => m.id === 'B9-1')!.studs).toBeNull();
+    expect(bareAgain.members.find((m) => m.id === 'B9-1')!.compositeNote).toBe('non-composite by the engineer');
+    expect(JSON.stringify(bareAgain)).toBe(JSON.stringify(designScheme(structuredClone(bare))));
+    // A slab change is a geometry change (decks): nothing is reused.
+    const thicker = structuredClone(studded);
+    thicker.decks[0].slab!.toppingThickness_in = 4.5;
+    const fourth = designScheme(thicker, { previous: third });
+    expect(reusedMemberTakedowns(fourth)).toBe(0);
+    expectFullDesign(fourth, thicker, 'slab thicker');
+  });
+
+  it('property: any chain of member edits, each re-designed from the last result, ends at the full design of the final plan (bare and composite)', () => {
     const shapes = [null, 'W12X19', 'W16X26', 'W18X35', 'W21X44', 'W24X55'];
     const edit = fc.record({
       member: fc.nat(),
-      what: fc.constantFrom('shape', 'depth', 'Lb', 'limits', 'mark', 'point'),
+      what: fc.constantFrom('shape', 'depth', 'Lb', 'limits', 'mark', 'point', 'composite', 'studs'),
+      flag: fc.constantFrom(true, false, null),
+      studs: fc.integer({ min: 0, max: 60 }),
       x: fc.integer({ min: 0, max: 60 }),
       y: fc.integer({ min: 0, max: 60 }),
       shape: fc.constantFrom(...shapes),
@@ -164,8 +196,8 @@ describe('re-design reusing the previous takedown', () => {
       Lb: fc.constantFrom(undefined, 0, 7.5, 15),
     });
     fc.assert(
-      fc.property(fc.array(edit, { minLength: 1, maxLength: 5 }), (edits) => {
-        const plan = level(2, 2);
+      fc.property(fc.array(edit, { minLength: 1, maxLength: 5 }), fc.boolean(), (edits, composite) => {
+        const plan = composite ? compositeLevel() : level(2, 2);
         let result = designScheme(plan);
         for (const e of edits) {
           const m = plan.members[e.member % plan.members.length];
@@ -175,6 +207,8 @@ describe('re-design reusing the previous takedown', () => {
           else if (e.what === 'Lb') m.Lb_override_ft = e.Lb;
           else if (e.what === 'limits') m.deflectionLimits = { live: 480, total: 360 };
           else if (e.what === 'point') plan.pointLoads[0] = { ...plan.pointLoads[0], x_ft: e.x, y_ft: e.y };
+          else if (e.what === 'composite') m.composite = e.flag;
+          else if (e.what === 'studs') m.studs = e.studs;
           else m.mark = 'X1';
           const copy = structuredClone(plan);
           result = designScheme(copy, { previous: result, changedIds: [m.id] });
