@@ -217,7 +217,8 @@ export function compositeMemberInput(plan: Plan, site: MemberCompositeSite, cons
   const c = plan.designBasis.composite;
   const bracing: Bracing = site.orientation === 'perpendicular' ? 'continuous' : framingPoints_ft.length > 0 ? { points_ft: framingPoints_ft.slice() } : 'none';
   return {
-    slab: site.deck.slab!,
+    // A copy: results (and a later re-design reusing them) never hold the plan's own objects.
+    slab: { ...site.deck.slab! },
     effectiveWidth_in: site.effectiveWidth_in,
     deckOrientation: site.orientation,
     studsPerRib: 1,

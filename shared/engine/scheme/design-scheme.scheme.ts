@@ -22,7 +22,7 @@ import type { MemberDesignInput, MemberDesignResult } from '../sizing/member-des
 import type { MemberLoad } from '../analysis/member-load.types';
 import type { TakedownLoad } from '../takedown/member-load.takedown';
 import { planGeometry, type PlanGeometry, type PlanGeometryMemo } from './plan-geometry-memo.scheme';
-import { lockedShapeWeightPlf, reducedLiveKip, runTakedown, type EndReaction, type MemberTakedown, type TakedownResult, type TakedownReuse } from '../takedown/gravity-takedown.takedown';
+import { lockedShapeWeightPlf, prepareDeckLoads, reducedLiveKip, runTakedown, type PreparedDeckLoads, type EndReaction, type MemberTakedown, type TakedownResult, type TakedownReuse } from '../takedown/gravity-takedown.takedown';
 import { copyValue, sameValue } from '../plain-value';
 import type { Bracing } from '../takedown/member-bracing.takedown';
 import { assignMarks, levelMarkPrefix, sharedMarkConflicts, type MarkInput } from './member-marks.scheme';
@@ -559,10 +559,32 @@ interface StagePass {
 interface LastPass {
   geometry: PlanGeometryMemo;
   main: StagePass;
-  wet: { sites: Map<string, MemberCompositeStatus>; wet1: TakedownResult; pass1: StagePass; wet2: TakedownResult } | null;
+  wet: { sites: Map<string, MemberCompositeStatus>; wet1: TakedownResult; pass1: StagePass; wet2: TakedownResult; deckLoads: PreparedDeckLoads } | null;
   members: Map<string, Plan['members'][number]>;
   /** Copy of passRest(plan) when taken down. */
   rest: unknown;
+}
+
+/**
+ * Deck loads prepared for an earlier wet plan of the same geometry and basis, pointed at this
+ * wet plan's decks and zones (wetStagePlan keeps the plan's deck order and ids), so nothing
+ * reads an earlier plan's objects. The strips and tributaries are values and stay shared.
+ */
+function reboundDeckLoads(prepared: PreparedDeckLoads, wetPlan: Plan): PreparedDeckLoads | null {
+  const decks = new Map(wetPlan.decks.map((d) => [d.id, d]));
+  const zones = new Map(wetPlan.zones.map((z) => [z.id, z]));
+  if (decks.size !== wetPlan.decks.length) return null;
+  const bound = prepared.decks.map((ctx) => {
+    const deck = decks.get(ctx.deck.id);
+    const zone = deck ? zones.get(deck.zone) : undefined;
+    return deck && zone ? { deck, zone } : null;
+  });
+  if (bound.some((b) => b === null)) return null;
+  prepared.decks.forEach((ctx, k) => {
+    ctx.deck = bound[k]!.deck;
+    ctx.zone = bound[k]!.zone;
+  });
+  return prepared;
 }
 
 const stageOf = (pass: DesignPass, takedown: TakedownResult): StagePass => ({ takedown, entries: pass.entries, loadsOf: pass.loadsOf, extrasOf: pass.extrasOf });
@@ -662,10 +684,15 @@ function designCore(
   // Reuse of the last run (LastPass): each member's own data is compared once with its copy.
   const reuseFrom = reusable && last && (wetPlan ? last.wet !== null : last.wet === null) ? last : null;
   // Same geometry, decks and basis (LastPass): a member's site is as before unless its own composite setting changed.
+  // (A kept site names this plan's deck object, never the earlier plan's, which its owner may have edited since.)
+  const decksById = reuseFrom?.wet ? new Map(plan.decks.map((d) => [d.id, d])) : null;
   const keptSite = reuseFrom?.wet
-    ? (fm: FramingMember) => {
+    ? (fm: FramingMember): MemberCompositeStatus | undefined => {
         const before = reuseFrom.members.get(fm.id);
-        return before && sameValue(before.composite, fm.member.composite) ? reuseFrom.wet!.sites.get(fm.id) : undefined;
+        const site = before && sameValue(before.composite, fm.member.composite) ? reuseFrom.wet!.sites.get(fm.id) : undefined;
+        if (!site || !site.composite) return site;
+        const deck = decksById!.get(site.site.deck.id);
+        return deck ? { composite: true, site: { ...site.site, deck } } : undefined;
       }
     : undefined;
   const sites = wetPlan ? compositeSites(plan, geometry.topology, keptSite) : null;
@@ -679,9 +706,13 @@ function designCore(
     return same;
   };
   const sameSiteOf = (id: string) => sameSite(sites!.get(id), reuseFrom!.wet!.sites.get(id));
+  // The wet plan's deck loads: a function of the geometry, decks, zones and basis, so as before
+  // when reusing (pointed at this wet plan's deck and zone objects), else prepared once for both stages.
+  const wetDeckLoads = wetPlan ? ((reuseFrom?.wet ? reboundDeckLoads(reuseFrom.wet.deckLoads, wetPlan) : null) ?? prepareDeckLoads(wetPlan, geometry.topology)) : null;
   const wetTakedown = (weight: (mt: MemberTakedown) => number, previousWet: TakedownResult | null, unchanged: (fm: FramingMember) => boolean, reusedIds: Set<string>) =>
     runTakedown(wetPlan!, {
       topology: geometry.topology,
+      deckLoads: wetDeckLoads!,
       selfWeight: weight,
       ...(previousWet ? { reuse: { previous: previousWet, unchanged, reused: (mt: MemberTakedown) => void reusedIds.add(mt.id) } } : {}),
     });
@@ -709,7 +740,7 @@ function designCore(
     };
     pass = new DesignPass(plan, table, previous, forced, wet);
     if (reuseFrom) pass.last = { stage: reuseFrom.main, sameMember, sameExtras: (id) => wet2Reused.has(id) && sameSiteOf(id) };
-    wetParts = { sites: sites!, wet1, pass1: stageOf(firstPass, takedown), wet2: wet.takedown };
+    wetParts = { sites: sites!, wet1, pass1: stageOf(firstPass, takedown), wet2: wet.takedown, deckLoads: wetDeckLoads! };
     takedown = pass.run(geometry, traced);
   }
 

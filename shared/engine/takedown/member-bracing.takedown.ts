@@ -6,6 +6,7 @@
  */
 import type { PlanMember } from '../../schemas/plan.schema';
 import { SUPPORT_TOLERANCE_FT } from '../geometry/framing-topology.geometry';
+import { copyValue } from '../plain-value';
 
 /** Same shape as the sizing engine's Bracing (shared/engine/index.ts). */
 export type Bracing = 'continuous' | 'none' | { points_ft: number[] };
@@ -34,7 +35,8 @@ export function coveredLengthFt(intervals: readonly [number, number][]): number 
  * @param framingPoints_ft positions where other members frame in
  */
 export function deriveMemberBracing(member: PlanMember, spanFt: number, deckCoverage_ft: readonly [number, number][], framingPoints_ft: readonly number[]): Bracing {
-  if (member.bracing) return member.bracing;
+  // A copy: a takedown (which a re-design may reuse) never holds the plan's own objects.
+  if (member.bracing) return copyValue(member.bracing);
   if (coveredLengthFt(deckCoverage_ft) >= spanFt - 2 * SUPPORT_TOLERANCE_FT) return 'continuous';
   return bracePoints(framingPoints_ft, spanFt);
 }

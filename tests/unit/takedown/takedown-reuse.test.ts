@@ -124,6 +124,16 @@ describe('re-design reusing the previous takedown', () => {
     expect(again.members.find((m) => m.id === 'B2-1')!.shape).toBe('W24X55');
     expect(reusedMemberTakedowns(again)).toBe(plan.members.length - 3);
     expectFullDesign(again, plan, 'in-place edit');
+    // An earlier plan edited in place after its design is never read through the kept takedowns.
+    const braced = structuredClone(plan);
+    braced.members.find((m) => m.id === 'B7-0')!.bracing = { points_ft: [10, 20] };
+    const bracedFirst = designScheme(braced);
+    const bracedCopy = structuredClone(braced);
+    (braced.members.find((m) => m.id === 'B7-0')!.bracing as { points_ft: number[] }).points_ft[0] = 3;
+    const bracedAgain = designScheme(bracedCopy, { previous: bracedFirst });
+    expect(reusedMemberTakedowns(bracedAgain)).toBe(bracedCopy.members.length);
+    expect(bracedAgain.members.find((m) => m.id === 'B7-0')!.bracing).toEqual({ points_ft: [10, 20] });
+    expect(JSON.stringify(bracedAgain)).toBe(JSON.stringify(designScheme(structuredClone(bracedCopy))));
     // And an in-place edit of a nested list is seen as well.
     beam.allowedNominalDepths.push(21);
     beam.shape = null;
@@ -180,6 +190,18 @@ describe('re-design reusing the previous takedown', () => {
     const fourth = designScheme(thicker, { previous: third });
     expect(reusedMemberTakedowns(fourth)).toBe(0);
     expectFullDesign(fourth, thicker, 'slab thicker');
+  });
+
+  it('when the composite plan designed before is edited in place afterwards, then a re-design of an unedited copy reads none of it', () => {
+    const plan = compositeLevel();
+    const copy = structuredClone(plan);
+    const first = designScheme(plan);
+    plan.decks[0].polygon[1] = [80, 0];
+    plan.decks[0].slab!.toppingThickness_in = 5;
+    plan.designBasis.composite!.constructionLive_psf = 50;
+    const again = designScheme(copy, { previous: first });
+    expect(reusedMemberTakedowns(again)).toBe(copy.members.length);
+    expect(JSON.stringify(again)).toBe(JSON.stringify(designScheme(structuredClone(copy))));
   });
 
   it('property: any chain of member edits, each re-designed from the last result, ends at the full design of the final plan (bare and composite)', () => {
