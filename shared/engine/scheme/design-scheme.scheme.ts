@@ -641,7 +641,7 @@ export function designScheme(plan: Plan, options: SchemeOptions = {}): SchemeRes
     if (fromTemplates) return fromTemplates;
   }
   const geometry = planGeometry(plan, memo?.geometry ?? null);
-  // The last pass is reused only on the same framing geometry with the same loads and basis.
+  // The last pass is reused only on the same framing geometry and design basis (placed loads are compared in the takedown).
   const lastPass = memo?.last && memo.last.geometry === geometry && sameValue(passRest(plan), memo.last.rest) ? memo.last : null;
   const core = designCore(plan, geometry, options, table, previous, false, lastPass);
   const result = buildSchemeResult(plan, core.takedown, core.designs, core.loadsOf, core.extrasOf, core.sites, options.memberLoads !== false);
@@ -650,7 +650,6 @@ export function designScheme(plan: Plan, options: SchemeOptions = {}): SchemeRes
   return result;
 }
 
-/** The takedown of a plan with each member sized as it is reached (wet stage and grouping included). */
 /** The LastPass of a pass just run: copies made only of members worked out again, and of the rest if it changed. */
 function nextLastPass(plan: Plan, geometry: PlanGeometryMemo, core: ReusableCore, before: LastPass | null): LastPass {
   const { pass, takedown } = core;
@@ -670,6 +669,7 @@ interface ReusableCore {
   wet: LastPass['wet'];
 }
 
+/** The takedown of a plan with each member sized as it is reached (wet stage and grouping included). */
 function designCore(
   plan: Plan, geometry: PlanGeometry, options: SchemeOptions, table: DesignTable, previous: DesignTable | null, traced: boolean, last: LastPass | null = null,
 ): DesignCore {
