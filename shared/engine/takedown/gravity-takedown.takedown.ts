@@ -463,19 +463,7 @@ export function runTakedown(plan: Plan, options: TakedownOptions = {}): Takedown
         if (!target || !topology.members.has(support.id)) continue;
         deliverReaction((source ??= `${mt.kind} ${id} reaction`), r, support.position_ft, target.loads, target.areas);
       } else if (support.kind === 'column') {
-        receipts.push({
-          columnId: support.id,
-          level: fm.level,
-          D_kip: r.D_kip,
-          L_kip: r.L_kip,
-          Lreducible_kip: r.Lreducible_kip,
-          Lr_kip: r.Lr_kip,
-          S_kip: r.S_kip,
-          area_ft2: r.area_ft2,
-          reducibleArea_ft2: r.reducibleArea_ft2,
-          cantileverSlab: carriesOverhang,
-          source: `${mt.kind} ${id} ${end}`,
-        });
+        receipts.push(columnReceipt(support.id, fm.level, r, carriesOverhang, `${mt.kind} ${id} ${end}`));
         if (trace) trace.receiptFrom.push(id);
       }
     }
@@ -495,6 +483,23 @@ export function runTakedown(plan: Plan, options: TakedownOptions = {}): Takedown
     byLevelFloorArea_ft2: deckApplied.byLevel,
     problems,
     placed,
+  };
+}
+
+/** A member end's reaction as its column receives it. */
+function columnReceipt(columnId: string, level: string, r: EndReaction, cantileverSlab: boolean, source: string): ColumnReceipt {
+  return {
+    columnId,
+    level,
+    D_kip: r.D_kip,
+    L_kip: r.L_kip,
+    Lreducible_kip: r.Lreducible_kip,
+    Lr_kip: r.Lr_kip,
+    S_kip: r.S_kip,
+    area_ft2: r.area_ft2,
+    reducibleArea_ft2: r.reducibleArea_ft2,
+    cantileverSlab,
+    source,
   };
 }
 
@@ -521,19 +526,7 @@ function reusedMember(
       if (!target) continue;
       deliverReaction((source ??= `${mt.kind} ${mt.id} reaction`), r, support.position_ft, target.loads, target.areas);
     } else if (support.kind === 'column') {
-      receipts.push({
-        columnId: support.id,
-        level: fm.level,
-        D_kip: r.D_kip,
-        L_kip: r.L_kip,
-        Lreducible_kip: r.Lreducible_kip,
-        Lr_kip: r.Lr_kip,
-        S_kip: r.S_kip,
-        area_ft2: r.area_ft2,
-        reducibleArea_ft2: r.reducibleArea_ft2,
-        cantileverSlab: mt.carriesOverhang,
-        source: `${mt.kind} ${mt.id} ${end}`,
-      });
+      receipts.push(columnReceipt(support.id, fm.level, r, mt.carriesOverhang, `${mt.kind} ${mt.id} ${end}`));
     }
   }
 }

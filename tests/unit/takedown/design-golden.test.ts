@@ -12,6 +12,7 @@ import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import { parsePlanFile, type Plan, type PlanMember } from '../../../shared/schemas/plan.schema';
 import { designScheme } from '../../../shared/engine/scheme/design-scheme.scheme';
 import { runTakedown, type TakedownResult } from '../../../shared/engine/takedown/gravity-takedown.takedown';
+import { differences } from './differences';
 
 const SNAPSHOT = new URL('./design-golden.snapshot.json', import.meta.url);
 
@@ -128,20 +129,6 @@ function incrementalCase(): { incremental: unknown; full: unknown } {
     incremental: JSON.parse(JSON.stringify(designScheme(changed, { previous: first, changedIds: [target.id] }))),
     full: JSON.parse(JSON.stringify(designScheme(changed))),
   };
-}
-
-/** Paths where a and b differ: numbers beyond the relative tolerance, anything else at all. */
-function differences(a: unknown, b: unknown, relTol: number, path = '$', out: string[] = []): string[] {
-  if (typeof a === 'number' && typeof b === 'number') {
-    if (Math.abs(a - b) > relTol * Math.max(1, Math.abs(a), Math.abs(b))) out.push(`${path}: ${a} ≠ ${b}`);
-  } else if (Array.isArray(a) && Array.isArray(b)) {
-    if (a.length !== b.length) out.push(`${path}: length ${a.length} ≠ ${b.length}`);
-    else a.forEach((x, i) => differences(x, b[i], relTol, `${path}[${i}]`, out));
-  } else if (a && b && typeof a === 'object' && typeof b === 'object' && !Array.isArray(a) && !Array.isArray(b)) {
-    const keys = new Set([...Object.keys(a), ...Object.keys(b)]);
-    for (const k of keys) differences((a as Record<string, unknown>)[k], (b as Record<string, unknown>)[k], relTol, `${path}.${k}`, out);
-  } else if (a !== b) out.push(`${path}: ${JSON.stringify(a)} ≠ ${JSON.stringify(b)}`);
-  return out;
 }
 
 describe('golden: takedown and scheme design output is unchanged', () => {

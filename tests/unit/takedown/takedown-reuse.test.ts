@@ -8,6 +8,7 @@ import fc from 'fast-check';
 import { parsePlanFile, type Plan } from '../../../shared/schemas/plan.schema';
 import { designScheme, reusedMemberTakedowns, type SchemeResult } from '../../../shared/engine/scheme/design-scheme.scheme';
 import { emptyPlan, member, zone } from './plan-builder';
+import { differences } from './differences';
 
 /** One level: bays×bays of 30 ft, girders along x, beams at 7.5 ft along y, a point load and a line load. */
 function level(baysX = 3, baysY = 2): Plan {
@@ -29,22 +30,6 @@ function compositeLevel(): Plan {
   doc.designBasis.composite = { enabled: true };
   doc.decks[0].slab = { ribHeight_in: 3, toppingThickness_in: 3.25, ribAvgWidth_in: 6, ribSpacing_in: 12, concreteWeight_pcf: 115, fc_ksi: 3, deckWeight_psf: 2 };
   return parsePlanFile(doc).plan!;
-}
-
-/** Paths where a and b differ: numbers beyond the relative tolerance, anything else at all. */
-function differences(a: unknown, b: unknown, relTol: number, path = '$', out: string[] = []): string[] {
-  if (typeof a === 'number' && typeof b === 'number') {
-    if (Math.abs(a - b) > relTol * Math.max(1, Math.abs(a), Math.abs(b))) out.push(`${path}: ${a} ≠ ${b}`);
-  } else if (Array.isArray(a) && Array.isArray(b)) {
-    if (a.length !== b.length) out.push(`${path}: length ${a.length} ≠ ${b.length}`);
-    else a.forEach((x, i) => differences(x, b[i], relTol, `${path}[${i}]`, out));
-  } else if (a && b && typeof a === 'object' && typeof b === 'object' && !Array.isArray(a) && !Array.isArray(b)) {
-    const ka = Object.keys(a);
-    const kb = Object.keys(b);
-    if (ka.join() !== kb.join()) out.push(`${path}: keys ${ka.join()} ≠ ${kb.join()}`);
-    for (const k of ka) differences((a as Record<string, unknown>)[k], (b as Record<string, unknown>)[k], relTol, `${path}.${k}`, out);
-  } else if (a !== b) out.push(`${path}: ${JSON.stringify(a)} ≠ ${JSON.stringify(b)}`);
-  return out;
 }
 
 const data = (r: SchemeResult) => JSON.parse(JSON.stringify(r)) as unknown;
