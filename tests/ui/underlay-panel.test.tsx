@@ -1,5 +1,5 @@
 import { QueryClientProvider } from '@tanstack/react-query';
-import { act, render, screen, waitFor, within } from '@testing-library/react';
+import { act, fireEvent, render, screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import type Konva from 'konva';
 import { createRef } from 'react';
@@ -215,6 +215,29 @@ describe('UnderlayPanel: PDF underlays', () => {
     await userEvent.click(screen.getByRole('checkbox', { name: 'Lock' }));
     await waitFor(() => expect(calls.filter((c) => c.method === 'PATCH')).toHaveLength(2));
     expect(JSON.parse(String(calls.filter((c) => c.method === 'PATCH')[1].body))).toEqual({ locked: true });
+  });
+
+  it('when Lock is ticked while the server is still answering, then the box is ticked and Calibrate disabled at once; a refusal unticks it again', async () => {
+    let answer: ((r: Response) => void) | null = null;
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async (_url: string, init?: RequestInit) => {
+        if ((init?.method ?? 'GET') === 'GET') return jsonResponse(200, { underlays: [pdf()] });
+        return new Promise<Response>((resolve) => (answer = resolve));
+      }),
+    );
+    renderPanel();
+    const lock = await screen.findByRole('checkbox', { name: 'Lock' });
+    expect(lock).not.toBeChecked();
+    fireEvent.click(lock); // a click, and nothing awaited after it (the query cache updates a moment later)
+    expect(lock).toBeChecked(); // in the same event, before any answer from the server
+    expect(screen.getByRole('button', { name: 'Calibrate' })).toBeDisabled();
+    expect(screen.getByRole('combobox', { name: 'Page' })).toBeDisabled();
+    await waitFor(() => expect(answer).not.toBeNull()); // the PATCH is on its way
+    await act(async () => answer!(jsonResponse(403, { error: { code: 'forbidden', message: 'Only an engineer or the owner may change underlays.' } })));
+    expect(await screen.findByText('Only an engineer or the owner may change underlays.')).toBeVisible();
+    await waitFor(() => expect(screen.getByRole('checkbox', { name: 'Lock' })).not.toBeChecked());
+    expect(screen.getByRole('button', { name: 'Calibrate' })).toBeEnabled();
   });
 
   it('when the underlay is locked, then Calibrate, Pick on the plan and the page picker are disabled', async () => {

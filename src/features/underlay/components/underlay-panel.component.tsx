@@ -68,6 +68,12 @@ function UnderlayRow({
   const [opacity, setOpacity] = useState(underlay.opacity);
   const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
   useEffect(() => setOpacity(underlay.opacity), [underlay.opacity]);
+  // The two check boxes follow a click in the same event (the query cache is updated a moment
+  // later, after in-flight reads are cancelled), and then follow the stored value again.
+  const [visible, setVisible] = useState(underlay.visible);
+  const [locked, setLocked] = useState(underlay.locked);
+  useEffect(() => setVisible(underlay.visible), [underlay.visible]);
+  useEffect(() => setLocked(underlay.locked), [underlay.locked]);
   useEffect(() => () => {
     if (timer.current) clearTimeout(timer.current);
   }, []);
@@ -103,8 +109,12 @@ function UnderlayRow({
           <label className="inline-flex items-center gap-1.5">
             <input
               type="checkbox"
-              checked={underlay.visible}
-              onChange={(e) => update.mutate({ underlayId: underlay.id, patch: { visible: e.target.checked } })}
+              checked={visible}
+              onChange={(e) => {
+                const was = visible;
+                setVisible(e.target.checked);
+                update.mutate({ underlayId: underlay.id, patch: { visible: e.target.checked } }, { onError: () => setVisible(was) });
+              }}
               className="size-4 accent-[var(--color-accent)]"
             />
             Show
@@ -120,7 +130,7 @@ function UnderlayRow({
               <select
                 id={`${id}-page`}
                 value={underlay.page ?? 1}
-                disabled={underlay.locked || update.isPending}
+                disabled={locked || update.isPending}
                 onChange={(e) => update.mutate({ underlayId: underlay.id, patch: { page: Number(e.target.value) } })}
                 className="h-8 rounded-[3px] border border-ink/60 bg-paper px-1 text-sm"
               >
@@ -135,17 +145,21 @@ function UnderlayRow({
           <label className="inline-flex items-center gap-1.5" title="A locked underlay keeps its place, scale and page">
             <input
               type="checkbox"
-              checked={underlay.locked}
-              onChange={(e) => update.mutate({ underlayId: underlay.id, patch: { locked: e.target.checked } })}
+              checked={locked}
+              onChange={(e) => {
+                const was = locked;
+                setLocked(e.target.checked);
+                update.mutate({ underlayId: underlay.id, patch: { locked: e.target.checked } }, { onError: () => setLocked(was) });
+              }}
               className="size-4 accent-[var(--color-accent)]"
             />
             Lock
           </label>
-          <Button variant="secondary" onClick={onCalibrate} disabled={underlay.locked}>
+          <Button variant="secondary" onClick={onCalibrate} disabled={locked}>
             Calibrate
           </Button>
           {onPickCalibration ? (
-            <Button variant="quiet" onClick={() => onPickCalibration(underlay)} disabled={underlay.locked}>
+            <Button variant="quiet" onClick={() => onPickCalibration(underlay)} disabled={locked}>
               Pick on the plan
             </Button>
           ) : null}
