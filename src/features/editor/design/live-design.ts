@@ -8,6 +8,7 @@
 import { designScheme, type SchemeMember, type SchemeResult } from '../../../../shared/engine/index';
 import type { Plan } from '../../../../shared/schemas/plan.schema';
 import type { DesignReply } from './live-design.types';
+import { applyMemberDelta } from './member-delta';
 
 export interface LiveDesignSnapshot {
   result: SchemeResult | null;
@@ -99,12 +100,26 @@ export class LiveDesign {
     const editedAt = this.editAt.get(reply.seq) ?? performance.now();
     for (const k of [...this.editAt.keys()]) if (k <= reply.seq) this.editAt.delete(k);
     const stale = this.queued !== null;
-    if ('error' in reply) {
-      this.publish({ ...this.snapshot, pending: stale, error: reply.error, lastEngineMs: reply.engineMs });
+    let result: SchemeResult | null = null;
+    if (!('error' in reply)) {
+      try {
+        result = reply.members ? { ...reply.result, members: applyMemberDelta(this.previous?.members, reply.members) } : reply.result;
+      } catch {
+        // Never expected (replies come in order and each is kept): design that plan again here,
+        // and every plan after it.
+        this.worker?.terminate();
+        this.worker = null;
+        if (!this.queued && this.inFlight) this.queued = { seq: reply.seq, plan: this.inFlight };
+        this.flush();
+        return;
+      }
+    }
+    if ('error' in reply || result === null) {
+      this.publish({ ...this.snapshot, pending: stale, error: 'error' in reply ? reply.error : null, lastEngineMs: reply.engineMs });
     } else {
-      this.previous = reply.result;
-      const byId = new Map(reply.result.members.map((m) => [m.id, m]));
-      this.publish({ ...this.snapshot, result: reply.result, plan: this.inFlight, byId, pending: stale, error: null, lastEngineMs: reply.engineMs });
+      this.previous = result;
+      const byId = new Map(result.members.map((m) => [m.id, m]));
+      this.publish({ ...this.snapshot, result, plan: this.inFlight, byId, pending: stale, error: null, lastEngineMs: reply.engineMs });
       // Measured when the frame showing the sizes has been drawn.
       const raf = typeof requestAnimationFrame === 'function' ? requestAnimationFrame : (f: () => void) => setTimeout(f, 0);
       raf(() => {

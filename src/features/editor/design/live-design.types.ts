@@ -6,4 +6,13 @@ export interface DesignRequest {
   plan: Plan;
 }
 
-export type DesignReply = { seq: number; result: SchemeResult; engineMs: number } | { seq: number; error: string; engineMs: number };
+import type { SchemeMember } from '../../../../shared/engine/index';
+
+/**
+ * A design, or why there is none. From the worker, `members` lists the result's members with
+ * null for each one equal to the same place in its last reply (member-delta.ts), and
+ * `result.members` is empty; on the main thread `result` is whole.
+ */
+export type DesignReply =
+  | { seq: number; result: SchemeResult; members?: (SchemeMember | null)[]; engineMs: number }
+  | { seq: number; error: string; engineMs: number };

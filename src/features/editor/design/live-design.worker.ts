@@ -4,9 +4,12 @@ import '../../../lib/zod-jitless';
 import { designScheme, type SchemeResult } from '../../../../shared/engine/index';
 import type { Plan } from '../../../../shared/schemas/plan.schema';
 import type { DesignReply, DesignRequest } from './live-design.types';
+import { memberDelta } from './member-delta';
 
 const scope = self as unknown as { onmessage: ((e: MessageEvent<DesignRequest>) => void) | null; postMessage(message: DesignReply): void };
 let previous: SchemeResult | undefined;
+/** The members of the last reply: the main thread holds them too, so only changed ones are sent. */
+let sent: SchemeResult['members'] | undefined;
 
 scope.onmessage = (e) => {
   const { seq, plan } = e.data;
@@ -14,7 +17,10 @@ scope.onmessage = (e) => {
   try {
     const result = designScheme(plan as Plan, { previous });
     previous = result;
-    scope.postMessage({ seq, result, engineMs: performance.now() - t0 });
+    const engineMs = performance.now() - t0;
+    const members = memberDelta(sent, result.members);
+    sent = result.members;
+    scope.postMessage({ seq, result: { ...result, members: [] }, members, engineMs });
   } catch (err) {
     scope.postMessage({ seq, error: err instanceof Error ? err.message : String(err), engineMs: performance.now() - t0 });
   }
