@@ -23,7 +23,7 @@ import type { MemberLoad } from '../analysis/member-load.types';
 import type { TakedownLoad } from '../takedown/member-load.takedown';
 import { planGeometry, type PlanGeometry, type PlanGeometryMemo } from './plan-geometry-memo.scheme';
 import { lockedShapeWeightPlf, prepareDeckLoads, reducedLiveKip, runTakedown, type PreparedDeckLoads, type EndReaction, type MemberTakedown, type TakedownResult, type TakedownReuse } from '../takedown/gravity-takedown.takedown';
-import { copyValue, sameValue } from '../plain-value';
+import { copyValue, sameValue, sameValueInOrder } from '../plain-value';
 import type { Bracing } from '../takedown/member-bracing.takedown';
 import { assignMarks, levelMarkPrefix, sharedMarkConflicts, type MarkInput } from './member-marks.scheme';
 import { compositeMemberInput, compositeSites, planNeedsWetStage, wetStagePlan, type MemberCompositeStatus } from './composite-plan.scheme';
@@ -405,6 +405,35 @@ interface SchemeMemo {
   last: LastPass | null;
   /** How many members this run took from the previous run's takedown (TakedownReuse). */
   reusedMembers: number;
+  /** What a run from level templates placed, for the next such run (see PlacedMemo). */
+  placed?: PlacedMemo;
+}
+
+/**
+ * The members a run from level templates placed on the levels, kept so the next run reuses
+ * each placed result that would come out the same. A placed member's result is a function of
+ * its template member's result (compared by value, then the earlier object kept), its id,
+ * level, mark and whether an error stands against it, the level's real ids (the renaming) and
+ * whether loads are reported; where all of these are as before, the earlier object is the
+ * result. After a one-member edit on one floor, the other floors' members are all reused.
+ */
+interface PlacedMemo {
+  withLoads: boolean;
+  /** Template members' results by template signature and placeholder id. */
+  bases: Map<string, Map<string, SchemeMember>>;
+  /** Each placed member's result, and the template member's result it was placed from, by id. */
+  members: Map<string, SchemeMember>;
+  baseOf: Map<string, SchemeMember>;
+  /** Each level's real ids by placeholder rank. */
+  levelIds: Map<string, readonly string[]>;
+}
+
+/** A result's placed members, by template signature (see PlacedMemo); signatureOf names each core's template. */
+interface PlacedReuse {
+  before: PlacedMemo | null;
+  signatureOf: Map<DesignCore, string>;
+  /** Filled by buildSchemeResult for the next run. */
+  next: PlacedMemo | null;
 }
 function cacheOf(result: SchemeResult | undefined): SchemeMemo | null {
   return (result as unknown as { [CACHE]?: SchemeMemo } | undefined)?.[CACHE] ?? null;
@@ -637,7 +666,7 @@ export function designScheme(plan: Plan, options: SchemeOptions = {}): SchemeRes
   const previous = memo?.designs ?? null;
   const templates = options.typicalLevels === false ? null : typicalLevelTemplates(plan);
   if (templates) {
-    const fromTemplates = designFromTemplates(plan, templates, options, table, previous, memo?.templates ?? null);
+    const fromTemplates = designFromTemplates(plan, templates, options, table, previous, memo?.templates ?? null, memo?.placed ?? null);
     if (fromTemplates) return fromTemplates;
   }
   const geometry = planGeometry(plan, memo?.geometry ?? null);
@@ -793,6 +822,7 @@ function designCore(
  */
 function designFromTemplates(
   plan: Plan, templates: LevelTemplate[], options: SchemeOptions, table: DesignTable, previous: DesignTable | null, previousGeometry: Map<string, PlanGeometryMemo> | null,
+  previousPlaced: PlacedMemo | null,
 ): SchemeResult | null {
   const wetWhole = planNeedsWetStage(plan);
   for (const t of templates) if (planNeedsWetStage(t.plan) !== wetWhole) return null;
@@ -910,8 +940,9 @@ function designFromTemplates(
     byLevelFloorArea_ft2: deckApplied.byLevel,
     problems: [],
   };
-  const result = buildSchemeResult(plan, takedown, designs, new Map(), new Map(), wetWhole ? new Map() : null, options.memberLoads !== false, marksFromTemplates(plan, templates, cores));
-  const next: SchemeMemo = { designs: table, geometry: null, templates: geometries, last: null, reusedMembers: 0 };
+  const reuse: PlacedReuse = { before: previousPlaced, signatureOf: new Map(templates.map((t, k) => [cores[k], t.signature])), next: null };
+  const result = buildSchemeResult(plan, takedown, designs, new Map(), new Map(), wetWhole ? new Map() : null, options.memberLoads !== false, marksFromTemplates(plan, templates, cores), reuse);
+  const next: SchemeMemo = { designs: table, geometry: null, templates: geometries, last: null, reusedMembers: 0, placed: reuse.next ?? undefined };
   Object.defineProperty(result, CACHE, { value: next, enumerable: false });
   return result;
 }
@@ -1085,7 +1116,7 @@ function marksFromTemplates(plan: Plan, templates: LevelTemplate[], cores: Desig
 function buildSchemeResult(
   plan: Plan, takedown: SchemeTakedown, designs: Map<string, DesignEntry>, loadsOf: Map<string, MemberLoad[]>,
   extrasOf: Map<string, MemberDesignExtras> = new Map(), sites: Map<string, MemberCompositeStatus> | null = null, withLoads = true,
-  presetMarks: Map<string, string> | null = null,
+  presetMarks: Map<string, string> | null = null, reuse: PlacedReuse | null = null,
 ): SchemeResult {
   const problems: PlanProblem[] = [...takedown.problems];
   const fileOrder = plan.members.filter((m) => takedown.members.has(m.id));
@@ -1121,9 +1152,48 @@ function buildSchemeResult(
       const { core, pid } = p;
       const entry = core.designs.get(pid);
       base = schemeMember(m, core.takedown.members.get(pid)!, entry && !('error' in entry) ? entry : null, '', false, core.loadsOf.get(pid), core.extrasOf.get(pid), sites ? core.sites?.get(pid) : undefined, sites !== null, withLoads);
+      if (placed) {
+        const signature = reuse!.signatureOf.get(core)!;
+        const earlier = before?.bases.get(signature)?.get(pid);
+        if (earlier && sameValueInOrder(base, earlier, seen)) base = earlier;
+        let bases = placed.bases.get(signature);
+        if (!bases) placed.bases.set(signature, (bases = new Map()));
+        bases.set(pid, base);
+      }
       built.set(pid, base);
     }
     return base;
+  };
+  // Placed members of the previous run from templates, and this run's for the next (PlacedMemo).
+  const before = reuse?.before && reuse.before.withLoads === withLoads ? reuse.before : null;
+  const placed: PlacedMemo | null = reuse ? { withLoads, bases: new Map(), members: new Map(), baseOf: new Map(), levelIds: new Map() } : null;
+  if (reuse) reuse.next = placed;
+  const seen = new WeakMap<object, object>();
+  const sameRenaming = new Map<LevelRenamer['level'], boolean>();
+  const renamedAsBefore = (level: LevelRenamer['level']): boolean => {
+    let same = sameRenaming.get(level);
+    if (same === undefined) {
+      const ids = before?.levelIds.get(level.levelId);
+      same = ids !== undefined && ids.length === level.ids.length && ids.every((id, i) => id === level.ids[i]);
+      sameRenaming.set(level, same);
+      placed!.levelIds.set(level.levelId, level.ids);
+    }
+    return same;
+  };
+  const placedResult = (p: Placement, m: Plan['members'][number], mark: string, errored: boolean): SchemeMember => {
+    const base = templateMember(p, m);
+    let member: SchemeMember | undefined;
+    if (placed) {
+      const same = renamedAsBefore(p.at.level);
+      const was = same && before!.baseOf.get(m.id) === base ? before!.members.get(m.id) : undefined;
+      if (was && was.mark === mark && was.level === m.level && was.passes === (base.passes && !errored)) member = was;
+    }
+    member ??= placedMember(base, m, mark, errored, p.at, withLoads);
+    if (placed) {
+      placed.members.set(m.id, member);
+      placed.baseOf.set(m.id, base);
+    }
+    return member;
   };
 
   const members: SchemeMember[] = fileOrder.map((m) => {
@@ -1137,7 +1207,7 @@ function buildSchemeResult(
     const mark = marks.get(m.id) ?? '';
     const errored = erroredIds.has(m.id);
     const placement = takedown.placements?.get(m.id);
-    if (placement) return placedMember(templateMember(placement, m), m, mark, errored, placement.at, withLoads);
+    if (placement) return placedResult(placement, m, mark, errored);
     return schemeMember(m, takedown.members.get(m.id)!, design, mark, errored, loadsOf.get(m.id), extrasOf.get(m.id), sites?.get(m.id), sites !== null, withLoads);
   });
 

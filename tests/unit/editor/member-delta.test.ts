@@ -111,7 +111,7 @@ class FakeWorker {
     const members = FakeWorker.broken ? result.members.map(() => null) : memberDelta(this.sent, result.members);
     this.sent = result.members;
     const reply = structuredClone({ seq: msg.seq, result: { ...result, members: [] }, members, engineMs: 1 });
-    queueMicrotask(() => this.onmessage?.({ data: reply } as MessageEvent<DesignReply>));
+    queueMicrotask(() => this.onmessage?.({ data: reply } as unknown as MessageEvent<DesignReply>));
   }
   terminate() {
     this.terminated = true;

@@ -211,3 +211,69 @@ describe('typical levels: marks', () => {
     expect(marksOn('L25').every((m) => m.startsWith('25'))).toBe(true);
   });
 });
+
+describe('typical levels: a re-design keeps the placed members that come out the same', () => {
+  const sameObjects = (before: ReturnType<typeof designScheme>, after: ReturnType<typeof designScheme>) => {
+    const byId = new Map(before.members.map((m) => [m.id, m]));
+    return after.members.filter((m) => byId.get(m.id) === m);
+  };
+
+  it('when one beam on one of five alike floors is locked to another size, then every member of the other floors is the earlier object, that floor\'s are new, and the text is a fresh design\'s', () => {
+    const plan = regularBuildingPlan(6, 4, 3);
+    const first = designScheme(plan);
+    const changed = structuredClone(plan);
+    changed.members.find((m) => m.id === 'L4-B5-1')!.shape = 'W24X55';
+    const again = designScheme(changed, { previous: first });
+    expect(JSON.stringify(again)).toBe(JSON.stringify(designScheme(changed, { typicalLevels: false })));
+    const kept = sameObjects(first, again);
+    // L4 is no longer like the others, so it is a template of its own with nothing earlier to keep.
+    expect(kept.some((m) => m.level === 'L4')).toBe(false);
+    expect(kept.length).toBe(again.members.filter((m) => m.level !== 'L4').length);
+    // The same plan again: every member is kept.
+    expect(sameObjects(again, designScheme(changed, { previous: again })).length).toBe(again.members.length);
+  });
+
+  it('property: over any chain of edits (sizes, level names, loads, ids renamed, member loads on or off), each re-design reads as a fresh design', () => {
+    type Edit =
+      | { kind: 'size'; level: number; beam: number; shape: string | null }
+      | { kind: 'name'; level: number; name: string }
+      | { kind: 'point'; level: number; D: number }
+      | { kind: 'rename'; level: number }
+      | { kind: 'loads'; on: boolean };
+    const edit: fc.Arbitrary<Edit> = fc.oneof(
+      fc.record({ kind: fc.constant('size' as const), level: fc.integer({ min: 0, max: 3 }), beam: fc.integer({ min: 0, max: 12 }), shape: fc.constantFrom(null, 'W16X31', 'W21X50') }),
+      fc.record({ kind: fc.constant('name' as const), level: fc.integer({ min: 0, max: 3 }), name: fc.constantFrom('Level 9', 'Mezzanine', '') }),
+      fc.record({ kind: fc.constant('point' as const), level: fc.integer({ min: 0, max: 3 }), D: fc.integer({ min: 1, max: 8 }) }),
+      fc.record({ kind: fc.constant('rename' as const), level: fc.integer({ min: 0, max: 3 }) }),
+      fc.record({ kind: fc.constant('loads' as const), on: fc.boolean() }),
+    );
+    let keptAny = 0;
+    fc.assert(
+      fc.property(fc.array(edit, { minLength: 1, maxLength: 5 }), (edits) => {
+        let plan = regularBuildingPlan(5, 4, 3);
+        let memberLoads = true;
+        let last = designScheme(plan);
+        for (const e of edits) {
+          plan = structuredClone(plan);
+          const level = plan.levels[e.kind === 'loads' ? 0 : e.level];
+          if (e.kind === 'size') plan.members.filter((m) => m.level === level.id && m.kind === 'beam')[e.beam].shape = e.shape;
+          else if (e.kind === 'name') level.name = e.name;
+          else if (e.kind === 'point') plan.pointLoads.push({ id: `${level.id}-extra${plan.pointLoads.length}`, level: level.id, x_ft: 20, y_ft: 14, D_kip: e.D, L_kip: 1 });
+          else if (e.kind === 'rename') {
+            // The level's ids renamed in the same order (the level stays alike; its renaming differs).
+            for (const list of [plan.members, plan.decks, plan.pointLoads, plan.lineLoads, plan.openings] as { id?: string; level: string }[][]) {
+              for (const el of list) if (el.level === level.id) el.id = `${el.id}r`;
+            }
+          } else memberLoads = e.on;
+          const next = designScheme(plan, { previous: last, memberLoads });
+          expect(JSON.stringify(next)).toBe(JSON.stringify(designScheme(plan, { memberLoads, typicalLevels: false })));
+          keptAny += sameObjects(last, next).length;
+          last = next;
+        }
+        return true;
+      }),
+      { numRuns: 20, seed: 20261203 },
+    );
+    expect(keptAny).toBeGreaterThan(0); // the reuse path was taken
+  });
+});
