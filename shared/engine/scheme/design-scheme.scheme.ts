@@ -421,9 +421,9 @@ interface PlacedMemo {
   withLoads: boolean;
   /** Template members' results by template signature and placeholder id. */
   bases: Map<string, Map<string, SchemeMember>>;
-  /** Each placed member's result, and the template member's result it was placed from, by id. */
-  members: Map<string, SchemeMember>;
-  baseOf: Map<string, SchemeMember>;
+  /** The result's members in file order, and for each the template member's result it was placed from (undefined: not placed). */
+  members: readonly SchemeMember[];
+  baseAt: (SchemeMember | undefined)[];
   /** Each level's real ids by placeholder rank. */
   levelIds: Map<string, readonly string[]>;
 }
@@ -1166,7 +1166,7 @@ function buildSchemeResult(
   };
   // Placed members of the previous run from templates, and this run's for the next (PlacedMemo).
   const before = reuse?.before && reuse.before.withLoads === withLoads ? reuse.before : null;
-  const placed: PlacedMemo | null = reuse ? { withLoads, bases: new Map(), members: new Map(), baseOf: new Map(), levelIds: new Map() } : null;
+  const placed: PlacedMemo | null = reuse ? { withLoads, bases: new Map(), members: [], baseAt: [], levelIds: new Map() } : null;
   if (reuse) reuse.next = placed;
   const seen = new WeakMap<object, object>();
   const sameRenaming = new Map<LevelRenamer['level'], boolean>();
@@ -1180,23 +1180,19 @@ function buildSchemeResult(
     }
     return same;
   };
-  const placedResult = (p: Placement, m: Plan['members'][number], mark: string, errored: boolean): SchemeMember => {
+  /** The member at `index` of the file-order list (an earlier list's member there is kept only if its id is the same). */
+  const placedResult = (p: Placement, m: Plan['members'][number], index: number, mark: string, errored: boolean): SchemeMember => {
     const base = templateMember(p, m);
-    let member: SchemeMember | undefined;
     if (placed) {
-      const same = renamedAsBefore(p.at.level);
-      const was = same && before!.baseOf.get(m.id) === base ? before!.members.get(m.id) : undefined;
-      if (was && was.mark === mark && was.level === m.level && was.passes === (base.passes && !errored)) member = was;
+      placed.baseAt[index] = base;
+      const renamed = renamedAsBefore(p.at.level); // (also notes the level's renaming for the next run)
+      const was = renamed && before!.baseAt[index] === base ? before!.members[index] : undefined;
+      if (was && was.id === m.id && was.mark === mark && was.level === m.level && was.passes === (base.passes && !errored)) return was;
     }
-    member ??= placedMember(base, m, mark, errored, p.at, withLoads);
-    if (placed) {
-      placed.members.set(m.id, member);
-      placed.baseOf.set(m.id, base);
-    }
-    return member;
+    return placedMember(base, m, mark, errored, p.at, withLoads);
   };
 
-  const members: SchemeMember[] = fileOrder.map((m) => {
+  const members: SchemeMember[] = fileOrder.map((m, index) => {
     const entry = designs.get(m.id);
     const design = entry && !('error' in entry) ? entry : null;
     if (entry && 'error' in entry) {
@@ -1207,9 +1203,10 @@ function buildSchemeResult(
     const mark = marks.get(m.id) ?? '';
     const errored = erroredIds.has(m.id);
     const placement = takedown.placements?.get(m.id);
-    if (placement) return placedResult(placement, m, mark, errored);
+    if (placement) return placedResult(placement, m, index, mark, errored);
     return schemeMember(m, takedown.members.get(m.id)!, design, mark, errored, loadsOf.get(m.id), extrasOf.get(m.id), sites?.get(m.id), sites !== null, withLoads);
   });
+  if (placed) placed.members = members.slice(); // its own list: a caller may reorder the result's
 
   // One pass; each sum sees its members in file order, as summing each filtered list would.
   let steelWeight_lb = 0;
