@@ -27,6 +27,12 @@ async function main(argv: string[]): Promise<CommandOutcome> {
 const argv = process.argv.slice(2);
 const pretty = argv.includes('--pretty') || process.stdout.isTTY === true;
 const write = (chunk: string) => void process.stdout.write(chunk);
+// A reader that stops early (`| head`) closes the pipe: stop quietly, as a command line tool does,
+// with the exit code already set, rather than print a stack trace for the write that failed.
+process.stdout.on('error', (e: NodeJS.ErrnoException) => {
+  if (e.code !== 'EPIPE') throw e;
+  process.exit();
+});
 
 main(argv.filter((a) => a !== '--pretty')).then((outcome) => {
   writeJsonDocument(outcome.json, write, pretty ? 2 : 0);

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { spawnSync } from 'node:child_process';
+import { spawn, spawnSync } from 'node:child_process';
 import { join } from 'node:path';
 import { statSync, utimesSync } from 'node:fs';
 
@@ -70,4 +70,26 @@ describe('npm run -s calc: the bundled command line', () => {
     expect(JSON.parse(r.stdout).members).toHaveLength(11);
     expect(statSync(bundle).mtimeMs).toBeGreaterThan(old.getTime() + 1000);
   }, 120_000);
+
+  it('when the reader closes the pipe early (| head), then calc stops quietly with the exit code of the design, no stack trace', async () => {
+    const full = calc(['plan', '--detail', '--pretty', fixture]);
+    expect(full.status).toBe(0);
+    expect(full.stdout.length).toBeGreaterThan(65_536); // more than a pipe holds, so a write meets the closed pipe
+    const child = spawn('npm', ['run', '-s', 'calc', '--', 'plan', '--detail', '--pretty', fixture], { cwd: root });
+    let stderr = '';
+    child.stderr.on('data', (d: Buffer) => (stderr += d.toString()));
+    child.stdout.once('data', () => child.stdout.destroy());
+    const code = await new Promise<number | null>((done) => child.on('close', done));
+    expect(stderr).not.toMatch(/EPIPE|Error|at /);
+    expect(code).toBe(full.status);
+  }, 120_000);
+
+  it("when the launcher starts, then this Node's V8 knows the flag it sets for a short process", async () => {
+    const { CALC_V8_FLAGS } = await import('../../../server/cli/calc-v8-flags.mjs');
+    expect(CALC_V8_FLAGS).toMatch(/^--interrupt-budget=\d+$/);
+    // V8 ignores an unknown flag set at run time, so ask a fresh Node, which refuses one (exit 9).
+    const r = spawnSync(process.execPath, [CALC_V8_FLAGS, '-e', '0'], { encoding: 'utf8' });
+    expect(r.status, r.stderr).toBe(0);
+    expect(spawnSync(process.execPath, ['--interrupt-budgett=1', '-e', '0']).status).toBe(9);
+  });
 });
