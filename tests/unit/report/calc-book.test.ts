@@ -141,6 +141,12 @@ describe('buildCalcBook on the two-bay fixture', () => {
     expect(basis).toContain('1.0L');
     expect(basis).toContain('Cb = 1.0');
     expect(basis).toContain('traced through the framing');
+    // Columns are sized (AISC 360-16 Chapter E) and composite beams designed (Chapter I): the
+    // assumptions say how, and no longer that columns are not sized.
+    expect(basis).not.toContain('columns are not sized');
+    expect(basis).toContain('Chapter E (E3, E7) with Lc = storey height and K = 1.0');
+    expect(basis).toContain('Rp = 0.6 unless the stud position in the rib'); // AISC 360-16 I8.2a
+    expect(basis).toContain('at least 25 % composite'); // common practice (design basis §6)
   });
 
   it('when built, then the cover and the caution carry the project, scheme and the licensed-engineer notice', () => {
