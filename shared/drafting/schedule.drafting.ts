@@ -48,7 +48,7 @@ export interface ScheduleRow {
   ratio: number | null;
   passes: boolean;
   weight_plf: number;
-  /** Composite design is not in Baywright yet: always null until it is. */
+  /** Studs and camber of a composite design (null on a bare-steel member). */
   camber_in: number | null;
   studs: number | null;
 }
