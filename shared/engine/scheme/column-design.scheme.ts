@@ -13,7 +13,7 @@ import type { Plan, PlanColumn } from '../../schemas/plan.schema';
 import { planProblem, type PlanProblem } from '../../schemas/plan-problem.schema';
 import type { ColumnTakedown } from '../takedown/column-stack.takedown';
 import { assignTiers, spliceLevelsOf, DEFAULT_STOREYS_PER_TIER, type TierLength } from '../sizing/column-tiers';
-import { designColumn, DEFAULT_COLUMN_SERIES, type ColumnDesignResult, type ColumnTierResult } from '../sizing/column-design';
+import { designColumn, DEFAULT_COLUMN_SERIES, LC_OVER_R_PREFERRED_MAX, type ColumnDesignResult, type ColumnTierResult } from '../sizing/column-design';
 import { normalizeShapeLabel } from '../../catalog/w-shapes.catalog';
 
 export interface ColumnLength extends TierLength {
@@ -107,7 +107,12 @@ export function designSchemeColumns(plan: Plan, stack: readonly ColumnTakedown[]
       lengths: c.levels.map((l, i) => ({ level: l.level, Lc_ft: lengths[i].Lc_ft, tier: tiers[i], D_kip: l.D_kip, L_kip: l.L_kip, Lr_kip: l.Lr_kip, S_kip: l.S_kip })),
     };
     const design = memoisedColumnDesign(input);
-    for (const t of design.tiers) if (!t.passes) problems.push(planProblem('error', 'column-fails', `Column ${c.id}: tier ${t.tier}${tierSpan(design, t)} — ${t.failure ?? 'does not pass'}`, { elementId: c.id }));
+    for (const t of design.tiers) {
+      if (!t.passes) problems.push(planProblem('error', 'column-fails', `Column ${c.id}: tier ${t.tier}${tierSpan(design, t)} — ${t.failure ?? 'does not pass'}`, { elementId: c.id }));
+      else if (t.locked && t.LcOverR !== null && t.LcOverR > LC_OVER_R_PREFERRED_MAX) {
+        problems.push(planProblem('warning', 'column-slender', `Column ${c.id}: tier ${t.tier}${tierSpan(design, t)} — locked size ${t.shape} has Lc/r = ${t.LcOverR.toFixed(0)}, over the ${LC_OVER_R_PREFERRED_MAX} that AISC 360-16 E2 (User Note) prefers; a size chosen by Baywright keeps within it`, { elementId: c.id }));
+      }
+    }
     columns.set(c.id, { design, lengths, spliceLevels: spliceLevelsOf(lengths, tiers), locked: lockedShape });
   }
   return { columns, problems };
@@ -159,7 +164,7 @@ export interface SchemeColumnLevel {
   spliceBelow: boolean;
 }
 
-export interface SchemeColumnTier extends ColumnTierResult {
+export interface SchemeColumnTier extends Omit<ColumnTierResult, 'LcOverR'> {
   /** Bottom and top levels of the tier. */
   fromLevel: string | null;
   toLevel: string;

@@ -11,6 +11,11 @@
  * conservative reading (the stack's own loads exclude it). Pr at the bottom of a tier usually
  * governs the tier, but every length in the tier is checked with its own Pr and Lc, so a tall
  * upper storey in a tier is never missed (conservative).
+ *
+ * Slenderness: the User Note of AISC 360-16 E2 says Lc/r preferably should not exceed 200.
+ * Sizing takes it as a limit (the conservative reading): a shape with Lc/r over 200 on any
+ * length of the tier is not chosen. A locked size is checked on strength as usual and its Lc/r
+ * is reported, so the scheme can warn of it.
  */
 import { listWShapes, nominalDepthIn } from '../../catalog/w-shapes.catalog';
 import { compressionConstantsFor, compressionStrengthE1, availableCompressionKip, type CompressionConstants, type CompressionStrength } from '../design/aisc360/chapter-e/e1';
@@ -65,6 +70,14 @@ export interface ColumnLengthResult {
   strength: CompressionStrength | null;
 }
 
+/** AISC 360-16 E2 User Note: Lc/r preferably should not exceed 200 (taken as a limit when sizing). */
+export const LC_OVER_R_PREFERRED_MAX = 200;
+
+/** Lc/r of a shape at Lc (in.), about its weaker axis (the smaller of rx and ry; AISC 360-16 E2). */
+export function slendernessE2(k: CompressionConstants, lcIn: number): number {
+  return lcIn / Math.min(k.rxIn, k.ryIn);
+}
+
 export interface ColumnTierResult {
   tier: number;
   shape: string | null;
@@ -79,6 +92,8 @@ export interface ColumnTierResult {
   failure: string | null;
   /** The next lighter allowed shape and its ratio, when there is one (for the column sheet). */
   lighter: { shape: string; ratio: number } | null;
+  /** The highest Lc/r of the tier's shape over its lengths (AISC 360-16 E2), null without a shape. */
+  LcOverR: number | null;
 }
 
 export interface ColumnDesignResult {
@@ -208,6 +223,9 @@ export function designColumn(input: ColumnDesignInput): ColumnDesignResult {
   let minWeightPlf = 0;
   for (const tier of tierOrder) {
     const indices = indicesOf.get(tier)!;
+    let longestIn = 0;
+    for (const i of indices) longestIn = Math.max(longestIn, input.lengths[i].Lc_ft * IN_PER_FT);
+    const tooSlender = (k: CompressionConstants) => slendernessE2(k, longestIn) > LC_OVER_R_PREFERRED_MAX;
     const lockedLabel = input.locked?.get(tier) ?? null;
     let chosen: CompressionConstants | null = null;
     let failure: string | null = null;
@@ -231,6 +249,7 @@ export function designColumn(input: ColumnDesignInput): ColumnDesignResult {
       for (let c = 0; c < candidates.length; c++) {
         const k = candidates[c];
         if (!input.allowHeavierAbove && k.weightPlf < minWeightPlf) continue;
+        if (tooSlender(k)) continue;
         let pcMax = squash[c];
         if (pcMax !== pcMax) pcMax = squash[c] = availableCompressionKip(k, 0, input.method);
         if (pcMax < prLowerKip) continue; // cannot pass at any length
@@ -244,16 +263,32 @@ export function designColumn(input: ColumnDesignInput): ColumnDesignResult {
         previous = { k, ev: e };
         if (!best || e.ratio < best.ev.ratio) best = { k, ev: e };
       }
+      let slenderOnly = false;
       if (!chosen) {
         // Nothing passed: evaluate every allowed shape to report the best ratio reached.
         for (let c = 0; c < candidates.length; c++) {
           const k = candidates[c];
           if (!input.allowHeavierAbove && k.weightPlf < minWeightPlf) continue;
+          if (tooSlender(k)) continue;
           const e = evaluateTier(input, k, indices, aboveKip, selfWeight, candidates, c);
           if (!best || e.ratio < best.ev.ratio) best = { k, ev: e };
         }
       }
-      if (!chosen && best) {
+      if (!chosen && !best) {
+        // Every allowed shape is over Lc/r 200 here: report the lightest that carries the load.
+        for (let c = 0; c < candidates.length && !best; c++) {
+          const k = candidates[c];
+          if (!input.allowHeavierAbove && k.weightPlf < minWeightPlf) continue;
+          const e = evaluateTier(input, k, indices, aboveKip, selfWeight, candidates, c);
+          if (e.passes) best = { k, ev: { ...e, passes: false } };
+        }
+        slenderOnly = best !== null;
+      }
+      if (!chosen && best && slenderOnly) {
+        chosen = best.k;
+        ev = best.ev;
+        failure = `no ${input.series.join('/')} shape has Lc/r ≤ ${LC_OVER_R_PREFERRED_MAX} over ${(longestIn / IN_PER_FT).toFixed(1)} ft (AISC 360-16 E2 User Note, taken as a limit); ${best.k.label} carries the load at Lc/r ${slendernessE2(best.k, longestIn).toFixed(0)}`;
+      } else if (!chosen && best) {
         chosen = best.k;
         ev = best.ev;
         failure = `no ${input.series.join('/')} shape${minWeightPlf > 0 && !input.allowHeavierAbove ? ` of at least ${minWeightPlf} lb/ft (the tier above)` : ''} passes; best ratio ${best.ev.ratio.toFixed(3)} with ${best.k.label}`;
@@ -274,6 +309,7 @@ export function designColumn(input: ColumnDesignInput): ColumnDesignResult {
       governingLevel: ev ? input.lengths[ev.governingIndex].level : null,
       failure: ev?.passes ? null : failure,
       lighter,
+      LcOverR: chosen ? slendernessE2(chosen, longestIn) : null,
     });
   }
 

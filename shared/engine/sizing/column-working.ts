@@ -13,7 +13,7 @@ import type { DesignMethod } from '../design/aisc360/resistance-factors';
 import { loadCombinations, type LoadCase } from '../loads/combinations';
 import { E_KSI, IN_PER_FT } from '../units/units.constants';
 import { slendernessLimitE3 } from '../design/aisc360/chapter-e/e3.equations';
-import { columnCandidates } from './column-design';
+import { columnCandidates, slendernessE2, LC_OVER_R_PREFERRED_MAX } from './column-design';
 
 export interface ColumnWorkingLengthInput {
   level: string;
@@ -147,6 +147,10 @@ export function columnWorking(input: ColumnWorkingInput): ColumnWorking {
     const first = indices[0];
     const aboveKip = first > 0 ? input.lengths[first - 1].selfWeight_kip : 0;
     const lengths: ColumnWorkingLength[] = [];
+    // The tier's longest length, where Lc/r is highest (AISC 360-16 E2 User Note: ≤ 200, a limit when sizing).
+    let longest = indices[0];
+    for (const i of indices) if (input.lengths[i].Lc_ft > input.lengths[longest].Lc_ft) longest = i;
+    const longestIn = input.lengths[longest].Lc_ft * IN_PER_FT;
     if (k) {
       for (const i of indices) {
         const len = input.lengths[i];
@@ -172,6 +176,11 @@ export function columnWorking(input: ColumnWorkingInput): ColumnWorking {
       for (const c of lighterList.slice(0, shown)) {
         if (!input.allowHeavierAbove && c.weightPlf < minWeightPlf) {
           lighter.push({ shape: c.label, weight_plf: c.weightPlf, ratio: null, failsAt: null, reason: `lighter than the tier above (${minFrom}); a tier is never lighter than the one above it (common practice)` });
+          continue;
+        }
+        const lcOverR = slendernessE2(c, longestIn);
+        if (lcOverR > LC_OVER_R_PREFERRED_MAX) {
+          lighter.push({ shape: c.label, weight_plf: c.weightPlf, ratio: null, failsAt: input.lengths[longest].level, reason: `Lc/r = ${lcOverR.toFixed(0)} > ${LC_OVER_R_PREFERRED_MAX} below ${input.lengths[longest].level} (AISC 360-16 E2 User Note, taken as a limit when sizing)` });
           continue;
         }
         let sw = aboveKip;
@@ -207,7 +216,8 @@ export function columnWorking(input: ColumnWorkingInput): ColumnWorking {
       lengths,
       ratio: worst?.ratio ?? null,
       governingLevel: worst?.level ?? null,
-      passes: lengths.length > 0 && lengths.every((l) => l.passes),
+      // A sized shape over Lc/r 200 is the design's report that nothing fits within it; a locked one passes on strength.
+      passes: lengths.length > 0 && lengths.every((l) => l.passes) && (t?.locked === true || !k || slendernessE2(k, longestIn) <= LC_OVER_R_PREFERRED_MAX),
       lighter,
     });
   }

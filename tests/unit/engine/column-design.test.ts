@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { designColumn, columnCandidates, type ColumnDesignInput } from '../../../shared/engine/sizing/column-design';
+import { designColumn, columnCandidates, slendernessE2, LC_OVER_R_PREFERRED_MAX, type ColumnDesignInput } from '../../../shared/engine/sizing/column-design';
 import { assignTiers } from '../../../shared/engine/sizing/column-tiers';
 import { compressionConstantsFor, compressionStrengthE1 } from '../../../shared/engine/design/aisc360/chapter-e/e1';
 import { loadCombinations } from '../../../shared/engine/loads/combinations';
@@ -77,12 +77,19 @@ describe('column sizing', () => {
         let minWeight = 0;
         for (const t of r.tiers) {
           const indices = input.lengths.map((l, i) => (l.tier === t.tier ? i : -1)).filter((i) => i >= 0);
+          // Lc/r ≤ 200 over the tier's longest length (AISC 360-16 E2 User Note, taken as a limit).
+          const longestIn = Math.max(...indices.map((i) => input.lengths[i].Lc_ft * 12));
+          const slenderOk = (label: string) => {
+            const k = compressionConstantsFor(label, 50)!;
+            return longestIn / Math.min(k.rxIn, k.ryIn) <= 200;
+          };
           if (t.passes) {
             expect(bruteForcePasses(input, t.shape!, indices, above)).toBe(true);
+            expect(slenderOk(t.shape!)).toBe(true);
             for (const c of candidates) {
               if (c.weightPlf >= t.weight_plf) break;
               if (c.weightPlf < minWeight) continue;
-              expect(bruteForcePasses(input, c.label, indices, above), `${c.label} lighter than ${t.shape}`).toBe(false);
+              expect(bruteForcePasses(input, c.label, indices, above) && slenderOk(c.label), `${c.label} lighter than ${t.shape}`).toBe(false);
             }
           }
           expect(t.weight_plf).toBeGreaterThanOrEqual(minWeight); // common practice: never heavier above than below
@@ -94,6 +101,40 @@ describe('column sizing', () => {
       }),
       { numRuns: 120 },
     );
+  });
+});
+
+describe('column slenderness, AISC 360-16 E2 User Note (Lc/r preferably not over 200, taken as a limit when sizing)', () => {
+  // ry: W10X12 0.785 in, W10X15 0.810 in, W10X17 0.845 in, W12X14 0.753 in, W12X16 0.773 in,
+  // W12X19 0.822 in, W10X112 2.68 in (AISC Shapes Database v15.0).
+  const light = (Lc_ft: number) => [{ level: 'L2', Lc_ft, tier: 1, D_kip: 5, L_kip: 5, Lr_kip: 0, S_kip: 0 }];
+
+  it('when a lightly loaded 14 ft column is sized, then the lightest shape within Lc/r 200 is chosen: W10X17 (168/0.845 = 198.8), not W10X12 (214)', () => {
+    expect(slendernessE2(compressionConstantsFor('W10X12', 50)!, 168)).toBeCloseTo(168 / 0.785, 6); // 214.0
+    expect(slendernessE2(compressionConstantsFor('W10X17', 50)!, 168)).toBeCloseTo(198.8, 1);
+    const r = designColumn({ method: 'LRFD', Fy_ksi: 50, series: SERIES, lengths: light(14) });
+    expect(r.tiers[0].shape).toBe('W10X17');
+    expect(r.tiers[0].passes).toBe(true);
+    expect(r.tiers[0].LcOverR!).toBeCloseTo(198.8, 1);
+    // The lighter ones carry 1.2(5) + 1.6(5) = 14 kip easily; they are left out for Lc/r alone.
+    expect(bruteForcePasses({ method: 'LRFD', Fy_ksi: 50, series: SERIES, lengths: light(14) }, 'W10X12', [0], 0)).toBe(true);
+    // At 12 ft, W10X12 is within 200 (144/0.785 = 183.4) and is chosen.
+    expect(designColumn({ method: 'LRFD', Fy_ksi: 50, series: SERIES, lengths: light(12) }).tiers[0].shape).toBe('W10X12');
+  });
+
+  it('when a size over Lc/r 200 is locked, then it is checked on strength and passes, and the scheme warns of its Lc/r', () => {
+    const r = designColumn({ method: 'LRFD', Fy_ksi: 50, series: SERIES, lengths: light(14), locked: new Map([[1, 'W10X12']]) });
+    expect(r.tiers[0].shape).toBe('W10X12');
+    expect(r.tiers[0].passes).toBe(true);
+    expect(r.tiers[0].LcOverR!).toBeCloseTo(214.0, 1);
+    expect(r.tiers[0].LcOverR!).toBeGreaterThan(LC_OVER_R_PREFERRED_MAX);
+  });
+
+  it('when no allowed shape is within Lc/r 200 (W10 only, 45 ft: W10X112 gives 540/2.68 = 201.5), then the tier fails naming the limit and the lightest shape that carries the load', () => {
+    const r = designColumn({ method: 'LRFD', Fy_ksi: 50, series: ['W10'], lengths: light(45) });
+    expect(r.passes).toBe(false);
+    expect(r.tiers[0].failure).toMatch(/^no W10 shape has Lc\/r ≤ 200 over 45\.0 ft \(AISC 360-16 E2 User Note, taken as a limit\); W10X\d+ carries the load at Lc\/r \d+$/);
+    expect(bruteForcePasses({ method: 'LRFD', Fy_ksi: 50, series: ['W10'], lengths: light(45) }, r.tiers[0].shape!, [0], 0)).toBe(true);
   });
 });
 

@@ -18,6 +18,21 @@ function workingInputOf(input: ColumnDesignInput, lighterShown = 4): ColumnWorki
 }
 
 describe('column working (the column sheet)', () => {
+  it('when lighter shapes are left out for Lc/r over 200, then the sheet lists each with its Lc/r and the E2 User Note', () => {
+    // 14 ft = 168 in; ry W10X15 0.810, W12X16 0.773, W12X14 0.753, W10X12 0.785 in (AISC Shapes Database v15.0).
+    const input: ColumnDesignInput = { method: 'LRFD', Fy_ksi: 50, series: ['W14', 'W12', 'W10'], lengths: [{ level: 'L2', Lc_ft: 14, tier: 1, D_kip: 5, L_kip: 5, Lr_kip: 0, S_kip: 0 }] };
+    const w = columnWorking(workingInputOf(input));
+    expect(w.tiers[0].shape).toBe('W10X17');
+    expect(w.tiers[0].passes).toBe(true);
+    expect(w.tiers[0].lighter.map((l) => l.shape)).toEqual(['W12X16', 'W10X15', 'W12X14', 'W10X12']);
+    expect(w.tiers[0].lighter.map((l) => l.reason)).toEqual([
+      'Lc/r = 217 > 200 below L2 (AISC 360-16 E2 User Note, taken as a limit when sizing)', // 168/0.773 = 217.3
+      'Lc/r = 207 > 200 below L2 (AISC 360-16 E2 User Note, taken as a limit when sizing)', // 168/0.810 = 207.4
+      'Lc/r = 223 > 200 below L2 (AISC 360-16 E2 User Note, taken as a limit when sizing)', // 168/0.753 = 223.1
+      'Lc/r = 214 > 200 below L2 (AISC 360-16 E2 User Note, taken as a limit when sizing)', // 168/0.785 = 214.0
+    ]);
+  });
+
   it('when a W14X132 is 30 ft long about both axes, then Fe, Fcr and φcPn are those of the published example', () => {
     const w = columnWorking({
       method: 'LRFD', Fy_ksi: 50, series: ['W14'],

@@ -145,6 +145,7 @@ describe('buildCalcBook on the two-bay fixture', () => {
     // assumptions say how, and no longer that columns are not sized.
     expect(basis).not.toContain('columns are not sized');
     expect(basis).toContain('Chapter E (E3, E7) with Lc = storey height and K = 1.0');
+    expect(basis).toContain('Lc/r ≤ 200 (the User Note of E2) is taken as a limit'); // AISC 360-16 E2 User Note
     expect(basis).toContain('Rp = 0.6 unless the stud position in the rib'); // AISC 360-16 I8.2a
     expect(basis).toContain('at least 25 % composite'); // common practice (design basis §6)
   });

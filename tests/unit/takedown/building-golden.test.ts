@@ -22,7 +22,10 @@ describe('benchmark building: output identical to before the performance work', 
     // Members and equilibrium: unchanged since 14b1741 (before the performance work).
     expect(sha256(JSON.stringify(design.members))).toBe('42dedd275bfe6a089d883f80112ef43a429fd0d0a4a55a5c614cc9c3a6aafedc');
     expect(sha256(JSON.stringify(design.equilibrium))).toBe('0f966c35809dd66789fc04eda59cec0ba5ea92d1510243e53f957bb756f53132');
-    // The whole document, re-recorded once when columns were sized by tier (issue 12 adds their sizes and totals.columnWeight_lb).
-    expect(sha256(JSON.stringify(design))).toBe('897deec204c3e182ec02c19e5184a437855e553f1c4301006adc8277759563db');
+    // The whole document, re-recorded when columns were sized by tier (issue 12 adds their sizes and
+    // totals.columnWeight_lb), and again when sizing took Lc/r ≤ 200 as a limit (AISC 360-16 E2 User
+    // Note): every size, ratio and total stayed the same; only a tier's "next lighter shape" changed
+    // where the one before it was over Lc/r 200.
+    expect(sha256(JSON.stringify(design))).toBe('b5409e100a447c312ac7c29bf4e6e5b94c5089856954c66a5d594ea0c0efd0cd');
   }, 120_000);
 });
