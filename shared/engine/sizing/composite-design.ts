@@ -31,6 +31,11 @@ import { MemberInputError } from './member-input.validation';
 import { buildMemberResult, describeGoverning } from './member-result.builder';
 import { availableFlexure, evaluateShape, type ShapeEvaluation } from './shape-evaluation';
 
+/**
+ * Project defaults: 3/4 in. studs (the largest I3.2c allows through deck); stud Fu 65 ksi (AWS
+ * D1.1 Type B headed studs, recalled from memory); at least 25 % composite and about 10 lb of
+ * steel a stud (common practice, design basis §6); one stud per rib.
+ */
 export const COMPOSITE_DEFAULTS = {
   studDiameter_in: 0.75,
   studFu_ksi: 65,
