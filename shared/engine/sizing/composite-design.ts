@@ -160,11 +160,10 @@ export function compositeSetup(input: MemberDesignInput): CompositeSetup {
   const concrete: CompositeConcrete = {
     bIn: b, acIn2, fcKsi: s.fc_ksi, slabTopToSteelIn: s.ribHeight_in + s.toppingThickness_in,
     compressibleDepthIn: orientation === 'perpendicular' ? s.toppingThickness_in : s.toppingThickness_in + s.ribHeight_in,
+    // Parallel ribs: a block deeper than the topping continues at the ribs' own width (i3.ts concreteBlock).
+    ...(orientation !== 'perpendicular' ? { ribs: { toppingIn: s.toppingThickness_in, widthFraction: s.ribAvgWidth_in / s.ribSpacing_in } } : {}),
   };
   if (orientation === 'parallel') {
-    // The parallel-rib block is idealised as the full width down to the rib depth: a wider
-    // block than the ribs give only when a > tc, then the lever arm is overstated slightly; the
-    // engine keeps a within tc + hr but checks that case below.
     notes.push('Ribs parallel: concrete below the top of the deck counted by the average rib width (AISC 360-16 I3.2c).');
   }
   if (s.ribHeight_in > 3) notes.push(`Rib height ${s.ribHeight_in} in exceeds 3 in (AISC 360-16 I3.2c(1)); outside the rules of I3.2c.`);
@@ -403,6 +402,7 @@ export function buildCompositeResult(st: CompositeSetup, e: CompositeEvaluation,
     Ec_ksi: st.ecKsi,
     Ac_in2: st.concrete.acIn2,
     a_in: f.aIn,
+    slabDepth_in: st.concrete.slabTopToSteelIn,
     C_kip: f.cKip,
     Cconcrete_kip: f.cConcreteKip,
     Csteel_kip: f.cSteelKip,

@@ -89,6 +89,8 @@ export interface CompositeResult {
   Ec_ksi: number;
   Ac_in2: number;
   a_in: number;
+  /** Top of the slab to the top of the steel, hr + tc (the drawn section), in. */
+  slabDepth_in: number;
   C_kip: number;
   Cconcrete_kip: number;
   Csteel_kip: number;

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { compositePlasticFlexure, lowerBoundInertia, type CompositeConcrete, type CompositeSteel } from '../../../shared/engine/design/aisc360/chapter-i/i3';
+import { compositePlasticFlexure, concreteBlock, lowerBoundInertia, type CompositeConcrete, type CompositeSteel } from '../../../shared/engine/design/aisc360/chapter-i/i3';
 import { concreteModulusKsi, effectiveWidthI3_1a, eqC_I3_1 } from '../../../shared/engine/design/aisc360/chapter-i/i3.equations';
 import { eqI8_1, rgRpI8_2a, spacingLimitsI8_2d, studAreaIn2 } from '../../../shared/engine/design/aisc360/chapter-i/i8.equations';
 import { camberIn, camberText } from '../../../shared/engine/design/serviceability/camber.serviceability';
@@ -150,6 +150,50 @@ describe('composite flexure properties (fast-check)', () => {
         expect(iLo).toBeGreaterThanOrEqual(shape.Ix_in4 - 1e-9);
       }),
       { numRuns: 400 },
+    );
+  });
+});
+
+describe('concrete block over parallel deck ribs (AISC 360-16 I3.2c)', () => {
+  // 3 in ribs parallel to the member, 3.25 in topping, ribs 6 in wide at 12 in (wr/s = 0.5),
+  // f'c = 4 ksi, b = 90 in. Full width down to tc: 0.85 × 4 × 90 × 3.25 = 994.5 kip; each inch of
+  // rib depth below it carries 0.85 × 4 × 90 × 0.5 = 153 kip. Worked by hand.
+  const ribbed: CompositeConcrete = {
+    bIn: 90, acIn2: 90 * 3.25 + 90 * 0.5 * 3, fcKsi: 4, slabTopToSteelIn: 6.25, compressibleDepthIn: 6.25,
+    ribs: { toppingIn: 3.25, widthFraction: 0.5 },
+  };
+  it('when C fits in the topping, then a = C / (0.85 f\'c b) as over a solid slab', () => {
+    const r = concreteBlock(ribbed, 612);
+    expect(r.aIn).toBeCloseTo(2.0, 6); // 612 / 306
+    expect(r.y2In).toBeCloseTo(5.25, 6); // 6.25 − 2.0 / 2
+  });
+  it('when C is more than the topping carries, then the block goes on into the ribs at their width and its centroid is lower', () => {
+    const r = concreteBlock(ribbed, 1200);
+    // 1200 − 994.5 = 205.5 kip in the ribs: 205.5 / 153 = 1.34314 in below the topping.
+    expect(r.aIn).toBeCloseTo(3.25 + 205.5 / 153, 6); // 4.59314 in
+    // Centroid from the top: (994.5 × 1.625 + 205.5 × (3.25 + 0.67157)) / 1200 = 2.01826 in.
+    expect(r.y2In).toBeCloseTo(6.25 - (994.5 * 1.625 + 205.5 * (3.25 + (205.5 / 153) / 2)) / 1200, 6);
+    expect(r.y2In).toBeCloseTo(4.2317, 3);
+    // A full-width block would put the centroid at 1200 / 306 / 2 = 1.9608 in from the top (Y2 = 4.2892 in): higher, so Mn too large.
+    expect(r.y2In).toBeLessThan(6.25 - 1200 / 306 / 2);
+  });
+  it('when C varies, then the ribbed block is never shallower and its Y2 never above a full-width block (fast-check)', () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 2, max: 5, noNaN: true }), fc.constantFrom(1.5, 2, 3), fc.double({ min: 0.3, max: 0.8, noNaN: true }), fc.double({ min: 0, max: 1, noNaN: true }),
+        (tc, hr, f, share) => {
+          const b = 96;
+          const cc: CompositeConcrete = { bIn: b, acIn2: b * tc + b * f * hr, fcKsi: 4, slabTopToSteelIn: hr + tc, compressibleDepthIn: hr + tc, ribs: { toppingIn: tc, widthFraction: f } };
+          const c = share * 0.85 * 4 * cc.acIn2;
+          const ribbedBlock = concreteBlock(cc, c);
+          const solid = concreteBlock({ ...cc, ribs: undefined }, c);
+          expect(ribbedBlock.aIn).toBeGreaterThanOrEqual(solid.aIn - 1e-9);
+          expect(ribbedBlock.aIn).toBeLessThanOrEqual(hr + tc + 1e-9);
+          expect(ribbedBlock.y2In).toBeLessThanOrEqual(solid.y2In + 1e-9);
+          expect(ribbedBlock.y2In).toBeGreaterThanOrEqual(-1e-9);
+        },
+      ),
+      { numRuns: 300 },
     );
   });
 });

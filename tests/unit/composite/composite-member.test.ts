@@ -113,3 +113,22 @@ describe('composite member design', () => {
     }
   });
 });
+
+describe('composite member design, deck ribs parallel to the member (AISC 360-16 I3.2c)', () => {
+  it('when full composite needs more concrete than the topping holds, then the block goes into the ribs at their average width', () => {
+    // W24X76 (AISC Shapes Database v15.0: A = 22.4 in²), Fy As = 1,120 kip. Ac = 90 × 3.25 + 90 × (6/12) × 3 = 427.5 in²;
+    // 0.85 f'c Ac = 0.85 × 3 × 427.5 = 1,090.1 kip governs C at full composite (I3.2d). The topping holds
+    // 0.85 × 3 × 90 × 3.25 = 745.9 kip; the other 344.3 kip fill the ribs, 344.3 / (0.85 × 3 × 90 × 0.5) = 3.0 in deep.
+    const c = designMember(input({ shape: 'W24X76' }, { deckOrientation: 'parallel', studs: 140 }));
+    const comp = c.composite!;
+    expect(comp.Cgoverns).toBe('concrete');
+    expect(comp.C_kip).toBeCloseTo(1090.125, 3);
+    expect(comp.a_in).toBeCloseTo(6.25, 6); // 3.25 + 3.0: the whole slab depth
+    expect(comp.slabDepth_in).toBe(6.25); // hr + tc
+    // Centroid from the top: (745.875 × 1.625 + 344.25 × (3.25 + 1.5)) / 1,090.125 = 2.61182 in; Y2 = 6.25 − 2.61182.
+    expect(comp.Y2_in).toBeCloseTo(6.25 - (745.875 * 1.625 + 344.25 * 4.75) / 1090.125, 6);
+    expect(comp.Y2_in).toBeCloseTo(3.638, 3);
+    // A full-width block (a = 1,090.125 / 229.5 = 4.75 in) would have given Y2 = 6.25 − 2.375 = 3.875 in: a longer lever arm.
+    expect(comp.Y2_in).toBeLessThan(3.875);
+  });
+});

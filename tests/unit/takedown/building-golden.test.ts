@@ -8,6 +8,7 @@ import { createHash } from 'node:crypto';
 import { regularBuildingPlan } from '../../bench/plan.bench';
 import { designScheme } from '../../../shared/engine/scheme/design-scheme.scheme';
 import { runTakedown } from '../../../shared/engine/takedown/gravity-takedown.takedown';
+import { buildDemoBuildingPlan } from '../../../server/db/demo-building.builder';
 
 const sha256 = (text: string) => createHash('sha256').update(text).digest('hex');
 
@@ -28,4 +29,19 @@ describe('benchmark building: output identical to before the performance work', 
     // where the one before it was over Lc/r 200.
     expect(sha256(JSON.stringify(design))).toBe('b5409e100a447c312ac7c29bf4e6e5b94c5089856954c66a5d594ea0c0efd0cd');
   }, 120_000);
+
+  // The demo schemes, designed composite (slab on 3 in. deck, studs, camber, the wet stage, one
+  // member kept bare steel): recorded when the parallel-rib concrete block was corrected
+  // (AISC 360-16 I3.2c; no demo member's block reaches below the topping, so no size changed).
+  const demoSchemes = [
+    { name: 'Scheme A — beams at about 10 ft', beamSpacing_ft: 10, expected: 'e1ab317e959109581b7958b23cb23df0097f04c17757a35055b5d99f90a20335' },
+    { name: 'Scheme B — beams at about 7.5 ft', beamSpacing_ft: 7.5, expected: '75ded178f8af79f0bb793780c63d5d522c4dcddcbd0705c222c5c9afac402165' },
+  ];
+  for (const { expected, ...scheme } of demoSchemes) {
+    it(`when the demo "${scheme.name}" is designed composite, then its JSON text hashes as recorded`, () => {
+      const design = designScheme(buildDemoBuildingPlan({ name: scheme.name, beamSpacing_ft: scheme.beamSpacing_ft }));
+      expect(design.members.filter((m) => m.studs !== null && m.studs !== undefined && m.studs > 0).length).toBeGreaterThan(100);
+      expect(sha256(JSON.stringify(design))).toBe(expected);
+    }, 60_000);
+  }
 });

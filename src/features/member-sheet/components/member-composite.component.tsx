@@ -11,7 +11,7 @@ export function CompositeSectionDrawing({ design }: { design: MemberDesignResult
   const c = design.composite!;
   const s = findWShape(design.shape);
   if (!s) return null;
-  const slabTotal = c.Y2_in + c.a_in / 2; // top of slab to top of steel
+  const slabTotal = c.slabDepth_in; // top of slab to top of steel (hr + tc)
   const W = 260;
   const scale = Math.min((W - 20) / c.effectiveWidth_in, 180 / (slabTotal + s.d_in));
   const cx = W / 2;

@@ -29,8 +29,13 @@ export interface CompositeConcrete {
   fcKsi: number;
   /** Depth of slab from its top to the top of the steel (hr + tc), in. */
   slabTopToSteelIn: number;
-  /** Depth of concrete that may be in compression, from the top (tc for perpendicular ribs), in. */
+  /** Depth of concrete that may be in compression, from the top (tc for perpendicular ribs, tc + hr for parallel), in. */
   compressibleDepthIn: number;
+  /**
+   * Parallel ribs (I3.2c): the slab is full width b only down to the topping's depth tc; below it
+   * the ribs are b × wr/s wide. Absent (perpendicular ribs, or a solid slab): full width throughout.
+   */
+  ribs?: { toppingIn: number; widthFraction: number };
 }
 
 export type PnaLocation = 'slab' | 'flange' | 'web';
@@ -56,6 +61,26 @@ export interface CompositeFlexure {
   percentComposite: number;
 }
 
+/**
+ * Depth a of the concrete compression block and Y2 (top of steel to the centroid of C). Over a
+ * full-width slab, a = C / (0.85 f'c b). With parallel ribs a block deeper than the topping goes
+ * on into the ribs at their own width b wr/s, so it is deeper and its centroid lower than a
+ * full-width block would give (taking it full width would overstate the lever arm and Mn).
+ */
+export function concreteBlock(concrete: CompositeConcrete, cKip: number): { aIn: number; y2In: number } {
+  const unitKip = 0.85 * concrete.fcKsi * concrete.bIn; // kip per inch of depth, full width
+  const ribs = concrete.ribs;
+  const fullWidthKip = ribs ? unitKip * ribs.toppingIn : Infinity;
+  if (!ribs || cKip <= fullWidthKip) {
+    const aIn = Math.min(concrete.compressibleDepthIn, cKip / unitKip);
+    return { aIn, y2In: concrete.slabTopToSteelIn - aIn / 2 };
+  }
+  const ribKip = cKip - fullWidthKip;
+  const ribDepthIn = Math.min(concrete.compressibleDepthIn - ribs.toppingIn, ribKip / (unitKip * ribs.widthFraction));
+  const centroidFromTopIn = (fullWidthKip * (ribs.toppingIn / 2) + ribKip * (ribs.toppingIn + ribDepthIn / 2)) / cKip;
+  return { aIn: ribs.toppingIn + ribDepthIn, y2In: concrete.slabTopToSteelIn - centroidFromTopIn };
+}
+
 /** Plastic Mn of the composite section for a given ΣQn (I3.2a, I3.2d). */
 export function compositePlasticFlexure(steel: CompositeSteel, concrete: CompositeConcrete, sumQnKip: number): CompositeFlexure {
   const { asIn2, dIn, bfIn, tfIn, twIn, fyKsi } = steel;
@@ -64,8 +89,7 @@ export function compositePlasticFlexure(steel: CompositeSteel, concrete: Composi
   const full = Math.min(cConcreteKip, cSteelKip);
   const cKip = Math.min(full, Math.max(0, sumQnKip));
   const governsC: CompositeFlexure['governsC'] = sumQnKip < full ? 'studs' : cConcreteKip <= cSteelKip ? 'concrete' : 'steel';
-  const aIn = Math.min(concrete.compressibleDepthIn, cKip / (0.85 * concrete.fcKsi * concrete.bIn));
-  const y2In = concrete.slabTopToSteelIn - aIn / 2;
+  const { aIn, y2In } = concreteBlock(concrete, cKip);
   // Steel compression force so that C + Cs = T = Fy As − Cs.
   const cSteelCompKip = Math.max(0, (cSteelKip - cKip) / 2);
   let pna: PnaLocation;
